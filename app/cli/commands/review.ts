@@ -1,0 +1,50 @@
+import { parseArgs } from 'node:util';
+import { EngineInputError } from '../../engine/diagnostics';
+import { run } from '../../review/run';
+import type { Results } from '../../review/results';
+import { EXIT, UsageError, type CliIo } from '../io';
+import { loadReviewFile } from '../reviewFile';
+import { summaryText } from '../summary';
+
+/** `flankfilm review FILE [--json] [--pdf OUT] [--csv OUT] [--map OUT.csv] [--p12 ID.p12] [--paper a4|letter]` */
+export async function reviewCommand(args: string[], io: CliIo): Promise<number> {
+  const { values, positionals } = parseArgs({
+    args,
+    allowPositionals: true,
+    options: {
+      json: { type: 'boolean', default: false },
+      pdf: { type: 'string' },
+      csv: { type: 'string' },
+      map: { type: 'string' },
+      p12: { type: 'string' },
+      paper: { type: 'string', default: 'a4' },
+    },
+  });
+  if (positionals.length !== 1) throw new UsageError('give exactly one review FILE');
+  const paper = values.paper;
+  if (paper !== 'a4' && paper !== 'letter') throw new UsageError('--paper is a4 or letter');
+  if (values.p12 && !values.pdf) throw new UsageError('--p12 signs the record: give --pdf OUT too');
+  const file = positionals[0] as string;
+  const loaded = await loadReviewFile(file);
+  if (!loaded.ok) {
+    io.err(`${loaded.message}\n`);
+    return EXIT.invalid;
+  }
+  let results: Results;
+  try {
+    results = run(loaded.review);
+  } catch (e) {
+    if (e instanceof EngineInputError) {
+      io.err(`${file}: ${e.field}: ${e.message}\n`);
+      return EXIT.invalid;
+    }
+    throw e;
+  }
+  if (values.json) io.out(`${JSON.stringify(results, null, 2)}\n`);
+  else io.out(summaryText(results));
+  if (values.pdf || values.csv || values.map) {
+    io.err('flankfilm review: --pdf, --csv and --map are not in this build yet (the record lands next).\n');
+    return EXIT.usage;
+  }
+  return EXIT.ok;
+}

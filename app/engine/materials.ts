@@ -1,0 +1,41 @@
+import type { JoulesPerKilogramKelvin, KilogramsPerCubicMetre, Pascals, ThermalContactCoefficient, WattsPerMetreKelvin } from './units';
+
+/** Flank material data the engine needs, in SI. */
+export interface Material {
+  readonly youngsModulus: Pascals;
+  readonly poissonRatio: number;
+  readonly thermalConductivity: WattsPerMetreKelvin;
+  readonly density: KilogramsPerCubicMetre;
+  readonly specificHeat: JoulesPerKilogramKelvin;
+  /** Structural factor XW of ISO/TS 6336-20 (flank treatment). */
+  readonly structuralFactorXW: number;
+}
+
+export const MATERIAL_PRESETS = ['steel-carburized', 'steel-through-hardened', 'steel-nitrided'] as const;
+export type MaterialPreset = (typeof MATERIAL_PRESETS)[number];
+
+/**
+ * Steel: E = 206 GPa and ν = 0.3 are the ISO 6336-1 values for steel. The thermal data
+ * (k = 50 W/(m·K), ρ = 7800 kg/m³, c = 470 J/(kg·K), so √(kρc) ≈ 13.5 N/(mm·s^0.5·K)) are
+ * typical handbook values for gear steels [memory], consistent with the ≈13.6 that
+ * ISO/TS 6336-20 uses for steel [memory]. XW per flank treatment from ISO/TS 6336-20 [memory]:
+ * carburized (average retained austenite) 1.0, through-hardened 1.0, nitrided 1.5.
+ */
+const STEEL = {
+  youngsModulus: 206e9 as Pascals,
+  poissonRatio: 0.3,
+  thermalConductivity: 50 as WattsPerMetreKelvin,
+  density: 7800 as KilogramsPerCubicMetre,
+  specificHeat: 470 as JoulesPerKilogramKelvin,
+};
+
+export const MATERIALS: Readonly<Record<MaterialPreset, Material>> = {
+  'steel-carburized': { ...STEEL, structuralFactorXW: 1.0 },
+  'steel-through-hardened': { ...STEEL, structuralFactorXW: 1.0 },
+  'steel-nitrided': { ...STEEL, structuralFactorXW: 1.5 },
+};
+
+/** Thermal contact coefficient B_M = √(k ρ c), W·s^0.5/(m²·K) (Blok 1937). */
+export function materialContactCoefficient(m: Material): ThermalContactCoefficient {
+  return Math.sqrt(m.thermalConductivity * m.density * m.specificHeat) as ThermalContactCoefficient;
+}

@@ -1,0 +1,49 @@
+import type { Caution, VerdictCode, VerdictFacts } from './types';
+
+const has = (f: VerdictFacts, ...ids: string[]) => ids.some((id) => f.components.includes(id));
+
+/**
+ * The cautions that go with every verdict. Each is always listed (standing); it is marked
+ * `triggered` when this review's inputs make it apply. The last one always applies.
+ */
+export function cautionsFor(f: VerdictFacts, code: VerdictCode): Caution[] {
+  const epInPlay = f.chemistry === 'extreme-pressure' || code !== 'aw-suffices';
+  const list: Array<[string, boolean, string]> = [
+    [
+      'yellow-metals',
+      has(f, 'bronze-bushing', 'brass-cage', 'yellow-metal') && epInPlay,
+      'Yellow metals: bronze or brass parts (bushings, cages, worm wheels) can be attacked by active-sulphur EP additives, more so when hot. Ask the oil supplier for a copper-corrosion result (ASTM D130) at the sump temperature, or choose an EP oil declared safe for yellow metals.',
+    ],
+    [
+      'friction-sensitive',
+      has(f, 'backstop', 'clutch'),
+      'Backstops, sprag or ratchet holdbacks and wet clutches depend on friction: EP and friction-modified oils can make them slip. Confirm with the maker of the backstop or clutch that the oil is approved for it.',
+    ],
+    [
+      'oxidation',
+      f.oilTemperature_C >= 80,
+      `Oxidation: as a rule of thumb an oil's life roughly halves for every 10 °C rise in sump temperature (common practice); at ${f.oilTemperature_C.toFixed(0)} °C shorten the oil-analysis interval or improve cooling.`,
+    ],
+    [
+      'pag-mixing',
+      f.baseOil.startsWith('pag') || f.otherOils.some((o) => o.baseOil.startsWith('pag')),
+      'PAG oils do not mix with mineral or PAO oils and can attack some seals and interior paints: drain and flush completely, and check seal and paint compatibility with the oil supplier.',
+    ],
+    [
+      'flushing',
+      f.otherOils.some((o) => o.chemistry !== f.chemistry || o.baseOil !== f.baseOil),
+      'Changing chemistry or base oil: drain hot, flush with the new oil, and check the seals; mixed additive systems can form deposits or lose their effect.',
+    ],
+    [
+      'food-contact',
+      has(f, 'food-contact'),
+      'Food-contact duty: use only an oil registered for incidental food contact (for example NSF H1) and follow the plant\'s hygiene rules.',
+    ],
+    [
+      'defer',
+      true,
+      'This review is an engineering aid, not an approval: follow the gearbox maker\'s lubricant list and instructions, local codes and regulations, and the judgement of a licensed engineer. Gear failures can injure people and damage plant.',
+    ],
+  ];
+  return list.map(([id, triggered, text]) => ({ id, text, kind: triggered ? 'triggered' : 'standing' }));
+}

@@ -1,0 +1,44 @@
+import { cautionsFor } from './cautions';
+import { RULES, type RuleOutcome } from './rules';
+import type { Reason, Verdict, VerdictCode, VerdictFacts, VerdictPolicy } from './types';
+
+/**
+ * The verdict for one load case with one oil:
+ * - `beyond-oil`: the FZG stage needed is above the EP floor, or the integral method fails even at it;
+ * - `ep-warranted`: the stage needed is above the anti-wear floor, or an escalation rule fires;
+ * - `aw-suffices`: otherwise.
+ * The oil's fit compares its chemistry, FZG stage and λ with what is needed; a boundary regime
+ * rules out an R&O oil (anti-wear chemistry at least), and a λ shortfall asks for a grade, not EP.
+ */
+export function decideVerdict(f: VerdictFacts, p: VerdictPolicy): Verdict {
+  const outcomes = RULES.map((r) => r(f, p)).filter((o): o is RuleOutcome => o !== null);
+  const beyond = outcomes.some((o) => o.beyondOil);
+  const ep = outcomes.some((o) => o.escalatesToEp);
+  const code: VerdictCode = beyond ? 'beyond-oil' : ep ? 'ep-warranted' : 'aw-suffices';
+  const reasons: Reason[] = outcomes.map((o) => o.reason);
+
+  const needsAw = outcomes.some((o) => o.needsAntiWear);
+  const chemistryOk =
+    code === 'aw-suffices' ? !(needsAw && f.chemistry === 'r-and-o') : code === 'ep-warranted' ? f.chemistry === 'extreme-pressure' : false;
+  const chemistryText =
+    code === 'beyond-oil'
+      ? 'No oil in scope gives the margin: change the design or the duty — lower load or speed, a cooler sump, smoother flanks (lower Ra), tip relief, or a flank treatment or material with a higher structural factor.'
+      : chemistryOk
+        ? `The oil's chemistry (${f.chemistry}) fits the need (${code === 'ep-warranted' ? 'EP' : needsAw ? 'anti-wear at least' : 'anti-wear or R&O'}).`
+        : `The oil's chemistry (${f.chemistry}) falls short: ${code === 'ep-warranted' ? 'EP chemistry is warranted' : 'at least anti-wear chemistry is needed in the boundary regime'}.`;
+  reasons.push({
+    rule: code === 'beyond-oil' ? 'verdict.beyond-oil' : 'oil.chemistry',
+    text: chemistryText,
+    threshold: code === 'beyond-oil' ? `EP floor FZG ${p.epOilFzgStage} (policy)` : 'chemistry against need',
+    source: 'common practice; DIN 51517-3 (CLP) and DIN 51524-2 (HLP) define the EP and AW oil classes',
+  });
+  const oilFit = code !== 'beyond-oil' && chemistryOk && !outcomes.some((o) => o.oilFallsShort) ? 'meets' : 'falls-short';
+  const lambdaShort = f.lambdaMin < p.lambdaTarget;
+  return {
+    code,
+    oilFit,
+    reasons,
+    cautions: cautionsFor(f, code),
+    gradeAdvice: lambdaShort ? `λmin ${f.lambdaMin.toFixed(2)} < ${p.lambdaTarget}: see the grade finder for the lowest ISO VG that meets it.` : null,
+  };
+}

@@ -1,0 +1,144 @@
+import type { Reason, VerdictFacts, VerdictPolicy } from './types';
+import type { FzgStageNeed } from '../mesh/scuffing';
+
+/**
+ * The verdict's rules, one small function each. A rule returns a Reason when it has something
+ * to say, else null. `fires` marks rules that escalate the chemistry the duty needs.
+ */
+export interface RuleOutcome {
+  readonly reason: Reason;
+  readonly escalatesToEp?: boolean;
+  readonly beyondOil?: boolean;
+  readonly needsAntiWear?: boolean;
+  readonly oilFallsShort?: boolean;
+}
+
+export type Rule = (f: VerdictFacts, p: VerdictPolicy) => RuleOutcome | null;
+
+const n2 = (x: number) => x.toFixed(2);
+const n0 = (x: number) => x.toFixed(0);
+const stageText = (s: FzgStageNeed) => (s === '>12' ? 'above 12' : String(s));
+const stageNum = (s: FzgStageNeed | number) => (s === '>12' ? 13 : s);
+const FLOOR_SOURCE = 'policy floors: anti-wear oil DIN 51524-2 (HLP) FZG ≥ 10; EP oil DIN 51517-3 (CLP) FZG ≥ 12';
+
+/** The FZG stage the flash-temperature method needs, against the AW and EP floors. */
+export const requiredStageRule: Rule = (f, p) => {
+  const need = stageNum(f.requiredStage);
+  const beyond = need > p.epOilFzgStage;
+  const ep = !beyond && need > p.antiWearOilFzgStage;
+  const where = beyond
+    ? `above the EP floor (${p.epOilFzgStage}): no oil in scope gives SB ≥ ${p.scuffingSafetyMin}`
+    : ep
+      ? `above the anti-wear floor (${p.antiWearOilFzgStage}) and within the EP floor (${p.epOilFzgStage})`
+      : `within the anti-wear floor (${p.antiWearOilFzgStage})`;
+  return {
+    reason: {
+      rule: 'scuffing.required-stage',
+      text: `θB,max = ${n0(f.maxContactTemperature_C)} °C at ${n0(f.oilTemperature_C)} °C oil: SB ≥ ${p.scuffingSafetyMin} needs an oil of FZG A/8.3/90 failure stage ${stageText(f.requiredStage)}, ${where}.`,
+      threshold: `SB,min = ${p.scuffingSafetyMin} (policy); ${FLOOR_SOURCE}`,
+      source: 'ISO/TS 6336-20 flash temperature method; θS = 80 + (0.85 + 1.4 XW) XL S² °C [memory]',
+    },
+    escalatesToEp: ep,
+    beyondOil: beyond,
+  };
+};
+
+/** The integral temperature method, as a second opinion that can escalate or rule out oil. */
+export const integralRule: Rule = (f, p) => {
+  const atFloor = f.integralSafetyAtEpFloor;
+  if (atFloor !== null && atFloor < p.integralSafetyMin) {
+    return {
+      reason: {
+        rule: 'scuffing.integral-beyond-ep-floor',
+        text: `By the integral temperature method even an oil at the EP floor (stage ${p.epOilFzgStage}) gives SintS = ${n2(atFloor)} < ${p.integralSafetyMin}.`,
+        threshold: `SintS,min = ${p.integralSafetyMin} (policy)`,
+        source: 'ISO/TS 6336-21 integral temperature method [memory]',
+      },
+      beyondOil: true,
+    };
+  }
+  const need = stageNum(f.requiredStageIntegral);
+  if (need > p.antiWearOilFzgStage) {
+    return {
+      reason: {
+        rule: 'scuffing.integral-required-stage',
+        text: `By the integral temperature method SintS ≥ ${p.integralSafetyMin} needs FZG stage ${stageText(f.requiredStageIntegral)}, above the anti-wear floor (${p.antiWearOilFzgStage}).`,
+        threshold: `SintS,min = ${p.integralSafetyMin} (policy); ${FLOOR_SOURCE}`,
+        source: 'ISO/TS 6336-21 integral temperature method [memory]',
+      },
+      escalatesToEp: true,
+    };
+  }
+  return {
+    reason: {
+      rule: 'scuffing.integral-ok',
+      text: `By the integral temperature method SintS ≥ ${p.integralSafetyMin} needs FZG stage ${stageText(f.requiredStageIntegral)}, within the anti-wear floor.`,
+      threshold: `SintS,min = ${p.integralSafetyMin} (policy)`,
+      source: 'ISO/TS 6336-21 integral temperature method [memory]',
+    },
+  };
+};
+
+/** Shock duty in the boundary regime: asperities meet under impact loads; EP films are the usual answer. */
+export const shockInBoundaryRule: Rule = (f, p) => {
+  if (!(f.applicationFactor >= p.shockApplicationFactor && f.regime === 'boundary')) return null;
+  return {
+    reason: {
+      rule: 'escalation.shock-boundary',
+      text: `Shock duty (KA = ${n2(f.applicationFactor)} ≥ ${p.shockApplicationFactor}) with boundary lubrication (λmin = ${n2(f.lambdaMin)}): EP chemistry is warranted whatever the scuffing margin.`,
+      threshold: `KA ≥ ${p.shockApplicationFactor} (policy) and λ < 1`,
+      source: 'common practice (heavy-duty and shock-loaded enclosed gearing is specified with EP oils)',
+    },
+    escalatesToEp: true,
+  };
+};
+
+/** The regime in words; boundary alone makes an R&O oil insufficient, not EP necessary. */
+export const regimeRule: Rule = (f) => {
+  const boundary = f.regime === 'boundary';
+  return {
+    reason: {
+      rule: 'film.regime',
+      text: boundary
+        ? `Boundary lubrication (λmin = ${n2(f.lambdaMin)}): film ${f.filmMin_um.toFixed(3)} µm against composite roughness ${f.compositeRoughness_um.toFixed(3)} µm. An anti-wear tribofilm (≈0.05–0.15 µm) must carry the asperity contacts: at least anti-wear chemistry is needed; this alone does not call for EP.`
+        : `${f.regime === 'mixed' ? 'Mixed' : 'Full-film'} lubrication (λmin = ${n2(f.lambdaMin)}): film ${f.filmMin_um.toFixed(3)} µm against composite roughness ${f.compositeRoughness_um.toFixed(3)} µm.`,
+      threshold: 'λ < 1 boundary, 1 ≤ λ < 3 mixed, λ ≥ 3 full film (policy; common practice)',
+      source: 'Dowson–Higginson / Pan–Hamrock EHL film; λ with Rq = 1.25 Ra (common practice)',
+    },
+    needsAntiWear: boundary,
+  };
+};
+
+/** λ against the policy target: a viscosity matter, answered with a grade, not with chemistry. */
+export const lambdaTargetRule: Rule = (f, p) => {
+  const ok = f.lambdaMin >= p.lambdaTarget;
+  return {
+    reason: {
+      rule: 'film.lambda-target',
+      text: ok
+        ? `λmin = ${n2(f.lambdaMin)} meets the target ${p.lambdaTarget}.`
+        : `λmin = ${n2(f.lambdaMin)} is below the target ${p.lambdaTarget}: a heavier grade (see the grade finder), a cooler sump or smoother flanks would raise it; EP chemistry does not.`,
+      threshold: `λ target = ${p.lambdaTarget} (policy)`,
+      source: 'policy; common practice',
+    },
+    oilFallsShort: !ok,
+  };
+};
+
+/** The oil's own FZG stage against what the duty needs. */
+export const oilStageRule: Rule = (f) => {
+  const need = Math.max(stageNum(f.requiredStage), stageNum(f.requiredStageIntegral));
+  const has = stageNum(f.oilFzgStage);
+  const ok = has >= need;
+  return {
+    reason: {
+      rule: 'oil.fzg-stage',
+      text: `This oil's FZG A/8.3/90 failure stage is ${f.oilFzgStage === '>12' ? 'above 12' : f.oilFzgStage}${ok ? ', enough' : ', short of'} the stage ${need > 12 ? 'above 12' : need} the duty needs (SB = ${f.scuffingSafety === null ? '—' : n2(f.scuffingSafety)}, SintS = ${f.integralSafety === null ? '—' : n2(f.integralSafety)}, scuffing probability ${(100 * f.scuffingProbability).toFixed(1)} %).`,
+      threshold: 'oil stage ≥ required stage',
+      source: 'ISO 14635-1 (FZG A/8.3/90); ISO/TS 6336-20 and -21',
+    },
+    oilFallsShort: !ok,
+  };
+};
+
+export const RULES: readonly Rule[] = [requiredStageRule, integralRule, shockInBoundaryRule, regimeRule, lambdaTargetRule, oilStageRule];

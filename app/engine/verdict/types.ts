@@ -1,0 +1,70 @@
+import type { Regime } from '../film/regime';
+import type { Chemistry, BaseOil } from '../oil/types';
+import type { FzgStageNeed } from '../mesh/scuffing';
+
+export type VerdictCode = 'aw-suffices' | 'ep-warranted' | 'beyond-oil';
+export type OilFit = 'meets' | 'falls-short';
+
+/** What the verdict rules look at, for one load case with one oil (display units where stated). */
+export interface VerdictFacts {
+  readonly caseName: string;
+  readonly oilName: string;
+  readonly chemistry: Chemistry;
+  readonly baseOil: BaseOil;
+  readonly oilFzgStage: number | '>12';
+  readonly oilIsoVG: number | null;
+  readonly applicationFactor: number;
+  readonly oilTemperature_C: number;
+  readonly pitchLineVelocity_mps: number;
+  readonly maxHertzStress_MPa: number;
+  readonly lambdaMin: number;
+  readonly lambdaGFMin: number;
+  readonly regime: Regime;
+  readonly compositeRoughness_um: number;
+  readonly filmMin_um: number;
+  readonly maxContactTemperature_C: number;
+  readonly scuffingTemperature_C: number;
+  readonly scuffingTemperatureAtLeast: boolean;
+  readonly scuffingSafety: number | null;
+  readonly integralSafety: number | null;
+  readonly integralSafetyAtEpFloor: number | null;
+  readonly requiredStage: FzgStageNeed;
+  readonly requiredStageIntegral: FzgStageNeed;
+  readonly scuffingProbability: number;
+  /** Parts in the oil circuit (review gearPair.components). */
+  readonly components: readonly string[];
+  /** Other oils of the review, for change-of-oil cautions. */
+  readonly otherOils: ReadonlyArray<{ readonly chemistry: Chemistry; readonly baseOil: BaseOil; readonly role: string }>;
+  readonly role: string;
+}
+
+export interface VerdictPolicy {
+  readonly lambdaTarget: number;
+  readonly scuffingSafetyMin: number;
+  readonly integralSafetyMin: number;
+  readonly antiWearOilFzgStage: number;
+  readonly epOilFzgStage: number;
+  readonly shockApplicationFactor: number;
+}
+
+export interface Reason {
+  readonly rule: string;
+  readonly text: string;
+  readonly threshold: string;
+  readonly source: string;
+}
+
+export interface Caution {
+  readonly id: string;
+  readonly text: string;
+  readonly kind: 'standing' | 'triggered';
+}
+
+export interface Verdict {
+  readonly code: VerdictCode;
+  readonly oilFit: OilFit;
+  readonly reasons: Reason[];
+  readonly cautions: Caution[];
+  /** The grade advice when λ falls short (a viscosity matter, not a chemistry one). */
+  readonly gradeAdvice: string | null;
+}

@@ -1,0 +1,149 @@
+import type { CaseAnalysis } from '../engine/mesh/analyseCase';
+import { REGIMES } from '../engine/mesh/film';
+import { decideVerdict } from '../engine/verdict/decide';
+import type { VerdictFacts } from '../engine/verdict/types';
+import { kelvinToCelsius, toMegapascals, toMicrometres, toMillimetres, type Kelvin, type Metres, type Pascals } from '../engine/units';
+import type { ReviewOil } from './oils';
+import type { CaseResult, PointResult } from './results';
+import type { LoadCase, Review } from './schema';
+
+const orNull = (x: number): number | null => (Number.isFinite(x) ? x : null);
+
+function pointAt(a: CaseAnalysis, i: number): PointResult {
+  const m = a.mechanics;
+  const { A, E } = a.input.geometry.points;
+  const s = m.position[i] as number;
+  const film = a.film;
+  const heat = a.heat;
+  return {
+    position_mm: toMillimetres(s as Metres),
+    pathFraction: (s - A) / (E - A),
+    loadShare: m.loadShare[i] as number,
+    hertzStress_MPa: toMegapascals(m.hertzPressure[i] as Pascals),
+    slidingVelocity_mps: m.slidingVelocity[i] as number,
+    sumVelocity_mps: m.sumVelocity[i] as number,
+    slideToRoll: m.slideToRoll[i] as number,
+    filmThicknessMin_um: film ? toMicrometres(film.hMin[i] as Metres) : null,
+    filmThicknessCentral_um: film ? toMicrometres(film.hCentral[i] as Metres) : null,
+    lambda: film ? (film.lambda[i] as number) : null,
+    lambdaGF: film ? (film.lambdaGF[i] as number) : null,
+    regime: film ? (REGIMES[film.regime[i] as number] ?? null) : null,
+    flashTemperature_K: heat ? (heat.flash[i] as number) : null,
+    contactTemperature_C: heat ? kelvinToCelsius(heat.contact[i] as Kelvin) : null,
+  };
+}
+
+/** The facts the verdict rules read, from one analysis. */
+function verdictFacts(review: Review, lc: LoadCase, oil: ReviewOil, all: readonly ReviewOil[], a: CaseAnalysis): VerdictFacts {
+  const film = a.film as NonNullable<CaseAnalysis['film']>;
+  const heat = a.heat as NonNullable<CaseAnalysis['heat']>;
+  const sc = a.scuffing as NonNullable<CaseAnalysis['scuffing']>;
+  let maxP = 0;
+  for (const p of a.mechanics.hertzPressure) if (p > maxP) maxP = p;
+  return {
+    caseName: lc.name,
+    oilName: oil.name,
+    chemistry: oil.chemistry,
+    baseOil: oil.baseOil,
+    oilFzgStage: oil.fzgFailureStage,
+    oilIsoVG: oil.model.isoVG,
+    applicationFactor: lc.applicationFactor,
+    oilTemperature_C: lc.oilTemperature_C,
+    pitchLineVelocity_mps: a.mechanics.pitchLineVelocity,
+    maxHertzStress_MPa: maxP / 1e6,
+    lambdaMin: film.lambdaMin,
+    lambdaGFMin: film.lambdaGFMin,
+    regime: film.caseRegime,
+    compositeRoughness_um: toMicrometres(film.compositeRoughness),
+    filmMin_um: toMicrometres(film.hMin[film.lambdaMinIndex] as Metres),
+    maxContactTemperature_C: kelvinToCelsius(heat.contactMax),
+    scuffingTemperature_C: kelvinToCelsius(sc.scuffingTemperature),
+    scuffingTemperatureAtLeast: sc.scuffingTemperatureAtLeast,
+    scuffingSafety: sc.safety,
+    integralSafety: sc.integralSafety,
+    integralSafetyAtEpFloor: sc.integralSafetyAtEpFloor,
+    requiredStage: sc.requiredStage,
+    requiredStageIntegral: sc.requiredStageIntegral,
+    scuffingProbability: sc.probability,
+    components: review.gearPair.components,
+    otherOils: all.filter((o) => o !== oil).map((o) => ({ chemistry: o.chemistry, baseOil: o.baseOil, role: o.role })),
+    role: oil.role,
+  };
+}
+
+/** One analysis as the results JSON shows it (display units). */
+export function caseToResult(review: Review, lc: LoadCase, oil: ReviewOil | null, all: readonly ReviewOil[], a: CaseAnalysis): CaseResult {
+  const m = a.mechanics;
+  const path: PointResult[] = [];
+  let maxI = 0;
+  for (let i = 0; i < m.n; i++) {
+    path.push(pointAt(a, i));
+    if ((m.hertzPressure[i] as number) > (m.hertzPressure[maxI] as number)) maxI = i;
+  }
+  const film = a.film;
+  const heat = a.heat;
+  const sc = a.scuffing;
+  const st = a.oilAtFilmTemperature;
+  const verdict = oil && film ? decideVerdict(verdictFacts(review, lc, oil, all, a), review.policy) : null;
+  return {
+    loadCase: lc.name,
+    oil: oil?.name ?? null,
+    pinionSpeed_rpm: lc.pinionSpeed_rpm,
+    pinionTorque_Nm: a.input.duty.pinionTorque,
+    applicationFactor: lc.applicationFactor,
+    oilTemperature_C: lc.oilTemperature_C,
+    pitchLineVelocity_mps: m.pitchLineVelocity,
+    nominalContactStress_MPa: toMegapascals(m.nominal.sigmaH),
+    nominalContactStressBasic_MPa: toMegapascals(m.nominal.sigmaH0),
+    maxHertzStress_MPa: toMegapascals(m.hertzPressure[maxI] as Pascals),
+    maxHertzStressPosition_mm: toMillimetres(m.position[maxI] as Metres),
+    pitchHertzStress_MPa: toMegapascals(m.pitchHertzWholeLoad),
+    pitch: path[m.pitchIndex] as PointResult,
+    path,
+    oilAtTemperature: st
+      ? {
+          temperature_C: kelvinToCelsius(st.temperature),
+          viscosity_mm2s: st.kinematicViscosity * 1e6,
+          dynamicViscosity_mPas: st.dynamicViscosity * 1e3,
+          density_kgm3: st.density,
+          pressureViscosity_1perGPa: st.pressureViscosity * 1e9,
+          temperatureViscosity_1perK: st.temperatureViscosity,
+        }
+      : null,
+    lambdaMin: film ? film.lambdaMin : null,
+    lambdaMinPosition_mm: film ? toMillimetres(m.position[film.lambdaMinIndex] as Metres) : null,
+    regime: film ? film.caseRegime : null,
+    filmFormula: film ? film.formula : null,
+    thermalFilmFactor: film ? (film.thermalFactor[film.lambdaMinIndex] as number) : null,
+    filmNote: film ? film.note : null,
+    frictionCoefficient: heat ? heat.friction : null,
+    frictionSource: heat ? heat.frictionSource : null,
+    bulkTemperature_C: heat ? kelvinToCelsius(heat.bulkTemperature) : null,
+    maxFlashTemperature_K: heat ? heat.flashMax : null,
+    maxContactTemperature_C: heat ? kelvinToCelsius(heat.contactMax) : null,
+    maxContactTemperaturePosition_mm: heat ? toMillimetres(m.position[heat.contactMaxIndex] as Metres) : null,
+    scuffingTemperature_C: sc ? kelvinToCelsius(sc.scuffingTemperature) : null,
+    scuffingTemperatureAtLeast: sc ? sc.scuffingTemperatureAtLeast : false,
+    scuffingSafety: sc ? sc.safety : null,
+    integralTemperature_C: sc ? kelvinToCelsius(sc.integralTemperature) : null,
+    integralScuffingTemperature_C: sc ? kelvinToCelsius(sc.integralScuffingTemperature) : null,
+    integralSafety: sc ? sc.integralSafety : null,
+    requiredFzgStage: sc ? sc.requiredStage : null,
+    requiredFzgStageIntegral: sc ? sc.requiredStageIntegral : null,
+    scuffingProbability: sc ? orNull(sc.probability) : null,
+    lambdaGFMin: film ? film.lambdaGFMin : null,
+    micropittingAdvisory: film ? micropittingAdvisory(film.lambdaGFMin) : null,
+    verdict: verdict ? { code: verdict.code, oilFit: verdict.oilFit, reasons: verdict.reasons, cautions: verdict.cautions } : null,
+    warnings: a.warnings,
+  };
+}
+
+/**
+ * ISO/TS 6336-22 compares λGF,min with a permissible λGFP from the oil's micropitting test,
+ * which a data sheet rarely gives; without it we screen at λGF,min < 1 (common practice).
+ */
+function micropittingAdvisory(lambdaGFMin: number): string {
+  return lambdaGFMin < 1
+    ? `λGF,min = ${lambdaGFMin.toFixed(2)} < 1: micropitting is possible; ask for the oil's micropitting test class and check λGF,min against λGFP by ISO/TS 6336-22 (screen: common practice).`
+    : `λGF,min = ${lambdaGFMin.toFixed(2)} ≥ 1: no micropitting flag by the screen λGF,min < 1 (common practice; ISO/TS 6336-22 needs the oil's λGFP for a safety factor).`;
+}

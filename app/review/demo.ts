@@ -1,0 +1,8 @@
+import crusher from '../../assets/demo/harrow-creek-crusher-hs-pair.flankfilm.json';
+import conveyor from '../../assets/demo/harrow-creek-conveyor-spur-pair.flankfilm.json';
+
+/** The invented demo scenario (see NAMES.md: Harrow Creek aggregate plant), keyed by file name. */
+export const DEMO_REVIEWS: Readonly<Record<string, unknown>> = {
+  'harrow-creek-crusher-hs-pair.flankfilm.json': crusher,
+  'harrow-creek-conveyor-spur-pair.flankfilm.json': conveyor,
+};

@@ -1,0 +1,72 @@
+import type { GearPairGeometry } from '../engine/geometry/types';
+import type { Material } from '../engine/materials';
+import { analyseCase } from '../engine/mesh/analyseCase';
+import type { EnginePolicy } from '../engine/mesh/types';
+import { ISO_VG_GRADES } from '../engine/oil/isoGrade';
+import { makeOilModel } from '../engine/oil/oilModel';
+import { kv100ForViscosityIndex } from '../engine/oil/viscosityIndex';
+import { celsiusToKelvin, centistokes, micrometres, type KilogramsPerCubicMetre, type SquareMetresPerSecond } from '../engine/units';
+import { engineDutyOf } from './engineInputs';
+import type { ReviewOil } from './oils';
+import type { GradeFinderResult, GradeFinderRow } from './results';
+import type { Review } from './schema';
+
+/** The grades worth offering for enclosed industrial gears (ISO 3448). */
+const CANDIDATE_GRADES = ISO_VG_GRADES.filter((g) => g >= 32 && g <= 1500);
+/** Path points for the finder: A…E are always sampled exactly, so λ at A (where it is least) is exact. */
+const FINDER_PATH_POINTS = 41;
+
+/**
+ * For each oil's base oil and VI: λmin per ISO VG over every load case, each at its own oil
+ * temperature and at both ends of policy.temperatureRange_C, and the lowest grade that meets the
+ * λ target everywhere. A grade's KV100 follows from its KV40 (the grade mid-point) and the oil's VI
+ * (ASTM D2270 inverted); α takes the base oil's default.
+ */
+export function gradeFinder(review: Review, geometry: GearPairGeometry, pinion: Material, wheel: Material, policy: EnginePolicy, oils: readonly ReviewOil[]): GradeFinderResult[] {
+  const finderPolicy: EnginePolicy = { ...policy, pathPoints: FINDER_PATH_POINTS };
+  const tHigh = review.policy.temperatureRange_C[1];
+  return oils.map((oil) => {
+    const vi = oil.model.viscosityIndex.value;
+    const table: GradeFinderRow[] = [];
+    for (const vg of CANDIDATE_GRADES) {
+      let kv100: SquareMetresPerSecond;
+      try {
+        kv100 = kv100ForViscosityIndex(centistokes(vg), vi, `${oil.field}.viscosityIndex`);
+      } catch {
+        continue; // VI not reachable at this grade within D2270's range
+      }
+      const model = makeOilModel({ kv40: centistokes(vg), kv100, density15: oil.source.density15_kgm3 as KilogramsPerCubicMetre, baseOil: oil.baseOil }, oil.field);
+      const gradeOil = { ...oil, model };
+      let lambdaMin = Infinity;
+      review.loadCases.forEach((lc, li) => {
+        // The film thins as the oil warms, so the case's own temperature and the top of the range govern.
+        for (const t of lc.oilTemperature_C >= tHigh ? [lc.oilTemperature_C] : [lc.oilTemperature_C, tHigh]) {
+          const duty = { ...engineDutyOf(review, li), oilTemperature: celsiusToKelvin(t) };
+          const a = analyseCase({
+            geometry,
+            pinion,
+            wheel,
+            roughnessRa1: micrometres(review.gearPair.pinion.roughnessRa_um),
+            roughnessRa2: micrometres(review.gearPair.wheel.roughnessRa_um),
+            duty,
+            oil: gradeOil,
+            policy: finderPolicy,
+            caseField: `loadCases[${li}]`,
+          });
+          if (a.film && a.film.lambdaMin < lambdaMin) lambdaMin = a.film.lambdaMin;
+        }
+      });
+      if (Number.isFinite(lambdaMin)) table.push({ isoVG: vg, lambdaMin });
+    }
+    const hit = table.find((r) => r.lambdaMin >= policy.lambdaTarget);
+    return {
+      oil: oil.name,
+      recommendedVG: hit?.isoVG ?? null,
+      currentVG: oil.model.isoVG,
+      table,
+      note: hit
+        ? `ISO VG ${hit.isoVG} is the lowest grade (VI ${vi.toFixed(0)}, ${oil.baseOil}) with λmin ≥ ${policy.lambdaTarget} in every load case up to ${tHigh} °C.`
+        : `No grade from VG ${CANDIDATE_GRADES[0]} to VG ${CANDIDATE_GRADES[CANDIDATE_GRADES.length - 1]} reaches λmin ≥ ${policy.lambdaTarget} in every load case up to ${tHigh} °C: smoother flanks, a cooler sump or a higher VI would.`,
+    };
+  });
+}

@@ -1,0 +1,178 @@
+/**
+ * The results of a review, as `run()` returns them and `flankfilm review --json` prints them.
+ * Display units are in the key names (mm, MPa, m/s, µm, °C). This shape is the one path to the
+ * screen, the record (PDF) and the CSV: nothing downstream recomputes physics.
+ */
+import type { Regime } from '../engine/film/regime';
+import type { EngineWarning } from '../engine/diagnostics';
+
+export type VerdictCode = 'aw-suffices' | 'ep-warranted' | 'beyond-oil';
+export type OilFit = 'meets' | 'falls-short';
+export type FzgStageNeeded = number | '>12';
+export type ReviewStatus = 'draft' | 'signed' | 'changed-since-signing';
+
+export interface PointResult {
+  position_mm: number;
+  /** Roll angle-like coordinate from A (0) to E (1), for charts. */
+  pathFraction: number;
+  loadShare: number;
+  hertzStress_MPa: number;
+  slidingVelocity_mps: number;
+  sumVelocity_mps: number;
+  slideToRoll: number;
+  filmThicknessMin_um: number | null;
+  filmThicknessCentral_um: number | null;
+  lambda: number | null;
+  lambdaGF: number | null;
+  regime: Regime | null;
+  flashTemperature_K: number | null;
+  contactTemperature_C: number | null;
+}
+
+export interface OilAtTemperature {
+  /** The film is computed at the bulk temperature θM; this is that temperature. */
+  temperature_C: number;
+  viscosity_mm2s: number;
+  dynamicViscosity_mPas: number;
+  density_kgm3: number;
+  pressureViscosity_1perGPa: number;
+  temperatureViscosity_1perK: number;
+}
+
+export interface VerdictReason {
+  /** Stable rule id, e.g. `scuffing.required-stage`. */
+  rule: string;
+  /** One sentence with the numbers. */
+  text: string;
+  /** Threshold compared against, in words, e.g. "SB,min = 1.5 (policy)". */
+  threshold: string;
+  source: string;
+}
+
+export interface Caution {
+  id: string;
+  text: string;
+  /** Standing cautions appear on every verdict; triggered ones follow from the inputs. */
+  kind: 'standing' | 'triggered';
+}
+
+export interface CaseVerdict {
+  code: VerdictCode;
+  oilFit: OilFit | null;
+  reasons: VerdictReason[];
+  cautions: Caution[];
+}
+
+export interface CaseResult {
+  loadCase: string;
+  oil: string | null;
+  pinionSpeed_rpm: number;
+  pinionTorque_Nm: number;
+  applicationFactor: number;
+  oilTemperature_C: number;
+  pitchLineVelocity_mps: number;
+  nominalContactStress_MPa: number;
+  nominalContactStressBasic_MPa: number;
+  maxHertzStress_MPa: number;
+  maxHertzStressPosition_mm: number;
+  pitchHertzStress_MPa: number;
+  pitch: PointResult;
+  path: PointResult[];
+  // issue 3: oil and film
+  oilAtTemperature: OilAtTemperature | null;
+  lambdaMin: number | null;
+  lambdaMinPosition_mm: number | null;
+  regime: Regime | null;
+  filmFormula: string | null;
+  thermalFilmFactor: number | null;
+  filmNote: string | null;
+  // issue 4: heat, scuffing, verdict
+  frictionCoefficient: number | null;
+  frictionSource: string | null;
+  bulkTemperature_C: number | null;
+  maxFlashTemperature_K: number | null;
+  maxContactTemperature_C: number | null;
+  maxContactTemperaturePosition_mm: number | null;
+  scuffingTemperature_C: number | null;
+  scuffingTemperatureAtLeast: boolean;
+  scuffingSafety: number | null;
+  integralTemperature_C: number | null;
+  integralScuffingTemperature_C: number | null;
+  integralSafety: number | null;
+  requiredFzgStage: FzgStageNeeded | null;
+  /** The stage the integral temperature method needs (SintS ≥ SintS,min). */
+  requiredFzgStageIntegral: FzgStageNeeded | null;
+  scuffingProbability: number | null;
+  lambdaGFMin: number | null;
+  micropittingAdvisory: string | null;
+  verdict: CaseVerdict | null;
+  warnings: EngineWarning[];
+}
+
+export interface OilSummary {
+  name: string;
+  role: string;
+  viscosityIndex: number;
+  viscosityIndexSource: 'ASTM D2270' | 'data sheet';
+  isoVG: number | null;
+  lubricantFactorXL: number;
+  chemistry: string;
+  baseOil: string;
+  fzgFailureStage: number | '>12';
+  pressureViscositySource: string;
+  warnings: EngineWarning[];
+}
+
+export interface OverallVerdict {
+  oil: string;
+  code: VerdictCode;
+  oilFit: OilFit;
+  governingLoadCase: string;
+  /** Time-share-weighted fraction of duty for which the oil meets the need. */
+  dutyShareMet: number;
+  summary: string;
+}
+
+export interface GradeFinderRow {
+  isoVG: number;
+  lambdaMin: number;
+}
+
+export interface GradeFinderResult {
+  oil: string;
+  recommendedVG: number | null;
+  currentVG: number | null;
+  table: GradeFinderRow[];
+  note: string;
+}
+
+export interface GearResult {
+  workingPressureAngle_deg: number;
+  transversePressureAngle_deg: number;
+  baseHelixAngle_deg: number;
+  transverseContactRatio: number;
+  overlapRatio: number;
+  totalContactRatio: number;
+  centerDistance_mm: number;
+  profileShift: { pinion: number; wheel: number };
+  referenceDiameter_mm: { pinion: number; wheel: number };
+  baseDiameter_mm: { pinion: number; wheel: number };
+  tipDiameter_mm: { pinion: number; wheel: number };
+  workingDiameter_mm: { pinion: number; wheel: number };
+  gearRatio: number;
+  lineOfAction_mm: number;
+  points_mm: { A: number; B: number; C: number; D: number; E: number };
+  checks: Array<{ code: string; severity: string; message: string }>;
+}
+
+export interface Results {
+  flankfilm: string;
+  title: string;
+  gear: GearResult;
+  oils: OilSummary[];
+  cases: CaseResult[];
+  verdicts: OverallVerdict[];
+  gradeFinder: GradeFinderResult[];
+  /** Stated assumptions: factors taken as 1, formulas chosen, and so on. */
+  assumptions: string[];
+}

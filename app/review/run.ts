@@ -1,0 +1,80 @@
+import { gearPairGeometry } from '../engine/geometry/gearPair';
+import type { GearPairGeometry } from '../engine/geometry/types';
+import { analyseCase } from '../engine/mesh/analyseCase';
+import { ENGINE_VERSION } from '../engine/version';
+import { micrometres, radiansToDegrees, toMillimetres } from '../engine/units';
+import type { Review } from './schema';
+import type { CaseResult, GearResult, Results } from './results';
+import { gearPairInput, materialOf } from './toEngine';
+import { caseToResult } from './caseResult';
+import { oilModelsOf, oilSummaries } from './oils';
+import { overallVerdicts } from './overall';
+import { gradeFinder } from './gradeFinder';
+import { engineDutyOf, enginePolicyOf } from './engineInputs';
+
+/**
+ * Recompute a review: file → run() → results. Pure and deterministic; the same review gives
+ * bit-identical results. Throws EngineInputError (field and limit named) for a review that the
+ * schema accepts but the physics cannot (impossible geometry, say).
+ */
+export function run(review: Review): Results {
+  const geometry = gearPairGeometry(gearPairInput(review.gearPair));
+  const pinion = materialOf(review.gearPair.pinion.material);
+  const wheel = materialOf(review.gearPair.wheel.material);
+  const policy = enginePolicyOf(review.policy);
+  const oils = oilModelsOf(review.oils);
+  const cases: CaseResult[] = [];
+  const roughnessRa1 = micrometres(review.gearPair.pinion.roughnessRa_um);
+  const roughnessRa2 = micrometres(review.gearPair.wheel.roughnessRa_um);
+  review.loadCases.forEach((lc, li) => {
+    const duty = engineDutyOf(review, li);
+    const oilList = oils.length > 0 ? oils : [null];
+    for (const oil of oilList) {
+      const a = analyseCase({ geometry, pinion, wheel, roughnessRa1, roughnessRa2, duty, oil, policy, caseField: `loadCases[${li}]` });
+      cases.push(caseToResult(review, lc, oil, oils, a));
+    }
+  });
+  return {
+    flankfilm: ENGINE_VERSION,
+    title: review.title,
+    gear: gearResult(geometry),
+    oils: oilSummaries(oils),
+    cases,
+    verdicts: overallVerdicts(review, cases),
+    gradeFinder: gradeFinder(review, geometry, pinion, wheel, policy, oils),
+    assumptions: assumptionsOf(review),
+  };
+}
+
+function gearResult(g: GearPairGeometry): GearResult {
+  const mm = toMillimetres;
+  return {
+    workingPressureAngle_deg: radiansToDegrees(g.workingPressureAngle),
+    transversePressureAngle_deg: radiansToDegrees(g.transversePressureAngle),
+    baseHelixAngle_deg: radiansToDegrees(g.baseHelixAngle),
+    transverseContactRatio: g.transverseContactRatio,
+    overlapRatio: g.overlapRatio,
+    totalContactRatio: g.totalContactRatio,
+    centerDistance_mm: mm(g.centerDistance),
+    profileShift: { pinion: g.x1, wheel: g.x2 },
+    referenceDiameter_mm: { pinion: mm(g.referenceDiameter1), wheel: mm(g.referenceDiameter2) },
+    baseDiameter_mm: { pinion: mm(g.baseDiameter1), wheel: mm(g.baseDiameter2) },
+    tipDiameter_mm: { pinion: mm(g.tipDiameter1), wheel: mm(g.tipDiameter2) },
+    workingDiameter_mm: { pinion: mm(g.workingDiameter1), wheel: mm(g.workingDiameter2) },
+    gearRatio: g.u,
+    lineOfAction_mm: mm(g.lineOfAction),
+    points_mm: { A: mm(g.points.A), B: mm(g.points.B), C: mm(g.points.C), D: mm(g.points.D), E: mm(g.points.E) },
+    checks: g.checks.map((c) => ({ code: c.code, severity: c.severity, message: c.message })),
+  };
+}
+
+function assumptionsOf(review: Review): string[] {
+  const gp = review.gearPair;
+  const out = [
+    `ISO 6336-2 factors not computed by Flankfilm are inputs: Kv = ${gp.dynamicFactorKv}, KHβ = ${gp.faceLoadFactorKHbeta}, KHα = ${gp.transverseLoadFactorKHalpha}${gp.dynamicFactorKv === 1 && gp.faceLoadFactorKHbeta === 1 && gp.transverseLoadFactorKHalpha === 1 ? ' (all taken as 1)' : ''}.`,
+    'Load sharing XΓ for unmodified flanks (no tip relief), ISO/TS 6336-20.',
+    'Pitch-line velocity on the working pitch circle dw1.',
+    'Hertz stress along the path: line contact in the normal plane, ρn = ρ/cos βb, with load sharing; the pitch-point figure pitchHertzStress_MPa carries the whole load on one pair, as load-stage tables quote it.',
+  ];
+  return out;
+}

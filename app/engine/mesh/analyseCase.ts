@@ -42,8 +42,19 @@ export function analyseCase(input: CaseInput): CaseAnalysis {
   if (!oil) return { input, mechanics, heat: null, film: null, oilAtFilmTemperature: null, scuffing: null, warnings: sink.items };
   const tField = `${input.caseField}.oilTemperature_C`;
   const heat = temperaturesAlongPath(input, mechanics, sink);
-  const tFilm = heat.bulkTemperature;
-  const state = oilState(input, tFilm, `${tField} (bulk temperature θM ${(tFilm - 273.15).toFixed(1)} °C)`);
+  // A bulk temperature past the oil model's range means the duty is far beyond scuffing anyway; the
+  // film is then taken at the top of the range (thicker than it would be) and the reason is said.
+  const tMax = oil.model.temperatureRange.max;
+  const tFilm = heat.bulkTemperature > tMax ? tMax : heat.bulkTemperature;
+  if (tFilm !== heat.bulkTemperature) {
+    sink.add({
+      code: 'film.bulk-temperature-above-oil-range',
+      severity: 'warning',
+      field: tField,
+      message: `The bulk temperature θM = ${(heat.bulkTemperature - 273.15).toFixed(0)} °C is above the ${(tMax - 273.15).toFixed(0)} °C the oil model covers: the film is computed at ${(tMax - 273.15).toFixed(0)} °C, so λ is overstated; the duty is far beyond the oil's scuffing limit.`,
+    });
+  }
+  const state = oilState(input, tFilm, tField);
   const film = filmAlongPath(input, mechanics, state, sink);
   const scuffing = scuffingAssessment(input, mechanics, heat, sink);
   for (const w of oil.model.warnings) sink.add(w);

@@ -13,51 +13,25 @@ import type { Review } from './schema';
 
 /** The grades worth offering for enclosed industrial gears (ISO 3448). */
 const CANDIDATE_GRADES = ISO_VG_GRADES.filter((g) => g >= 32 && g <= 1500);
-/** Path points for the finder: A…E are always sampled exactly, so λ at A (where it is least) is exact. */
-const FINDER_PATH_POINTS = 41;
+/** Path points for the finder: A…E are always sampled exactly, so λ at A (where it is least) and the load steps at B and D are exact. */
+const FINDER_PATH_POINTS = 21;
 
 /**
- * For each oil's base oil and VI: λmin per ISO VG over every load case, each at its own oil
- * temperature and at both ends of policy.temperatureRange_C, and the lowest grade that meets the
- * λ target everywhere. A grade's KV100 follows from its KV40 (the grade mid-point) and the oil's VI
+ * For each oil's base oil and VI: λmin per ISO VG over every load case, each at the hotter of its
+ * own oil temperature and the top of policy.temperatureRange_C, and the lowest grade that meets
+ * the λ target everywhere. A grade's KV100 follows from its KV40 (the grade mid-point) and the oil's VI
  * (ASTM D2270 inverted); α takes the base oil's default.
  */
 export function gradeFinder(review: Review, geometry: GearPairGeometry, pinion: Material, wheel: Material, policy: EnginePolicy, oils: readonly ReviewOil[]): GradeFinderResult[] {
   const finderPolicy: EnginePolicy = { ...policy, pathPoints: FINDER_PATH_POINTS };
   const tHigh = review.policy.temperatureRange_C[1];
+  // Oils that share base oil, VI and density share a table.
+  const tables = new Map<string, GradeFinderRow[]>();
   return oils.map((oil) => {
     const vi = oil.model.viscosityIndex.value;
-    const table: GradeFinderRow[] = [];
-    for (const vg of CANDIDATE_GRADES) {
-      let kv100: SquareMetresPerSecond;
-      try {
-        kv100 = kv100ForViscosityIndex(centistokes(vg), vi, `${oil.field}.viscosityIndex`);
-      } catch {
-        continue; // VI not reachable at this grade within D2270's range
-      }
-      const model = makeOilModel({ kv40: centistokes(vg), kv100, density15: oil.source.density15_kgm3 as KilogramsPerCubicMetre, baseOil: oil.baseOil }, oil.field);
-      const gradeOil = { ...oil, model };
-      let lambdaMin = Infinity;
-      review.loadCases.forEach((lc, li) => {
-        // The film thins as the oil warms, so the case's own temperature and the top of the range govern.
-        for (const t of lc.oilTemperature_C >= tHigh ? [lc.oilTemperature_C] : [lc.oilTemperature_C, tHigh]) {
-          const duty = { ...engineDutyOf(review, li), oilTemperature: celsiusToKelvin(t) };
-          const a = analyseCase({
-            geometry,
-            pinion,
-            wheel,
-            roughnessRa1: micrometres(review.gearPair.pinion.roughnessRa_um),
-            roughnessRa2: micrometres(review.gearPair.wheel.roughnessRa_um),
-            duty,
-            oil: gradeOil,
-            policy: finderPolicy,
-            caseField: `loadCases[${li}]`,
-          });
-          if (a.film && a.film.lambdaMin < lambdaMin) lambdaMin = a.film.lambdaMin;
-        }
-      });
-      if (Number.isFinite(lambdaMin)) table.push({ isoVG: vg, lambdaMin });
-    }
+    const key = `${oil.baseOil}|${vi}|${oil.source.density15_kgm3}`;
+    const table = tables.get(key) ?? gradeTable(review, geometry, pinion, wheel, finderPolicy, oil, tHigh);
+    tables.set(key, table);
     const hit = table.find((r) => r.lambdaMin >= policy.lambdaTarget);
     return {
       oil: oil.name,
@@ -69,4 +43,30 @@ export function gradeFinder(review: Review, geometry: GearPairGeometry, pinion: 
         : `No grade from VG ${CANDIDATE_GRADES[0]} to VG ${CANDIDATE_GRADES[CANDIDATE_GRADES.length - 1]} reaches λmin ≥ ${policy.lambdaTarget} in every load case up to ${tHigh} °C: smoother flanks, a cooler sump or a higher VI would.`,
     };
   });
+}
+
+/** λmin per candidate grade for one oil's base oil, VI and density, over every load case. */
+function gradeTable(review: Review, geometry: GearPairGeometry, pinion: Material, wheel: Material, finderPolicy: EnginePolicy, oil: ReviewOil, tHigh: number): GradeFinderRow[] {
+  const vi = oil.model.viscosityIndex.value;
+  const roughnessRa1 = micrometres(review.gearPair.pinion.roughnessRa_um);
+  const roughnessRa2 = micrometres(review.gearPair.wheel.roughnessRa_um);
+  const table: GradeFinderRow[] = [];
+  for (const vg of CANDIDATE_GRADES) {
+    let kv100: SquareMetresPerSecond;
+    try {
+      kv100 = kv100ForViscosityIndex(centistokes(vg), vi, `${oil.field}.viscosityIndex`);
+    } catch {
+      continue; // this VI is not reachable at this grade within D2270's range
+    }
+    const model = makeOilModel({ kv40: centistokes(vg), kv100, density15: oil.source.density15_kgm3 as KilogramsPerCubicMetre, baseOil: oil.baseOil }, oil.field);
+    let lambdaMin = Infinity;
+    review.loadCases.forEach((lc, li) => {
+      // The film thins as the oil warms, so the hotter of the case's own temperature and the top of the range governs.
+      const duty = { ...engineDutyOf(review, li), oilTemperature: celsiusToKelvin(Math.max(lc.oilTemperature_C, tHigh)) };
+      const a = analyseCase({ geometry, pinion, wheel, roughnessRa1, roughnessRa2, duty, oil: { ...oil, model }, policy: finderPolicy, caseField: `loadCases[${li}]` });
+      if (a.film && a.film.lambdaMin < lambdaMin) lambdaMin = a.film.lambdaMin;
+    });
+    if (Number.isFinite(lambdaMin)) table.push({ isoVG: vg, lambdaMin });
+  }
+  return table;
 }

@@ -1,12 +1,10 @@
 import type { WarningSink } from '../diagnostics';
-import { dowsonHigginsonMinFilm } from '../film/dowsonHigginson';
-import { isoLocalFilm } from '../film/isoLocalFilm';
-import { panHamrockFilm, type PanHamrockFilm } from '../film/panHamrock';
+import { LINE_CONTACT_FIT_LIMITS, warnOutsideLineContactFit } from '../film/lineContactRange';
 import { classifyRegime, type Regime } from '../film/regime';
-import { RQ_PER_RA_GAUSSIAN, specificFilmThicknessGF } from '../film/specificFilm';
-import { murchWilsonThermalFactor } from '../film/thermalCorrection';
+import { RQ_PER_RA_GAUSSIAN } from '../film/specificFilm';
+import { MINERAL_OIL_CONDUCTIVITY, MURCH_WILSON_L_MAX } from '../film/thermalCorrection';
 import { tribofilmNote } from '../film/tribofilmNote';
-import type { Metres, MetresPerSecond, NewtonsPerMetre, Pascals } from '../units';
+import type { Metres } from '../units';
 import type { OilState } from './analyseCase';
 import type { MeshMechanics } from './mechanics';
 import type { CaseInput } from './types';
@@ -38,14 +36,24 @@ export interface FilmAlongPath {
   readonly note: string;
 }
 
+const LN = Math.log;
+const { uMin, uMax, wMin, wMax, gMin, gMax } = LINE_CONTACT_FIT_LIMITS;
+const LN_U_MIN = LN(uMin), LN_U_MAX = LN(uMax), LN_W_MIN = LN(wMin), LN_W_MAX = LN(wMax);
+
 /**
- * EHL film along the path at the oil state given (the bulk temperature θM): h_min by the
- * policy's formula, h_c by Pan–Hamrock, the Murch–Wilson inlet shear-heating factor, λ with the
- * Gaussian composite roughness, λ_GF (ISO/TS 6336-22 form) and the regime at every point.
+ * EHL film along the path at the oil state given (the bulk temperature θM): h_min by the policy's
+ * formula, h_c by Pan–Hamrock, the Murch–Wilson inlet shear-heating factor φT, λ with the Gaussian
+ * composite roughness, λ_GF (ISO/TS 6336-22 form, ISO/TR 15144-1 film) and the regime at every point.
+ *
+ * The four films share their dimensionless groups, U = η0 ū/(E′R) and W = w/(E′R) (for the
+ * ISO/TR 15144-1 groups, U_Y = η vΣ/(2E_r ρ) and W_Y = 2π p²/E_r² reduce to the same U and W
+ * through Hertz), so this hot loop evaluates the published formulas of film/dowsonHigginson.ts,
+ * film/panHamrock.ts, film/isoLocalFilm.ts and film/thermalCorrection.ts in log space from three
+ * logarithms per point: h = R·k·exp(a ln U + b ln G + c ln W). tests/engine/film/filmKernel.test.ts
+ * holds it to those reference functions within 1e-12.
  */
 export function filmAlongPath(input: CaseInput, m: MeshMechanics, oil: OilState, sink: WarningSink): FilmAlongPath {
   const { policy } = input;
-  const ePrime = (2 * m.contactModulus) as Pascals; // Hamrock convention E′ = 2E*
   const n = m.n;
   const hMin = new Float64Array(n);
   const hCentral = new Float64Array(n);
@@ -56,26 +64,67 @@ export function filmAlongPath(input: CaseInput, m: MeshMechanics, oil: OilState,
   const ra1 = input.roughnessRa1;
   const ra2 = input.roughnessRa2;
   const sigma = (RQ_PER_RA_GAUSSIAN * Math.sqrt(ra1 * ra1 + ra2 * ra2)) as Metres;
-  const ph: PanHamrockFilm = { hMin: 0 as Metres, hCentral: 0 as Metres };
+  const raAvg = (ra1 + ra2) / 2;
   const useDH = policy.filmFormula === 'dowson-higginson';
+  const thermal = policy.thermalFilmCorrection;
+  const { boundaryBelow, fullFilmFrom } = policy.regime;
+
+  const ePrime = 2 * m.contactModulus; // Hamrock convention E′ = 2E*
+  const eta = oil.dynamicViscosity;
+  const G = oil.pressureViscosity * ePrime;
+  const lnG = LN(G);
+  const lnEtaOverE = LN(eta) - LN(ePrime);
+  const lnE = LN(ePrime);
+  // Murch–Wilson: L = β η ū²/k_f, so ln L = ln(β η/k_f) + 2 ln ū.
+  const lnMW = LN((oil.temperatureViscosity * eta) / MINERAL_OIL_CONDUCTIVITY);
+  const kDH = 2.65 * Math.exp(0.54 * lnG);
+  const kPHmin = 1.714 * Math.exp(0.568 * lnG);
+  const kPHc = 2.922 * Math.exp(0.47 * lnG);
+  const kISO = 1.6 * Math.exp(0.6 * lnG);
+  if (G < gMin || G > gMax) warnOutsideLineContactFit(useDH ? 'Dowson–Higginson' : 'Pan–Hamrock', (uMin + uMax) / 2, (wMin + wMax) / 2, G, sink);
+
   let lambdaMin = Infinity;
   let lambdaMinIndex = 0;
   let lambdaGFMin = Infinity;
+  let rangeWarned = false;
+  let mwWarned = false;
   for (let i = 0; i < n; i++) {
-    const uMean = ((m.sumVelocity[i] as number) / 2) as MetresPerSecond;
-    const R = m.reducedRadius[i] as Metres;
-    const w = m.lineLoad[i] as NewtonsPerMetre;
-    panHamrockFilm(oil.dynamicViscosity, oil.pressureViscosity, uMean, R, w, ePrime, sink, ph);
-    const h = useDH ? dowsonHigginsonMinFilm(oil.dynamicViscosity, oil.pressureViscosity, uMean, R, w, ePrime, sink) : ph.hMin;
-    const phi = policy.thermalFilmCorrection ? murchWilsonThermalFactor(oil.temperatureViscosity, oil.dynamicViscosity, uMean, undefined, sink) : 1;
+    const uMean = (m.sumVelocity[i] as number) / 2;
+    const R = m.reducedRadius[i] as number;
+    let h = 0;
+    let hc = 0;
+    let hY = 0;
+    let phi = 1;
+    if (uMean > 0) {
+      const lnR = LN(R);
+      const lnU1 = LN(uMean);
+      const lnU = lnEtaOverE + lnU1 - lnR;
+      const lnW = LN(m.lineLoad[i] as number) - lnE - lnR;
+      if (!rangeWarned && (lnU < LN_U_MIN || lnU > LN_U_MAX || lnW < LN_W_MIN || lnW > LN_W_MAX)) {
+        warnOutsideLineContactFit(useDH ? 'Dowson–Higginson' : 'Pan–Hamrock', Math.exp(lnU), Math.exp(lnW), G, sink);
+        rangeWarned = true;
+      }
+      h = useDH ? R * kDH * Math.exp(0.7 * lnU - 0.13 * lnW) : R * kPHmin * Math.exp(0.694 * lnU - 0.128 * lnW);
+      hc = R * kPHc * Math.exp(0.692 * lnU - 0.166 * lnW);
+      hY = R * kISO * Math.exp(0.7 * lnU - 0.13 * lnW);
+      if (thermal) {
+        const lnL = lnMW + 2 * lnU1;
+        if (!mwWarned && lnL > LN_MW_L_MAX) {
+          sink.add({ code: 'film.thermal-loading-range', severity: 'warning', field: 'L', message: `Thermal loading parameter L = ${Math.exp(lnL).toFixed(1)} is above ${MURCH_WILSON_L_MAX}; the Murch–Wilson factor is an extrapolation.` });
+          mwWarned = true;
+        }
+        phi = 3.94 / (3.94 + Math.exp(0.62 * lnL));
+      }
+    } else {
+      sink.add({ code: 'film.no-entrainment', severity: 'warning', field: 'uMean', message: 'Somewhere on the path the mean entrainment velocity is not above 0: no EHL film forms there (film taken as 0).' });
+    }
     thermalFactor[i] = phi;
     hMin[i] = h * phi;
-    hCentral[i] = ph.hCentral * phi;
+    hCentral[i] = hc * phi;
     const l = (h * phi) / sigma;
     lambda[i] = l;
-    regime[i] = REGIMES.indexOf(classifyRegime(l, policy.regime));
-    const hY = isoLocalFilm(oil.dynamicViscosity, oil.pressureViscosity, m.sumVelocity[i] as MetresPerSecond, R, m.hertzPressure[i] as Pascals, ePrime, 1, sink);
-    const lgf = specificFilmThicknessGF(hY, ra1, ra2);
+    regime[i] = l < boundaryBelow ? 0 : l < fullFilmFrom ? 1 : 2;
+    const lgf = hY / raAvg;
     lambdaGF[i] = lgf;
     if (l < lambdaMin) {
       lambdaMin = l;
@@ -100,3 +149,5 @@ export function filmAlongPath(input: CaseInput, m: MeshMechanics, oil: OilState,
     note: tribofilmNote(hMin[lambdaMinIndex] as Metres, sigma, policy.regime),
   };
 }
+
+const LN_MW_L_MAX = LN(MURCH_WILSON_L_MAX);

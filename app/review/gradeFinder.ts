@@ -1,36 +1,45 @@
 import type { GearPairGeometry } from '../engine/geometry/types';
 import type { Material } from '../engine/materials';
-import { analyseCase } from '../engine/mesh/analyseCase';
+import { evaluateCell, prepareSweep, prepareSweepOil, type CellResult, type SweepCase } from '../engine/sweep/operatingMap';
 import type { EnginePolicy } from '../engine/mesh/types';
 import { ISO_VG_GRADES } from '../engine/oil/isoGrade';
 import { makeOilModel } from '../engine/oil/oilModel';
 import { kv100ForViscosityIndex } from '../engine/oil/viscosityIndex';
-import { celsiusToKelvin, centistokes, micrometres, type KilogramsPerCubicMetre, type SquareMetresPerSecond } from '../engine/units';
+import { centistokes, micrometres, type KilogramsPerCubicMetre, type SquareMetresPerSecond } from '../engine/units';
 import { engineDutyOf } from './engineInputs';
 import type { ReviewOil } from './oils';
 import type { GradeFinderResult, GradeFinderRow } from './results';
 import type { Review } from './schema';
 
+/**
+ * Path points for the finder. A…E are always sampled exactly, so λ at A (where the film is thinnest:
+ * least entrainment and radius) and the load steps at B and D are exact; the finder's λmin agrees
+ * with the case analysis at the oil's own grade (tests/review/gradeFinder.test.ts).
+ */
+export const FINDER_PATH_POINTS = 41;
+
 /** The grades worth offering for enclosed industrial gears (ISO 3448). */
 const CANDIDATE_GRADES = ISO_VG_GRADES.filter((g) => g >= 32 && g <= 1500);
-/** Path points for the finder: A…E are always sampled exactly, so λ at A (where it is least) and the load steps at B and D are exact. */
-const FINDER_PATH_POINTS = 21;
 
 /**
  * For each oil's base oil and VI: λmin per ISO VG over every load case, each at the hotter of its
  * own oil temperature and the top of policy.temperatureRange_C, and the lowest grade that meets
  * the λ target everywhere. A grade's KV100 follows from its KV40 (the grade mid-point) and the oil's VI
- * (ASTM D2270 inverted); α takes the base oil's default.
+ * (ASTM D2270 inverted); α takes the base oil's default. Each grade is one cell of the operating
+ * map's evaluator (engine/sweep), so the finder sees the same film, friction and heat as the cases.
  */
 export function gradeFinder(review: Review, geometry: GearPairGeometry, pinion: Material, wheel: Material, policy: EnginePolicy, oils: readonly ReviewOil[]): GradeFinderResult[] {
-  const finderPolicy: EnginePolicy = { ...policy, pathPoints: FINDER_PATH_POINTS };
   const tHigh = review.policy.temperatureRange_C[1];
+  const roughnessRa1 = micrometres(review.gearPair.pinion.roughnessRa_um);
+  const roughnessRa2 = micrometres(review.gearPair.wheel.roughnessRa_um);
+  const finderPolicy = { ...policy, pathPoints: Math.min(policy.pathPoints, FINDER_PATH_POINTS) };
+  const cases = review.loadCases.map((_, li) => prepareSweep({ geometry, pinion, wheel, roughnessRa1, roughnessRa2, duty: engineDutyOf(review, li), policy: finderPolicy, caseField: `loadCases[${li}]` }));
   // Oils that share base oil, VI and density share a table.
   const tables = new Map<string, GradeFinderRow[]>();
   return oils.map((oil) => {
     const vi = oil.model.viscosityIndex.value;
     const key = `${oil.baseOil}|${vi}|${oil.source.density15_kgm3}`;
-    const table = tables.get(key) ?? gradeTable(review, geometry, pinion, wheel, finderPolicy, oil, tHigh);
+    const table = tables.get(key) ?? gradeTable(review, cases, oil, tHigh);
     tables.set(key, table);
     const hit = table.find((r) => r.lambdaMin >= policy.lambdaTarget);
     return {
@@ -46,11 +55,10 @@ export function gradeFinder(review: Review, geometry: GearPairGeometry, pinion: 
 }
 
 /** λmin per candidate grade for one oil's base oil, VI and density, over every load case. */
-function gradeTable(review: Review, geometry: GearPairGeometry, pinion: Material, wheel: Material, finderPolicy: EnginePolicy, oil: ReviewOil, tHigh: number): GradeFinderRow[] {
+function gradeTable(review: Review, cases: readonly SweepCase[], oil: ReviewOil, tHigh: number): GradeFinderRow[] {
   const vi = oil.model.viscosityIndex.value;
-  const roughnessRa1 = micrometres(review.gearPair.pinion.roughnessRa_um);
-  const roughnessRa2 = micrometres(review.gearPair.wheel.roughnessRa_um);
   const table: GradeFinderRow[] = [];
+  const cell: CellResult = { lambdaMin: 0, scuffingSafety: 0, integralSafety: 0, verdict: 0 };
   for (const vg of CANDIDATE_GRADES) {
     let kv100: SquareMetresPerSecond;
     try {
@@ -60,11 +68,12 @@ function gradeTable(review: Review, geometry: GearPairGeometry, pinion: Material
     }
     const model = makeOilModel({ kv40: centistokes(vg), kv100, density15: oil.source.density15_kgm3 as KilogramsPerCubicMetre, baseOil: oil.baseOil }, oil.field);
     let lambdaMin = Infinity;
-    review.loadCases.forEach((lc, li) => {
+    cases.forEach((sc, li) => {
+      const so = prepareSweepOil(sc, { ...oil, model });
       // The film thins as the oil warms, so the hotter of the case's own temperature and the top of the range governs.
-      const duty = { ...engineDutyOf(review, li), oilTemperature: celsiusToKelvin(Math.max(lc.oilTemperature_C, tHigh)) };
-      const a = analyseCase({ geometry, pinion, wheel, roughnessRa1, roughnessRa2, duty, oil: { ...oil, model }, policy: finderPolicy, caseField: `loadCases[${li}]` });
-      if (a.film && a.film.lambdaMin < lambdaMin) lambdaMin = a.film.lambdaMin;
+      const t = Math.max(review.loadCases[li]?.oilTemperature_C ?? tHigh, tHigh);
+      evaluateCell(sc, so, t, 1, cell);
+      if (cell.lambdaMin < lambdaMin) lambdaMin = cell.lambdaMin;
     });
     if (Number.isFinite(lambdaMin)) table.push({ isoVG: vg, lambdaMin });
   }

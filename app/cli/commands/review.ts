@@ -5,6 +5,8 @@ import type { Results } from '../../review/results';
 import { EXIT, UsageError, type CliIo } from '../io';
 import { loadReviewFile } from '../reviewFile';
 import { summaryText } from '../summary';
+import { operatingMaps, operatingMapsCsv } from '../../review/operatingMaps';
+import { atomicWrite } from '../../files/atomicWrite';
 
 /** `flankfilm review FILE [--json] [--pdf OUT] [--csv OUT] [--map OUT.csv] [--p12 ID.p12] [--paper a4|letter]` */
 export async function reviewCommand(args: string[], io: CliIo): Promise<number> {
@@ -42,8 +44,17 @@ export async function reviewCommand(args: string[], io: CliIo): Promise<number> 
   }
   if (values.json) io.out(`${JSON.stringify(results, null, 2)}\n`);
   else io.out(summaryText(results));
-  if (values.pdf || values.csv || values.map) {
-    io.err('flankfilm review: --pdf, --csv and --map are not in this build yet (the record lands next).\n');
+  if (values.map) {
+    const maps = operatingMaps(loaded.review) ?? [];
+    try {
+      await atomicWrite(values.map, operatingMapsCsv(maps));
+    } catch (e) {
+      io.err(`${values.map}: cannot write (${(e as NodeJS.ErrnoException).code ?? (e as Error).message})\n`);
+      return EXIT.invalid;
+    }
+  }
+  if (values.pdf || values.csv) {
+    io.err('flankfilm review: --pdf and --csv are not in this build yet (the record lands next).\n');
     return EXIT.usage;
   }
   return EXIT.ok;

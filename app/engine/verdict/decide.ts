@@ -1,5 +1,6 @@
 import { cautionsFor } from './cautions';
 import { RULES, type RuleOutcome } from './rules';
+import { verdictCodeOf } from './code';
 import type { Reason, Verdict, VerdictCode, VerdictFacts, VerdictPolicy } from './types';
 
 /**
@@ -12,9 +13,7 @@ import type { Reason, Verdict, VerdictCode, VerdictFacts, VerdictPolicy } from '
  */
 export function decideVerdict(f: VerdictFacts, p: VerdictPolicy): Verdict {
   const outcomes = RULES.map((r) => r(f, p)).filter((o): o is RuleOutcome => o !== null);
-  const beyond = outcomes.some((o) => o.beyondOil);
-  const ep = outcomes.some((o) => o.escalatesToEp);
-  const code: VerdictCode = beyond ? 'beyond-oil' : ep ? 'ep-warranted' : 'aw-suffices';
+  const code: VerdictCode = verdictCodeOf(f, p);
   const reasons: Reason[] = outcomes.map((o) => o.reason);
 
   const needsAw = outcomes.some((o) => o.needsAntiWear);

@@ -1,14 +1,13 @@
 import type { Reason, VerdictFacts, VerdictPolicy } from './types';
 import type { FzgStageNeed } from '../mesh/scuffing';
+import { isShockInBoundary } from './code';
 
 /**
- * The verdict's rules, one small function each. A rule returns a Reason when it has something
- * to say, else null. `fires` marks rules that escalate the chemistry the duty needs.
+ * The verdict's rules, one small function each, which give the reasons in order. A rule returns
+ * null when it has nothing to say. The code itself is decided in code.ts, from the same facts.
  */
 export interface RuleOutcome {
   readonly reason: Reason;
-  readonly escalatesToEp?: boolean;
-  readonly beyondOil?: boolean;
   readonly needsAntiWear?: boolean;
   readonly oilFallsShort?: boolean;
 }
@@ -38,8 +37,6 @@ export const requiredStageRule: Rule = (f, p) => {
       threshold: `SB,min = ${p.scuffingSafetyMin} (policy); ${FLOOR_SOURCE}`,
       source: 'ISO/TS 6336-20 flash temperature method; θS = 80 + (0.85 + 1.4 XW) XL S² °C [memory]',
     },
-    escalatesToEp: ep,
-    beyondOil: beyond,
   };
 };
 
@@ -54,7 +51,6 @@ export const integralRule: Rule = (f, p) => {
         threshold: `SintS,min = ${p.integralSafetyMin} (policy)`,
         source: 'ISO/TS 6336-21 integral temperature method [memory]',
       },
-      beyondOil: true,
     };
   }
   const need = stageNum(f.requiredStageIntegral);
@@ -66,7 +62,6 @@ export const integralRule: Rule = (f, p) => {
         threshold: `SintS,min = ${p.integralSafetyMin} (policy); ${FLOOR_SOURCE}`,
         source: 'ISO/TS 6336-21 integral temperature method [memory]',
       },
-      escalatesToEp: true,
     };
   }
   return {
@@ -81,7 +76,7 @@ export const integralRule: Rule = (f, p) => {
 
 /** Shock duty in the boundary regime: asperities meet under impact loads; EP films are the usual answer. */
 export const shockInBoundaryRule: Rule = (f, p) => {
-  if (!(f.applicationFactor >= p.shockApplicationFactor && f.regime === 'boundary')) return null;
+  if (!isShockInBoundary(f, p)) return null;
   return {
     reason: {
       rule: 'escalation.shock-boundary',
@@ -89,7 +84,6 @@ export const shockInBoundaryRule: Rule = (f, p) => {
       threshold: `KA ≥ ${p.shockApplicationFactor} (policy) and λ < 1`,
       source: 'common practice (heavy-duty and shock-loaded enclosed gearing is specified with EP oils)',
     },
-    escalatesToEp: true,
   };
 };
 

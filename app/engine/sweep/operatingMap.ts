@@ -1,0 +1,252 @@
+import { BLOK_CONSTANT_SEMI_WIDTH } from '../heat/blokFlash';
+import { LUBRICATION_FACTOR_XS } from '../heat/bulkTemperature';
+import { integralContactRatioFactor } from '../heat/contactRatioFactor';
+import { helicalLoadFactor } from '../heat/helicalLoadFactor';
+import { FZG_A_PINION_TORQUE, INTEGRAL_WEIGHT_BULK, INTEGRAL_WEIGHT_FLASH } from '../heat/integralTemperature';
+import { multipleMeshFactor } from '../heat/meshingPinions';
+import { isoMeanFriction } from '../heat/isoFriction';
+import { scuffingTemperature } from '../heat/scuffingTemperature';
+import { MINERAL_OIL_CONDUCTIVITY } from '../film/thermalCorrection';
+import { RQ_PER_RA_GAUSSIAN } from '../film/specificFilm';
+import { materialContactCoefficient } from '../materials';
+import { meshMechanics } from '../mesh/mechanics';
+import type { CaseInput, EngineOil } from '../mesh/types';
+import type { FzgStageNeed } from '../mesh/scuffing';
+import { verdictCodeOf } from '../verdict/code';
+import type { VerdictCode } from '../verdict/types';
+import { celsiusToKelvin, type Kelvin, type Metres, type MetresPerSecond, type NewtonsPerMetre } from '../units';
+
+export const VERDICT_CODES: readonly VerdictCode[] = ['aw-suffices', 'ep-warranted', 'beyond-oil'];
+
+export interface MapAxes {
+  /** Oil temperatures, °C (rows). */
+  readonly temperatures_C: Float64Array;
+  /** Load as a fraction of the case torque (columns), e.g. 0.1…1.5. */
+  readonly loadFractions: Float64Array;
+}
+
+/** One operating map (one load case, one oil): row-major grids, index = row · nLoad + column. */
+export interface OperatingMap {
+  readonly axes: MapAxes;
+  readonly lambdaMin: Float64Array;
+  /** SB; +∞ where there is no temperature rise (the edges write it as empty/null, never NaN). */
+  readonly scuffingSafety: Float64Array;
+  /** SintS; +∞ where θint ≤ 0 °C. */
+  readonly integralSafety: Float64Array;
+  /** Index into VERDICT_CODES. */
+  readonly verdict: Uint8Array;
+}
+
+export function mapAxes(temperatureRange_C: readonly [number, number], nTemperature: number, nLoad: number, loadRange: readonly [number, number] = [0.1, 1.5]): MapAxes {
+  const t = new Float64Array(nTemperature);
+  const l = new Float64Array(nLoad);
+  for (let i = 0; i < nTemperature; i++) t[i] = temperatureRange_C[0] + ((temperatureRange_C[1] - temperatureRange_C[0]) * i) / Math.max(1, nTemperature - 1);
+  for (let j = 0; j < nLoad; j++) l[j] = loadRange[0] + ((loadRange[1] - loadRange[0]) * j) / Math.max(1, nLoad - 1);
+  return { temperatures_C: t, loadFractions: l };
+}
+
+/** What a sweep of one load case needs that depends on neither the oil nor the cell. */
+export interface SweepCase {
+  readonly input: Omit<CaseInput, 'oil'>;
+  readonly n: number;
+  /** Blok θfl per unit μ at 100 % load, K. */
+  readonly flashPerMu: Float64Array;
+  readonly flashPerMuMax: number;
+  /** ln ū − ln R and ln w0 − ln E′ − ln R at each point; ln ū. */
+  readonly lnUPoint: Float64Array;
+  readonly lnWPoint: Float64Array;
+  readonly lnUbar: Float64Array;
+  readonly radius: Float64Array;
+  readonly lnE: number;
+  readonly ePrime: number;
+  readonly sigma: number;
+  readonly raAvg: Metres;
+  readonly unitLoad: number;
+  readonly kBg: number;
+  readonly xS: number;
+  readonly xMp: number;
+  readonly xW: number;
+  readonly vSumC: MetresPerSecond;
+  readonly rhoC: Metres;
+  /** Integral method: calibrated θfla,E · Xε per unit μ at 100 % load, K. */
+  readonly intFlashPerMu: number;
+}
+
+/** Per-oil constants of a sweep: scuffing temperatures per stage for this oil's XL and the pair's XW. */
+export interface SweepOil {
+  readonly oil: EngineOil;
+  readonly thetaS: number;
+  /** θS(S), K, index 1…12. */
+  readonly thetaSOf: Float64Array;
+  /** θintS(S), °C, index 1…12. */
+  readonly thetaIntSOf: Float64Array;
+  readonly oilStage: number;
+}
+
+export interface CellResult {
+  lambdaMin: number;
+  scuffingSafety: number;
+  integralSafety: number;
+  verdict: number;
+}
+
+/**
+ * Prepare one load case for sweeping. The same models as analyseCase (mesh/*), rearranged so that
+ * nothing is allocated per cell: the velocities and radii, and the flash temperature per unit μ at
+ * 100 % load (Blok: θfl ∝ μ w^0.75, since bH ∝ √w), are computed once; the film groups reuse the
+ * log-space form of mesh/film.ts (h ∝ f^−0.13 in the load fraction f).
+ */
+export function prepareSweep(input: Omit<CaseInput, 'oil'>): SweepCase {
+  const { policy } = input;
+  const g = input.geometry;
+  const m = meshMechanics(g, input.pinion, input.wheel, input.duty, policy.pathPoints);
+  const n = m.n;
+  const bM1 = materialContactCoefficient(input.pinion);
+  const bM2 = materialContactCoefficient(input.wheel);
+  const ePrime = 2 * m.contactModulus;
+  const lnE = Math.log(ePrime);
+  const kBg = helicalLoadFactor(g.totalContactRatio);
+  const ra1 = input.roughnessRa1;
+  const ra2 = input.roughnessRa2;
+  const flashPerMu = new Float64Array(n);
+  const lnUPoint = new Float64Array(n);
+  const lnWPoint = new Float64Array(n);
+  const lnUbar = new Float64Array(n);
+  const radius = new Float64Array(n);
+  let flashPerMuMax = 0;
+  for (let i = 0; i < n; i++) {
+    const v1 = m.v1[i] as number, v2 = m.v2[i] as number;
+    const w = m.lineLoad[i] as number, bH = m.hertzSemiWidth[i] as number;
+    const f = v1 === v2 ? 0 : (BLOK_CONSTANT_SEMI_WIDTH * w * Math.abs(v1 - v2)) / (Math.sqrt(bH) * (bM1 * Math.sqrt(v1) + bM2 * Math.sqrt(v2)));
+    flashPerMu[i] = f;
+    if (f > flashPerMuMax) flashPerMuMax = f;
+    const lnU = Math.log((m.sumVelocity[i] as number) / 2);
+    const lnR = Math.log(m.reducedRadius[i] as number);
+    radius[i] = m.reducedRadius[i] as number;
+    lnUbar[i] = lnU;
+    lnUPoint[i] = lnU - lnR;
+    lnWPoint[i] = Math.log(w) - lnE - lnR;
+  }
+  const last = n - 1;
+  const fullLoad = m.unitLoad * kBg;
+  const bHE = Math.sqrt((4 * fullLoad * (m.reducedRadius[last] as number)) / (Math.PI * m.contactModulus));
+  const v1E = m.v1[last] as number, v2E = m.v2[last] as number;
+  const flashEPerMu = (BLOK_CONSTANT_SEMI_WIDTH * fullLoad * Math.abs(v1E - v2E)) / (Math.sqrt(bHE) * (bM1 * Math.sqrt(v1E) + bM2 * Math.sqrt(v2E)));
+  const xEps = integralContactRatioFactor((g.points.E - g.points.C) / g.transverseBasePitch, Math.max(0, (g.points.C - g.points.A) / g.transverseBasePitch));
+  return {
+    input,
+    n,
+    flashPerMu,
+    flashPerMuMax,
+    lnUPoint,
+    lnWPoint,
+    lnUbar,
+    radius,
+    lnE,
+    ePrime,
+    sigma: RQ_PER_RA_GAUSSIAN * Math.sqrt(ra1 * ra1 + ra2 * ra2),
+    raAvg: ((ra1 + ra2) / 2) as Metres,
+    unitLoad: m.unitLoad,
+    kBg,
+    xS: LUBRICATION_FACTOR_XS[input.duty.lubrication],
+    xMp: multipleMeshFactor(input.duty.pinionMeshes),
+    xW: Math.min(input.pinion.structuralFactorXW, input.wheel.structuralFactorXW),
+    vSumC: m.sumVelocity[m.pitchIndex] as MetresPerSecond,
+    rhoC: m.reducedRadius[m.pitchIndex] as Metres,
+    intFlashPerMu: policy.integralFlashCalibration * flashEPerMu * xEps,
+  };
+}
+
+export function prepareSweepOil(sc: SweepCase, oil: EngineOil): SweepOil {
+  const xL = oil.model.lubricantFactor;
+  const thetaSOf = new Float64Array(13);
+  const thetaIntSOf = new Float64Array(13);
+  for (let s = 1; s <= 12; s++) {
+    thetaSOf[s] = scuffingTemperature(s, sc.xW, xL).value;
+    thetaIntSOf[s] = 80 + 0.23 * (FZG_A_PINION_TORQUE[s - 1] as number) * xL; // °C, ISO/TS 6336-21 [memory]
+  }
+  return { oil, thetaS: scuffingTemperature(oil.fzgFailureStage, sc.xW, xL).value, thetaSOf, thetaIntSOf, oilStage: oil.fzgFailureStage === '>12' ? 12 : oil.fzgFailureStage };
+}
+
+const codeFacts = { requiredStage: 1 as FzgStageNeed, requiredStageIntegral: 1 as FzgStageNeed, integralSafetyAtEpFloor: null as number | null, applicationFactor: 1, regime: 'mixed' as 'boundary' | 'mixed' | 'full-film' };
+
+/**
+ * λmin, SB, SintS and the verdict code of one cell: oil temperature `tOilC` (°C) and load fraction
+ * `f` of the case torque. Writes into `out`; allocates nothing. A cell at the case's own temperature
+ * and f = 1 equals analyseCase (tests/engine/sweep/operatingMap.test.ts).
+ */
+export function evaluateCell(sc: SweepCase, so: SweepOil, tOilC: number, f: number, out: CellResult): CellResult {
+  const { policy } = sc.input;
+  const model = so.oil.model;
+  const tOil = celsiusToKelvin(tOilC);
+  const etaOil = model.dynamicViscosity(tOil, `${sc.input.caseField}.oilTemperature_C`);
+  const mu = policy.frictionCoefficient ?? isoMeanFriction({ wBt: (sc.unitLoad * f) as NewtonsPerMetre, vSumC: sc.vSumC, rhoRelC: sc.rhoC, etaOil, raAvg: sc.raAvg, xL: model.lubricantFactor, kBgamma: sc.kBg });
+  const f75 = Math.pow(f, 0.75);
+  const flashMax = mu * f75 * sc.flashPerMuMax;
+  const thetaM = tOil + 0.47 * sc.xS * sc.xMp * flashMax;
+  const rise = thetaM + flashMax - tOil;
+  // Film at θM, clamped to the oil model's range as analyseCase does.
+  const tMax = model.temperatureRange.max;
+  const tFilm = (thetaM > tMax ? tMax : thetaM) as Kelvin;
+  const eta = model.dynamicViscosity(tFilm);
+  const lnG = Math.log(model.pressureViscosity(tFilm) * sc.ePrime);
+  const lnEta = Math.log(eta) - sc.lnE;
+  const lnF = Math.log(f);
+  const useDH = policy.filmFormula === 'dowson-higginson';
+  const kFilm = useDH ? 2.65 * Math.exp(0.54 * lnG) : 1.714 * Math.exp(0.568 * lnG);
+  const aU = useDH ? 0.7 : 0.694;
+  const aW = useDH ? -0.13 : -0.128;
+  const thermal = policy.thermalFilmCorrection;
+  const lnMW = Math.log((model.temperatureViscosity(tFilm) * eta) / MINERAL_OIL_CONDUCTIVITY);
+  let lmin = Infinity;
+  for (let i = 0; i < sc.n; i++) {
+    let h = (sc.radius[i] as number) * kFilm * Math.exp(aU * (lnEta + (sc.lnUPoint[i] as number)) + aW * ((sc.lnWPoint[i] as number) + lnF));
+    if (thermal) h *= 3.94 / (3.94 + Math.exp(0.62 * (lnMW + 2 * (sc.lnUbar[i] as number))));
+    if (h < lmin) lmin = h;
+  }
+  lmin /= sc.sigma;
+  const flashInt = mu * f75 * sc.intFlashPerMu;
+  const thetaIntC = tOilC + (INTEGRAL_WEIGHT_BULK * sc.xMp + INTEGRAL_WEIGHT_FLASH) * flashInt;
+  let need: FzgStageNeed = '>12';
+  let needInt: FzgStageNeed = '>12';
+  for (let s = 12; s >= 1; s--) {
+    if (rise <= 0 || ((so.thetaSOf[s] as number) - tOil) / rise >= policy.scuffingSafetyMin) need = s;
+    if (thetaIntC <= 0 || (so.thetaIntSOf[s] as number) / thetaIntC >= policy.integralSafetyMin) needInt = s;
+  }
+  codeFacts.requiredStage = need;
+  codeFacts.requiredStageIntegral = needInt;
+  codeFacts.integralSafetyAtEpFloor = thetaIntC > 0 ? (so.thetaIntSOf[policy.epOilFzgStage] as number) / thetaIntC : null;
+  codeFacts.applicationFactor = sc.input.duty.applicationFactor;
+  codeFacts.regime = lmin < policy.regime.boundaryBelow ? 'boundary' : lmin < policy.regime.fullFilmFrom ? 'mixed' : 'full-film';
+  out.lambdaMin = lmin;
+  out.scuffingSafety = rise > 0 ? (so.thetaS - tOil) / rise : Infinity;
+  out.integralSafety = thetaIntC > 0 ? (so.thetaIntSOf[so.oilStage] as number) / thetaIntC : Infinity;
+  out.verdict = VERDICT_CODES.indexOf(verdictCodeOf(codeFacts, policy));
+  return out;
+}
+
+/** The operating map of one load case with one oil over oil temperature × load. */
+export function operatingMap(input: CaseInput, axes: MapAxes, prepared: SweepCase = prepareSweep(input)): OperatingMap {
+  const oil = input.oil;
+  if (!oil) throw new Error('operatingMap needs an oil');
+  const so = prepareSweepOil(prepared, oil);
+  const nT = axes.temperatures_C.length;
+  const nL = axes.loadFractions.length;
+  const cells = nT * nL;
+  const lambdaMin = new Float64Array(cells);
+  const scuffingSafety = new Float64Array(cells);
+  const integralSafety = new Float64Array(cells);
+  const verdict = new Uint8Array(cells);
+  const cell: CellResult = { lambdaMin: 0, scuffingSafety: 0, integralSafety: 0, verdict: 0 };
+  for (let r = 0; r < nT; r++) {
+    for (let c = 0; c < nL; c++) {
+      evaluateCell(prepared, so, axes.temperatures_C[r] as number, axes.loadFractions[c] as number, cell);
+      const k = r * nL + c;
+      lambdaMin[k] = cell.lambdaMin;
+      scuffingSafety[k] = cell.scuffingSafety;
+      integralSafety[k] = cell.integralSafety;
+      verdict[k] = cell.verdict;
+    }
+  }
+  return { axes, lambdaMin, scuffingSafety, integralSafety, verdict };
+}

@@ -13,7 +13,9 @@ import { FINDER_PATH_POINTS } from '../app/review/gradeFinder';
 
 const DEMO = 'assets/demo/harrow-creek-crusher-hs-pair.flankfilm.json';
 
-function review(mutate: (r: any) => void): Review {
+type RawReview = { policy: Record<string, unknown>; oils: Array<Record<string, unknown>>; loadCases: unknown[] };
+
+function review(mutate: (r: RawReview) => void): Review {
   const raw = JSON.parse(readFileSync(DEMO, 'utf8'));
   mutate(raw);
   const p = parseReviewValue(raw);
@@ -25,7 +27,7 @@ function review(mutate: (r: any) => void): Review {
 function workload(points: number): Review {
   return review((r) => {
     r.policy.pathPoints = points;
-    r.oils.push({ ...r.oils[1], name: 'Candidate: ISO VG 460 EP mineral (invented data sheet)', role: 'candidate', kv40_mm2s: 460, kv100_mm2s: 30.6, viscosityIndex: undefined });
+    r.oils.push({ ...(r.oils[1] as Record<string, unknown>), name: 'Candidate: ISO VG 460 EP mineral (invented data sheet)', role: 'candidate', kv40_mm2s: 460, kv100_mm2s: 30.6, viscosityIndex: undefined });
   });
 }
 

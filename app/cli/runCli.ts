@@ -10,6 +10,8 @@ const COMMANDS: Record<string, Command> = {
   review: reviewCommand,
   schema: schemaCommand,
   demo: demoCommand,
+  sign: async (args, io) => (await import('./commands/sign')).signCommand(args, io),
+  verify: async (args, io) => (await import('./commands/verify')).verifyCommand(args, io),
 };
 
 /** Register a command (the record commands live in their own module). */

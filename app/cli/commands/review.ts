@@ -54,8 +54,8 @@ export async function reviewCommand(args: string[], io: CliIo): Promise<number> 
     }
   }
   if (values.pdf || values.csv) {
-    io.err('flankfilm review: --pdf and --csv are not in this build yet (the record lands next).\n');
-    return EXIT.usage;
+    const { writeOutputs } = await import('../outputs');
+    return writeOutputs(loaded.review, results, { pdf: values.pdf, csv: values.csv, p12: values.p12, paper }, io);
   }
   return EXIT.ok;
 }

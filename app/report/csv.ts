@@ -1,0 +1,63 @@
+/**
+ * One CSV of every point along the path of every case (load case × oil), for a spreadsheet:
+ * a header row of names with units, RFC 4180 quoting, CRLF line ends, a UTF-8 byte-order mark
+ * (so spreadsheet programs read σ, θ and µ correctly), '.' as the decimal sign, and an empty
+ * cell where the engine gives no value (no oil, so no film). Pure.
+ */
+import type { PointResult, Results } from '../review/results';
+import { unitsFor, type Quantity, type UnitSystem } from './units';
+
+interface CsvColumn {
+  name: string;
+  quantity: Quantity | null;
+  get: (p: PointResult) => number | string | null;
+}
+
+const COLUMNS: readonly CsvColumn[] = [
+  { name: 'position from T1', quantity: 'length', get: (p) => p.position_mm },
+  { name: 'path fraction A→E', quantity: 'none', get: (p) => p.pathFraction },
+  { name: 'load share XΓ', quantity: 'none', get: (p) => p.loadShare },
+  { name: 'Hertz stress σH', quantity: 'stress', get: (p) => p.hertzStress_MPa },
+  { name: 'sliding velocity vg', quantity: 'velocity', get: (p) => p.slidingVelocity_mps },
+  { name: 'sum velocity vΣ', quantity: 'velocity', get: (p) => p.sumVelocity_mps },
+  { name: 'slide-to-roll ratio', quantity: 'none', get: (p) => p.slideToRoll },
+  { name: 'film thickness hmin', quantity: 'film', get: (p) => p.filmThicknessMin_um },
+  { name: 'film thickness hc', quantity: 'film', get: (p) => p.filmThicknessCentral_um },
+  { name: 'specific film λ', quantity: 'none', get: (p) => p.lambda },
+  { name: 'specific film λGF', quantity: 'none', get: (p) => p.lambdaGF },
+  { name: 'regime', quantity: null, get: (p) => p.regime },
+  { name: 'flash temperature θfl', quantity: 'temperatureRise', get: (p) => p.flashTemperature_K },
+  { name: 'contact temperature θB', quantity: 'temperature', get: (p) => p.contactTemperature_C },
+];
+
+function quote(s: string): string {
+  return /[",\r\n]/.test(s) ? `"${s.replace(/"/g, '""')}"` : s;
+}
+
+/** Plain decimal with up to 10 significant digits, no exponent a spreadsheet could misread. */
+function csvNumber(x: number): string {
+  if (!Number.isFinite(x)) return '';
+  const s = Number(x.toPrecision(10)).toString();
+  if (!/e/i.test(s)) return s;
+  const fixed = x.toFixed(Math.min(20, Math.max(0, 10 - Math.floor(Math.log10(Math.abs(x))) - 1)));
+  return fixed.includes('.') ? fixed.replace(/\.?0+$/, '') : fixed;
+}
+
+export function resultsToCsv(results: Results, system: UnitSystem = 'si'): string {
+  const u = unitsFor(system);
+  const header = ['load case', 'oil', 'point', ...COLUMNS.map((c) => (c.quantity ? `${c.name} (${u.unit(c.quantity) || '–'})` : c.name))];
+  const lines = [header.map(quote).join(',')];
+  for (const c of results.cases) {
+    c.path.forEach((p, i) => {
+      const cells = [c.loadCase, c.oil ?? '', String(i)];
+      for (const col of COLUMNS) {
+        const v = col.get(p);
+        if (v === null) cells.push('');
+        else if (typeof v === 'string') cells.push(v);
+        else cells.push(csvNumber(col.quantity ? u.value(v, col.quantity) : v));
+      }
+      lines.push(cells.map(quote).join(','));
+    });
+  }
+  return `\uFEFF${lines.join('\r\n')}\r\n`;
+}

@@ -1,0 +1,67 @@
+/**
+ * The "Methods and sources" section of the record: every formula the engine uses, with its
+ * published source. `basis` says how firmly the value or form is held:
+ *   'published'        — the form as the cited standard or paper gives it;
+ *   'memory'           — recalled, consistent with our arithmetic, not read from the text: printed "[memory]";
+ *   'common practice'  — a rule of thumb with no single source: printed "common practice".
+ */
+export type MethodBasis = 'published' | 'memory' | 'common practice';
+
+export interface MethodEntry {
+  readonly topic: string;
+  readonly quantity: string;
+  readonly formula: string;
+  readonly source: string;
+  readonly basis: MethodBasis;
+}
+
+export const METHODS: readonly MethodEntry[] = [
+  // Geometry
+  { topic: 'Geometry', quantity: 'Reference and base diameters', formula: 'd = z mn / cos β;  αt = atan(tan αn / cos β);  db = d cos αt', source: 'ISO 21771', basis: 'published' },
+  { topic: 'Geometry', quantity: 'Working pressure angle and centre distance', formula: 'inv αwt = inv αt + 2 tan αn (x1 + x2)/(z1 + z2);  a = (d1 + d2)/2 · cos αt / cos αwt', source: 'ISO 21771', basis: 'published' },
+  { topic: 'Geometry', quantity: 'Points A–E on the line of action (from T1)', formula: 'T1T2 = a sin αwt;  T1A = T1T2 − √(ra2² − rb2²);  T1E = √(ra1² − rb1²);  T1C = rb1 tan αwt;  T1B = T1E − pbt;  T1D = T1A + pbt', source: 'ISO 21771', basis: 'published' },
+  { topic: 'Geometry', quantity: 'Contact ratios', formula: 'εα = (T1E − T1A)/pbt;  εβ = b sin β / (π mn)', source: 'ISO 21771', basis: 'published' },
+  { topic: 'Geometry', quantity: 'Undercut limit', formula: 'x ≥ (14 − zn)/17 for αn = 20°', source: 'common practice', basis: 'common practice' },
+  { topic: 'Geometry', quantity: 'Pointed tip', formula: 'normal tip thickness ≥ 0.2 mn', source: 'common practice (case-hardened gears)', basis: 'common practice' },
+  // Kinematics
+  { topic: 'Kinematics', quantity: 'Flank, sum and sliding velocities', formula: 'v1 = ω1 ρ1, v2 = ω2 ρ2;  vΣ = v1 + v2;  vg = |v1 − v2|;  slide-to-roll = 2(v1 − v2)/(v1 + v2)', source: 'ISO 21771 geometry; kinematics of involute gearing', basis: 'published' },
+  // Load
+  { topic: 'Load', quantity: 'Tooth forces', formula: 'T1 = P/ω1;  Ft = 2 T1/d1;  Fbt = Ft / cos αt', source: 'ISO 6336-1', basis: 'published' },
+  { topic: 'Load', quantity: 'Load sharing XΓ along the path', formula: 'spur, unmodified: 1/3 → 2/3 from A to B, 1 from B to D, 2/3 → 1/3 from D to E; helical with εβ ≥ 1: 1/εα', source: 'ISO/TS 6336-20; DIN 3990-4', basis: 'memory' },
+  // Stress
+  { topic: 'Contact stress', quantity: 'Hertz line contact', formula: 'pH = √(w E* / (π ρred,n));  bH = √(4 w ρred,n / (π E*));  ρn = ρ / cos βb', source: 'H. Hertz (1882); ISO 6336-2', basis: 'published' },
+  { topic: 'Contact stress', quantity: 'Nominal contact stress', formula: 'σH0 = ZH ZE Zε Zβ √(Ft (u + 1)/(d1 b u));  σH = σH0 √(KA Kv KHβ KHα)', source: 'ISO 6336-2', basis: 'published' },
+  { topic: 'Contact stress', quantity: 'Contact-ratio factor, helical forms', formula: 'Zε per ISO 6336-2 helical forms', source: 'ISO 6336-2', basis: 'memory' },
+  // Oil
+  { topic: 'Oil', quantity: 'Viscosity–temperature', formula: 'log log (ν + 0.7 + …) = A − B log T (T in K), anchored at KV40 and KV100', source: 'ASTM D341', basis: 'published' },
+  { topic: 'Oil', quantity: 'Viscosity index', formula: 'VI = 100 (L − U)/(L − H); for VI > 100: N = (log H − log U)/log Y, VI = (10^N − 1)/0.00715 + 100', source: 'ASTM D2270', basis: 'published' },
+  { topic: 'Oil', quantity: 'ISO viscosity grade', formula: 'VG band ±10 % of its mid-point at 40 °C', source: 'ISO 3448', basis: 'published' },
+  { topic: 'Oil', quantity: 'Density at temperature', formula: 'ρ(θ) = ρ15 − 0.7 (θ − 15) kg/m³', source: 'ISO/TR 15144-1 form', basis: 'memory' },
+  { topic: 'Oil', quantity: 'Pressure–viscosity coefficient', formula: 'α38 = k η38^n (per base oil);  α(θ) = α38 [1 + 516 (1/(θ + 273) − 1/311)]', source: 'ISO/TR 15144-1 form', basis: 'memory' },
+  { topic: 'Oil', quantity: 'Pressure–viscosity, ester and traction fluids', formula: 'typical α38 values', source: 'Jones et al. (1975), NASA TN D-8024', basis: 'memory' },
+  { topic: 'Oil', quantity: 'Lubricant factor XL', formula: 'mineral 1.0, PAO 0.8, PAG (insoluble) 0.7, PAG (soluble) 0.6, traction 1.5, phosphate ester 1.3', source: 'ISO/TS 6336-20', basis: 'memory' },
+  // Film
+  { topic: 'Film', quantity: 'Minimum film, line contact', formula: 'Hmin = 2.65 U^0.7 G^0.54 W^−0.13;  U = η0 ū/(E′R), G = α E′, W = w/(E′R)', source: 'Dowson & Higginson, Elasto-Hydrodynamic Lubrication (1966/1977)', basis: 'memory' },
+  { topic: 'Film', quantity: 'Minimum and central film (alternative)', formula: 'Hmin = 1.714 W^−0.128 U^0.694 G^0.568;  Hc = 2.922 W^−0.166 U^0.692 G^0.470', source: 'Pan & Hamrock, ASME J. Tribology 111 (1989)', basis: 'memory' },
+  { topic: 'Film', quantity: 'Inlet shear heating', formula: 'φT = 3.94/(3.94 + L^0.62);  L = β η0 ū²/kf', source: 'Murch & Wilson, ASME J. Lubr. Technol. 97 (1975)', basis: 'memory' },
+  { topic: 'Film', quantity: 'Oil thermal conductivity', formula: 'kf ≈ 0.13 W/(m·K), mineral oil', source: 'common practice', basis: 'common practice' },
+  { topic: 'Film', quantity: 'Local film for λGF', formula: 'hY = 1600 ρn,Y G^0.6 U^0.7 W^−0.13 SGF^0.22 (µm, ρ in mm)', source: 'ISO/TR 15144-1', basis: 'memory' },
+  { topic: 'Film', quantity: 'Specific film thickness', formula: 'λ = hmin / √(Rq1² + Rq2²), Rq ≈ 1.25 Ra;  λGF = h / Ra,avg', source: 'Tallian film parameter (common practice); ISO/TS 6336-22 for λGF', basis: 'common practice' },
+  { topic: 'Film', quantity: 'Lubrication regime', formula: 'λ < 1 boundary; 1 ≤ λ < 3 mixed; λ ≥ 3 full film (EHL) — limits set by the policy', source: 'common practice', basis: 'common practice' },
+  { topic: 'Film', quantity: 'Anti-wear tribofilm thickness', formula: '≈ 50–150 nm', source: 'common practice', basis: 'common practice' },
+  // Heat and scuffing
+  { topic: 'Scuffing', quantity: 'Mean friction coefficient', formula: 'μm = 0.045 (wBt KBγ/(vΣC ρrelC))^0.2 ηoil^−0.05 XR XL;  XR = 2.2 (Ra/ρrelC)^0.25', source: 'ISO/TS 6336-20', basis: 'memory' },
+  { topic: 'Scuffing', quantity: 'Flash temperature (Blok)', formula: 'θfl = 0.80 μ w |√v1 − √v2| / (BM √bH);  BM = √(k ρ c)', source: 'H. Blok (1937); AGMA 925 form', basis: 'memory' },
+  { topic: 'Scuffing', quantity: 'Bulk and contact temperature', formula: 'θM = θoil + 0.47 XS Xmp θfl,max (XS 1.0 dip, 1.2 spray; Xmp = (1 + np)/2);  θB = θM + θfl', source: 'ISO/TS 6336-20', basis: 'memory' },
+  { topic: 'Scuffing', quantity: 'Scuffing temperature from the FZG stage', formula: 'θS = 80 + (0.85 + 1.4 XW) XL S² °C', source: 'ISO/TS 6336-20; ISO 14635-1 (FZG A/8.3/90)', basis: 'memory' },
+  { topic: 'Scuffing', quantity: 'Scuffing safety', formula: 'SB = (θS − θoil)/(θB,max − θoil);  default SB,min = 1.5', source: 'ISO/TS 6336-20 (the default minimum is [memory], weak)', basis: 'memory' },
+  { topic: 'Scuffing', quantity: 'Integral temperature method', formula: 'θint = θM + 1.5 θfla,int;  θintS = 80 + 0.23 T1T XL;  SintS = θintS/θint;  default SintS,min = 1.8', source: 'ISO/TS 6336-21', basis: 'memory' },
+  { topic: 'Scuffing', quantity: 'Scuffing probability', formula: 'θS ~ Normal(θS, σ = spread · θS);  P = Φ((θB,max − θS)/σ); default spread 0.15', source: 'AGMA 925 form', basis: 'memory' },
+  { topic: 'Oil classes', quantity: 'FZG floors of the oil classes', formula: 'EP gear oil (CLP) FZG A/8.3/90 ≥ 12; anti-wear hydraulic oil (HLP) ≥ 10; R&O and turbine oils usually 5–9', source: 'DIN 51517-3; DIN 51524-2; R&O range common practice', basis: 'published' },
+  { topic: 'Verdict', quantity: 'EP escalation for shock duty', formula: 'KA at or above the policy limit (default 1.75) counts as shock duty', source: 'common practice', basis: 'common practice' },
+];
+
+/** The tag printed after a method's source. */
+export function basisTag(b: MethodBasis): string {
+  return b === 'memory' ? '[memory]' : b === 'common practice' ? 'common practice' : '';
+}

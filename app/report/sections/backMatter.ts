@@ -1,0 +1,117 @@
+import { FINGERPRINT_SCHEME } from '../../review/fingerprint';
+import type { RecordContext } from '../context';
+import { drawStatusIcon, STATUS_COLOURS } from '../icons';
+import { basisTag, METHODS } from '../methods';
+import { caseTitle } from './caseResults';
+import { DECISION_WORDS, GREY, STATUS_LABELS } from '../words';
+
+/** Methods and sources: the static list, then the assumptions the engine states for this review. */
+export function drawMethods(ctx: RecordContext): void {
+  const L = ctx.layout;
+  L.newPage();
+  L.heading('Methods and sources');
+  L.para('Every formula the computation uses, with its standard or paper. “[memory]” marks a form or value recalled and checked against our own arithmetic but not read from the text; “common practice” marks a rule of thumb with no single source.', { size: 8.5 });
+  L.table(
+    [
+      { header: 'Topic', width: 0.11 },
+      { header: 'Quantity', width: 0.19 },
+      { header: 'Formula', width: 0.43 },
+      { header: 'Source', width: 0.27 },
+    ],
+    METHODS.map((m) => [m.topic, m.quantity, m.formula, sourceWithTag(m.source, basisTag(m.basis))]),
+    { fontSize: 7, zebra: true },
+  );
+  L.heading('Assumptions for this review', 2);
+  for (const a of ctx.results.assumptions) L.bullet(a, { size: 8.5 });
+  const friction = [...new Set(ctx.results.cases.map((c) => c.frictionSource).filter((s): s is string => !!s))];
+  const film = [...new Set(ctx.results.cases.map((c) => c.filmFormula).filter((s): s is string => !!s))];
+  if (film.length) L.bullet(`Film formula used: ${film.join(', ')}.`, { size: 8.5 });
+  if (friction.length) L.bullet(`Friction coefficient from: ${friction.join(', ')}.`, { size: 8.5 });
+  for (const o of ctx.results.oils) L.bullet(`${o.name}: viscosity index from ${o.viscosityIndexSource}; lubricant factor XL = ${o.lubricantFactorXL}.`, { size: 8.5 });
+}
+
+/** Warnings and validity notes from the engine. */
+export function drawWarnings(ctx: RecordContext): void {
+  const { layout: L, results } = ctx;
+  L.heading('Warnings and validity notes', 1);
+  const rows: string[][] = [
+    ...results.gear.checks.map((c) => ['Gear pair', c.severity, c.code, c.message]),
+    ...results.oils.flatMap((o) => o.warnings.map((w) => [`Oil: ${o.name}`, w.severity, `${w.code} (${w.field})`, w.message])),
+    ...results.cases.flatMap((c) => c.warnings.map((w) => [caseTitle(c), w.severity, `${w.code} (${w.field})`, w.message])),
+  ];
+  if (rows.length === 0) {
+    L.para('The engine raised no warnings: every formula was used inside its stated validity range, and the gear pair passed its design checks.', { size: 9 });
+    return;
+  }
+  L.table(
+    [
+      { header: 'Where', width: 0.22 },
+      { header: 'Severity', width: 0.09 },
+      { header: 'Code (field)', width: 0.22 },
+      { header: 'Message', width: 0.47 },
+    ],
+    rows,
+    { fontSize: 7.5, zebra: true },
+  );
+}
+
+/** The sign-off block and the fingerprint with its parts. */
+export function drawSignoff(ctx: RecordContext): void {
+  const { layout: L, review, status, parts } = ctx;
+  const doc = L.doc;
+  L.ensure(330);
+  L.heading('Sign-off', 1);
+  const top = L.y;
+  drawStatusIcon(doc, status, L.left, top, 13);
+  L.font(true, 11, STATUS_COLOURS[status]).text(STATUS_LABELS[status], L.left + 19, top, { width: L.width - 19 });
+  L.y += 4;
+  const s = review.signoff;
+  if (s) {
+    L.keyValues(
+      [
+        ['Reviewer', s.reviewer],
+        ['Role', s.role],
+        ['Organisation', s.organisation ?? '—'],
+        ['Decision', DECISION_WORDS[s.decision]],
+        ['Conditions', s.conditions ?? '—'],
+        ['Signed at', s.signedAt],
+        ['Engine version at signing', s.engineVersion],
+        ['Fingerprint at signing', s.fingerprint],
+      ],
+      { labelShare: 0.3, size: 8.5 },
+    );
+    if (status === 'changed-since-signing') {
+      L.para('The fingerprint recomputed for this record differs from the one signed: this sign-off does not cover the record as it stands. Sign the review again after checking the changes.', { size: 8.5 });
+    }
+  } else {
+    L.para('Not signed. To sign, the reviewer runs: flankfilm sign REVIEW.flankfilm.json --reviewer NAME --role ROLE --decision approved|approved-with-conditions|not-approved', { size: 8.5 });
+    L.y += 6;
+    for (const label of ['Reviewer', 'Role and organisation', 'Decision and conditions', 'Date and signature']) {
+      L.ensure(24);
+      const y = L.y + 14;
+      L.font(false, 8.5).text(label, L.left, y - 10, { width: 150, lineBreak: false });
+      doc.moveTo(L.left + 150, y).lineTo(L.right, y).lineWidth(0.5).strokeColor(GREY).stroke();
+      L.y = y + 8;
+    }
+    L.y += 4;
+  }
+  L.heading('Fingerprint of this record', 2);
+  L.keyValues(
+    [
+      ['Fingerprint (SHA-256)', parts.combined],
+      ['Inputs', parts.inputs],
+      ['Results summary', parts.results],
+      ['Engine version', `${parts.engine} (Flankfilm ${parts.engineVersion})`],
+      ['Scheme', FINGERPRINT_SCHEME],
+    ],
+    { labelShare: 0.22, size: 7.5 },
+  );
+  L.para(
+    'The fingerprint is SHA-256 over canonical JSON (sorted keys, no whitespace) of the review without its sign-off’s fingerprint and signing time, a defined summary of the results (per case the key figures and verdict codes, and the verdict per oil) and the engine version. The review is attached to this PDF; `flankfilm verify` recomputes it and names the part that differs.',
+    { size: 7.5, color: GREY },
+  );
+}
+
+function sourceWithTag(source: string, tag: string): string {
+  return tag && !source.includes(tag) ? `${source} ${tag}` : source;
+}

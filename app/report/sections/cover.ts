@@ -1,0 +1,110 @@
+import { drawStatusIcon, drawVerdictIcon, STATUS_COLOURS } from '../icons';
+import type { RecordContext } from '../context';
+import { FONT_REGULAR } from '../layout';
+import { formatPercent } from '../units';
+import { DECISION_WORDS, DEFER_TEXT, GREY, INK, OIL_FIT_WORDS, STATUS_LABELS, VERDICT_WORDS } from '../words';
+
+/** Cover: title, id, revision, state, date, and the overall verdict per oil, one entry each. */
+export function drawCover(ctx: RecordContext): void {
+  const { layout: L, review, results, status, parts } = ctx;
+  const doc = L.doc;
+  L.font(true, 8, GREY).text('FLANKFILM RECORD · LUBRICATION REVIEW OF A CYLINDRICAL GEAR PAIR', L.left, L.top, { width: L.width, characterSpacing: 0.6 });
+  L.y += 8;
+  L.font(true, 18).text(review.title, L.left, L.y, { width: L.width, lineGap: 2 });
+  L.y += 10;
+
+  const rows: Array<[string, string]> = [
+    ['Review id', review.id ?? '—'],
+    ['Revision', String(review.revision)],
+    ['Date', review.date ?? '—'],
+    ['Engine version', `Flankfilm ${parts.engineVersion}`],
+    ['Fingerprint (SHA-256)', parts.combined],
+  ];
+  L.keyValues(rows, { labelShare: 0.26, size: 9 });
+
+  // State, with its icon and word
+  const y = L.y + 2;
+  drawStatusIcon(doc, status, L.left, y, 16);
+  L.font(true, 13, STATUS_COLOURS[status]).text(STATUS_LABELS[status], L.left + 24, y + 1, { width: L.width - 24 });
+  L.y = y + 20;
+  const s = review.signoff;
+  if (s) {
+    const line =
+      status === 'signed'
+        ? `Signed by ${s.reviewer} (${s.role}${s.organisation ? `, ${s.organisation}` : ''}) at ${s.signedAt}: ${DECISION_WORDS[s.decision]}.`
+        : `The sign-off by ${s.reviewer} (${s.signedAt}) no longer matches: an input, a result or the engine version has changed since signing. The sign-off is shown on the last page for reference only.`;
+    L.para(line, { size: 9 });
+  } else {
+    L.para('Not signed. This record has no sign-off yet; it states the computation, not a decision.', { size: 9, color: GREY });
+  }
+  L.y += 6;
+
+  L.heading('Verdict per oil', 2);
+  if (results.verdicts.length === 0) {
+    L.para('No oils are in scope: the record gives the gear pair’s stresses and velocities only, with no film, temperature or verdict.', { size: 9 });
+  }
+  for (const v of results.verdicts) {
+    const text = `${VERDICT_WORDS[v.code]} — ${v.oil}`;
+    const detail = `Governing load case: ${v.governingLoadCase}; ${OIL_FIT_WORDS[v.oilFit]}; the need is met for ${formatPercent(v.dutyShareMet)} of the duty by time share.`;
+    L.font(true, 9.5);
+    const h = doc.heightOfString(text, { width: L.width - 22 }) + doc.font(FONT_REGULAR).fontSize(8.5).heightOfString(detail, { width: L.width - 22 }) + 8;
+    L.ensure(h);
+    const top = L.y;
+    drawVerdictIcon(doc, v.code, L.left, top, 14);
+    L.font(true, 9.5).text(text, L.left + 22, top + 1, { width: L.width - 22 });
+    L.font(false, 8.5, INK).text(detail, L.left + 22, L.y + 1, { width: L.width - 22 });
+    L.y += 7;
+  }
+  L.y += 4;
+  drawJob(ctx);
+  L.y += 6;
+  cautionBox(ctx, DEFER_TEXT);
+}
+
+/** The job in one paragraph, with the scope and what was not assessed. */
+function drawJob(ctx: RecordContext): void {
+  const { layout: L, review, results } = ctx;
+  const gp = review.gearPair;
+  const kind = gp.helixAngle_deg > 0 ? `helical (β = ${gp.helixAngle_deg}°)` : 'spur';
+  const oils = review.oils.map((o) => `“${o.name}” (${o.role})`).join(', ');
+  const cases = review.loadCases.map((c) => `“${c.name}”`).join(', ');
+  L.heading('The job', 2);
+  L.para(
+    `This review checks the lubrication of one external ${kind} gear pair, z1/z2 = ${gp.pinion.teeth}/${gp.wheel.teeth}, ` +
+      `mn = ${ctx.units.fmt(gp.normalModule_mm, 'length')}, b = ${ctx.units.fmt(gp.faceWidth_mm, 'length')}, ` +
+      `under ${review.loadCases.length} load case${review.loadCases.length === 1 ? '' : 's'} (${cases})` +
+      (review.oils.length ? `, for ${review.oils.length} candidate oil${review.oils.length === 1 ? '' : 's'}: ${oils}. ` : ', with no oil in scope. ') +
+      'Along the line of action from A to E it computes the geometry (ISO 21771), the load sharing and Hertz contact stress (ISO 6336-2, ISO/TS 6336-20), ' +
+      'the elastohydrodynamic film and the specific film thickness λ, the flash and contact temperatures and the scuffing safety by the flash temperature ' +
+      'and integral temperature methods (ISO/TS 6336-20 and -21), and from them whether anti-wear chemistry suffices, EP chemistry is warranted, or the duty is beyond oil chemistry.',
+    { size: 9 },
+  );
+  const notAssessed = [
+    'tooth-root bending strength (ISO 6336-3)',
+    'pitting and wear life (ISO 6336-2 life factors)',
+    'micropitting load capacity (only a λGF screen is given, ISO/TS 6336-22)',
+    'the thermal rating of the housing and the sump temperature it reaches (the oil temperature is an input)',
+    'the dynamic and load-distribution factors Kv, KHβ and KHα (inputs, see the assumptions)',
+  ];
+  L.para(`Not assessed: ${notAssessed.join('; ')}.`, { size: 9 });
+  if (review.notes) L.para(`Notes: ${review.notes}`, { size: 8.5, color: GREY });
+  if (results.title !== review.title) L.para(`Results title: ${results.title}`, { size: 8, color: GREY });
+}
+
+export function cautionBox(ctx: RecordContext, text: string): void {
+  const L = ctx.layout;
+  const doc = L.doc;
+  L.font(false, 8.5);
+  const h = doc.heightOfString(text, { width: L.width - 36, lineGap: 1.5 }) + 14;
+  L.ensure(h + 4);
+  const top = L.y;
+  doc.save();
+  doc.rect(L.left, top, L.width, h).lineWidth(0.8).strokeColor(GREY).stroke();
+  // A hollow "i" disc: an information mark, no verdict colour.
+  doc.circle(L.left + 14, top + 14, 6).lineWidth(1).strokeColor(INK).stroke();
+  doc.rect(L.left + 13.3, top + 12.5, 1.4, 4.5).fillColor(INK).fill();
+  doc.rect(L.left + 13.3, top + 10, 1.4, 1.4).fillColor(INK).fill();
+  doc.restore();
+  L.font(false, 8.5).text(text, L.left + 28, top + 7, { width: L.width - 36, lineGap: 1.5 });
+  L.y = top + h + 6;
+}

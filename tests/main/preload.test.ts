@@ -1,0 +1,69 @@
+import { describe, expect, it, vi } from 'vitest';
+import { CALL_NAMES } from '../../app/bridge/contract';
+
+const exposed: Record<string, unknown> = {};
+const menuListeners: Array<(event: unknown, payload: unknown) => void> = [];
+const ipcRenderer = {
+  invoke: vi.fn(async (channel: string, args: unknown) => {
+    if (channel === 'flankfilm:openReview') throw new Error("Error invoking remote method 'flankfilm:openReview': UserError: cannot open x.json: the file does not exist");
+    return { channel, args };
+  }),
+  on: vi.fn((channel: string, fn: (event: unknown, payload: unknown) => void) => {
+    if (channel === 'flankfilm:menu') menuListeners.push(fn);
+  }),
+  send: vi.fn(),
+};
+vi.mock('electron', () => ({
+  contextBridge: { exposeInMainWorld: vi.fn((key: string, api: unknown) => (exposed[key] = api)) },
+  ipcRenderer,
+  webUtils: { getPathForFile: vi.fn(() => '/home/u/review.flankfilm.json') },
+}));
+
+await import('../../main/preload');
+const { contextBridge } = await import('electron');
+const bridge = exposed.flankfilm as Record<string, (...a: unknown[]) => unknown>;
+
+describe('the preload bridge', () => {
+  it('exposes window.flankfilm once, with the contract calls, onMenu and pathForFile only', () => {
+    expect(contextBridge.exposeInMainWorld).toHaveBeenCalledTimes(1);
+    expect(Object.keys(exposed)).toEqual(['flankfilm']);
+    expect(Object.keys(bridge).sort()).toEqual([...CALL_NAMES, 'onMenu', 'pathForFile'].sort());
+    for (const value of Object.values(bridge)) expect(typeof value).toBe('function');
+  });
+
+  it('never hands out ipcRenderer or its methods', () => {
+    for (const value of Object.values(bridge)) {
+      expect(value).not.toBe(ipcRenderer);
+      expect(value).not.toBe(ipcRenderer.invoke);
+      expect(value).not.toBe(ipcRenderer.send);
+      expect(value).not.toBe(ipcRenderer.on);
+    }
+  });
+
+  it('each call invokes its own channel with the arguments', async () => {
+    await expect(bridge.appInfo?.({})).resolves.toEqual({ channel: 'flankfilm:appInfo', args: {} });
+    await expect(bridge.saveReview?.({ path: null, text: '{}', saveAs: true })).resolves.toEqual({ channel: 'flankfilm:saveReview', args: { path: null, text: '{}', saveAs: true } });
+  });
+
+  it("passes main's refusal on as a plain message", async () => {
+    await expect(bridge.openReview?.({ path: 'x.json' })).rejects.toThrow(/^cannot open x\.json: the file does not exist$/);
+  });
+
+  it('onMenu gives the listener the command only (never the IPC event), early ones included', () => {
+    const event = { sender: ipcRenderer };
+    menuListeners[0]?.(event, { command: 'open', path: '/home/u/a.flankfilm.json' });
+    const got: unknown[] = [];
+    const off = bridge.onMenu?.((e: unknown) => got.push(e)) as () => void;
+    menuListeners[0]?.(event, { command: 'save', extra: 'dropped' });
+    menuListeners[0]?.(event, { command: 'format-disk' });
+    menuListeners[0]?.(event, null);
+    expect(got).toEqual([{ command: 'open', path: '/home/u/a.flankfilm.json' }, { command: 'save' }]);
+    off();
+    menuListeners[0]?.(event, { command: 'new' });
+    expect(got).toHaveLength(2);
+  });
+
+  it('pathForFile asks webUtils', () => {
+    expect(bridge.pathForFile?.({})).toBe('/home/u/review.flankfilm.json');
+  });
+});

@@ -133,7 +133,7 @@ export function caseToResult(review: Review, lc: LoadCase, oil: ReviewOil | null
     scuffingProbability: sc ? orNull(sc.probability) : null,
     lambdaGFMin: film ? film.lambdaGFMin : null,
     micropittingAdvisory: film ? micropittingAdvisory(film.lambdaGFMin) : null,
-    verdict: verdict ? { code: verdict.code, oilFit: verdict.oilFit, reasons: verdict.reasons, cautions: verdict.cautions } : null,
+    verdict: verdict ? { code: verdict.code, oilFit: verdict.oilFit, shortfalls: verdict.shortfalls, reasons: verdict.reasons, cautions: verdict.cautions } : null,
     warnings: a.warnings,
   };
 }

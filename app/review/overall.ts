@@ -1,4 +1,4 @@
-import type { CaseResult, OverallVerdict, VerdictCode } from './results';
+import type { CaseResult, OverallVerdict, Shortfall, VerdictCode } from './results';
 import type { Review } from './schema';
 
 const SEVERITY: Record<VerdictCode, number> = { 'aw-suffices': 0, 'ep-warranted': 1, 'beyond-oil': 2 };
@@ -8,6 +8,12 @@ const WORDS: Record<VerdictCode, string> = {
   'beyond-oil': 'Beyond oil chemistry',
 };
 export const VERDICT_WORDS = WORDS;
+const SHORTFALL_ORDER: readonly Shortfall[] = ['chemistry', 'fzg-stage', 'film'];
+const SHORTFALL_WORDS: Record<Shortfall, string> = {
+  chemistry: 'chemistry',
+  'fzg-stage': 'its FZG stage',
+  film: 'film thickness (λ below target: a viscosity-grade matter)',
+};
 
 /**
  * The verdict per oil across the load cases. A safety decision is not averaged away: the code is
@@ -31,13 +37,19 @@ export function overallVerdicts(review: Review, cases: readonly CaseResult[]): O
     const met = mine.filter((x) => x.c.verdict?.oilFit === 'meets').reduce((s, x) => s + x.share, 0);
     const code = (gov.c.verdict as NonNullable<CaseResult['verdict']>).code;
     const fit = mine.every((x) => x.c.verdict?.oilFit === 'meets') ? 'meets' : 'falls-short';
+    const shortfalls = SHORTFALL_ORDER.filter((s) => mine.some((x) => x.c.verdict?.shortfalls.includes(s)));
+    const short = total > 0 ? 1 - met / total : 1;
     out.push({
       oil: oil.name,
       code,
       oilFit: fit,
       governingLoadCase: gov.c.loadCase,
       dutyShareMet: total > 0 ? met / total : 0,
-      summary: `${WORDS[code]} (governing case: ${gov.c.loadCase}); this oil ${fit === 'meets' ? 'meets the need' : 'falls short'}${fit === 'meets' ? '' : ` for ${(100 * (1 - (total > 0 ? met / total : 0))).toFixed(0)} % of the duty by time share`}.`,
+      shortfalls,
+      summary:
+        code === 'beyond-oil'
+          ? `${WORDS[code]} (governing case: ${gov.c.loadCase}): no oil in scope gives the margin; change the design or the duty.`
+          : `${WORDS[code]} (governing case: ${gov.c.loadCase}); this oil ${fit === 'meets' ? 'meets the need' : `falls short on ${shortfalls.map((s) => SHORTFALL_WORDS[s]).join(', ')} for ${(100 * short).toFixed(0)} % of the duty by time share`}.`,
     });
   }
   return out;

@@ -56,9 +56,13 @@ export interface Caution {
   kind: 'standing' | 'triggered';
 }
 
+export type Shortfall = 'film' | 'fzg-stage' | 'chemistry';
+
 export interface CaseVerdict {
   code: VerdictCode;
   oilFit: OilFit | null;
+  /** What the oil falls short on: its film λ (a grade matter), its FZG stage, or its chemistry. */
+  shortfalls: Shortfall[];
   reasons: VerdictReason[];
   cautions: Caution[];
 }
@@ -130,6 +134,8 @@ export interface OverallVerdict {
   governingLoadCase: string;
   /** Time-share-weighted fraction of duty for which the oil meets the need. */
   dutyShareMet: number;
+  /** Every shortfall over the load cases. */
+  shortfalls: Shortfall[];
   summary: string;
 }
 

@@ -1,7 +1,7 @@
 import { cautionsFor } from './cautions';
 import { RULES, type RuleOutcome } from './rules';
 import { verdictCodeOf } from './code';
-import type { Reason, Verdict, VerdictCode, VerdictFacts, VerdictPolicy } from './types';
+import type { Reason, Shortfall, Verdict, VerdictCode, VerdictFacts, VerdictPolicy } from './types';
 
 /**
  * The verdict for one load case with one oil:
@@ -31,11 +31,14 @@ export function decideVerdict(f: VerdictFacts, p: VerdictPolicy): Verdict {
     threshold: code === 'beyond-oil' ? `EP floor FZG ${p.epOilFzgStage} (policy)` : 'chemistry against need',
     source: 'common practice; DIN 51517-3 (CLP) and DIN 51524-2 (HLP) define the EP and AW oil classes',
   });
-  const oilFit = code !== 'beyond-oil' && chemistryOk && !outcomes.some((o) => o.oilFallsShort) ? 'meets' : 'falls-short';
+  const shortfalls: Shortfall[] = outcomes.flatMap((o) => (o.oilFallsShort ? [o.oilFallsShort] : []));
+  if (!chemistryOk && code !== 'beyond-oil') shortfalls.push('chemistry');
+  const oilFit = code !== 'beyond-oil' && shortfalls.length === 0 ? 'meets' : 'falls-short';
   const lambdaShort = f.lambdaMin < p.lambdaTarget;
   return {
     code,
     oilFit,
+    shortfalls,
     reasons,
     cautions: cautionsFor(f, code),
     gradeAdvice: lambdaShort ? `λmin ${f.lambdaMin.toFixed(2)} < ${p.lambdaTarget}: see the grade finder for the lowest ISO VG that meets it.` : null,

@@ -1,4 +1,4 @@
-import type { Reason, VerdictFacts, VerdictPolicy } from './types';
+import type { Reason, Shortfall, VerdictFacts, VerdictPolicy } from './types';
 import type { FzgStageNeed } from '../mesh/scuffing';
 import { isShockInBoundary } from './code';
 
@@ -9,7 +9,8 @@ import { isShockInBoundary } from './code';
 export interface RuleOutcome {
   readonly reason: Reason;
   readonly needsAntiWear?: boolean;
-  readonly oilFallsShort?: boolean;
+  /** What the oil falls short on, if this rule finds it short. */
+  readonly oilFallsShort?: Shortfall;
 }
 
 export type Rule = (f: VerdictFacts, p: VerdictPolicy) => RuleOutcome | null;
@@ -115,7 +116,7 @@ export const lambdaTargetRule: Rule = (f, p) => {
       threshold: `λ target = ${p.lambdaTarget} (policy)`,
       source: 'policy; common practice',
     },
-    oilFallsShort: !ok,
+    ...(ok ? {} : { oilFallsShort: 'film' as const }),
   };
 };
 
@@ -131,7 +132,7 @@ export const oilStageRule: Rule = (f) => {
       threshold: 'oil stage ≥ required stage',
       source: 'ISO 14635-1 (FZG A/8.3/90); ISO/TS 6336-20 and -21',
     },
-    oilFallsShort: !ok,
+    ...(ok ? {} : { oilFallsShort: 'fzg-stage' as const }),
   };
 };
 

@@ -60,9 +60,13 @@ export interface Caution {
   readonly kind: 'standing' | 'triggered';
 }
 
+/** Why an oil falls short: its film (a grade matter), its FZG stage, or its chemistry. */
+export type Shortfall = 'film' | 'fzg-stage' | 'chemistry';
+
 export interface Verdict {
   readonly code: VerdictCode;
   readonly oilFit: OilFit;
+  readonly shortfalls: Shortfall[];
   readonly reasons: Reason[];
   readonly cautions: Caution[];
   /** The grade advice when λ falls short (a viscosity matter, not a chemistry one). */

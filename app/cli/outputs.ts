@@ -9,6 +9,7 @@ import type { Results } from '../review/results';
 import type { Review } from '../review/schema';
 import { resultsToCsv } from '../report/csv';
 import { renderRecord, type Paper } from '../report/record';
+import { operatingMaps } from '../review/operatingMaps';
 import { signRecordPdf, SigningError } from '../report/pdfSign';
 import { EXIT, type CliIo } from './io';
 
@@ -60,6 +61,7 @@ async function writePdf(review: Review, results: Results, path: string, options:
   try {
     pdf = await renderRecord(review, results, {
       paper: options.paper,
+      maps: operatingMaps(review) ?? [],
       ...(p12
         ? {
             signature: {

@@ -24,6 +24,8 @@ import { drawInputs } from './sections/inputs';
 import { drawCaseResults } from './sections/caseResults';
 import { drawComparison } from './sections/comparison';
 import { drawVerdict } from './sections/verdict';
+import { drawOperatingMaps } from './sections/operatingMap';
+import type { OperatingMapResult } from '../review/operatingMaps';
 import { drawMethods, drawSignoff, drawWarnings } from './sections/backMatter';
 
 export type Paper = 'a4' | 'letter';
@@ -52,6 +54,8 @@ export interface RecordOptions {
   fonts?: RecordFonts;
   /** Reserve room for a PKCS#7 signature (fill it with signRecordPdf). */
   signature?: SignaturePlaceholder;
+  /** The operating maps (app/review/operatingMaps.ts) to include; the record computes none itself. */
+  maps?: readonly OperatingMapResult[];
 }
 
 /** Creation date of the record: sign-off time, else review date, else the Unix epoch. */
@@ -124,6 +128,7 @@ export async function renderRecord(review: Review, results: Results, options: Re
   drawInputs(ctx);
   drawCaseResults(ctx);
   drawComparison(ctx);
+  if (options.maps) drawOperatingMaps(ctx, options.maps);
   drawVerdict(ctx);
   drawMethods(ctx);
   drawWarnings(ctx);

@@ -1,15 +1,20 @@
 import type { CaseResult, Results } from '../review/results';
 import { VERDICT_WORDS } from '../review/overall';
+import type { ReviewStatus } from '../review/results';
+import type { Review } from '../review/schema';
+import { STATUS_WORDS } from '../review/status';
 
 const f = (x: number | null | undefined, d = 2) => (x === null || x === undefined ? '—' : x.toFixed(d));
 const stage = (s: CaseResult['requiredFzgStage']) => (s === null ? '—' : String(s));
 
 /** The compact human-readable summary of `flankfilm review FILE`. */
-export function summaryText(r: Results): string {
+export function summaryText(r: Results, state?: { status: ReviewStatus; review: Review }): string {
   const g = r.gear;
+  const so = state?.review.signoff;
   const lines = [
     `${r.title}`,
     `Flankfilm ${r.flankfilm}`,
+    ...(state ? [`Status: ${STATUS_WORDS[state.status]}${so ? ` — ${so.decision} by ${so.reviewer} (${so.role}) at ${so.signedAt}` : ''}`] : []),
     '',
     `Gear pair: αwt ${f(g.workingPressureAngle_deg)}°, εα ${f(g.transverseContactRatio, 3)}, εβ ${f(g.overlapRatio, 3)}, a ${f(g.centerDistance_mm, 3)} mm, T1T2 ${f(g.lineOfAction_mm, 2)} mm`,
     `Path from T1 (mm): A ${f(g.points_mm.A)}  B ${f(g.points_mm.B)}  C ${f(g.points_mm.C)}  D ${f(g.points_mm.D)}  E ${f(g.points_mm.E)}`,

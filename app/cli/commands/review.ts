@@ -5,6 +5,7 @@ import type { Results } from '../../review/results';
 import { EXIT, UsageError, type CliIo } from '../io';
 import { loadReviewFile } from '../reviewFile';
 import { summaryText } from '../summary';
+import { status } from '../../review/status';
 import { operatingMaps, operatingMapsCsv } from '../../review/operatingMaps';
 import { atomicWrite } from '../../files/atomicWrite';
 
@@ -43,7 +44,7 @@ export async function reviewCommand(args: string[], io: CliIo): Promise<number> 
     throw e;
   }
   if (values.json) io.out(`${JSON.stringify(results, null, 2)}\n`);
-  else io.out(summaryText(results));
+  else io.out(summaryText(results, { status: status(loaded.review, results), review: loaded.review }));
   if (values.map) {
     const maps = operatingMaps(loaded.review) ?? [];
     try {

@@ -1,5 +1,5 @@
 import type { CaseResult, Results } from '../review/results';
-import { VERDICT_WORDS } from '../review/overall';
+import { VERDICT_WORDS } from '../review/vocabulary';
 import type { ReviewStatus } from '../review/results';
 import type { Review } from '../review/schema';
 import { STATUS_WORDS } from '../review/status';

@@ -1,13 +1,9 @@
 import type { CaseResult, OverallVerdict, Shortfall, VerdictCode } from './results';
 import type { Review } from './schema';
+import { VERDICT_WORDS } from './vocabulary';
 
 const SEVERITY: Record<VerdictCode, number> = { 'aw-suffices': 0, 'ep-warranted': 1, 'beyond-oil': 2 };
-const WORDS: Record<VerdictCode, string> = {
-  'aw-suffices': 'Anti-wear chemistry suffices',
-  'ep-warranted': 'EP chemistry warranted',
-  'beyond-oil': 'Beyond oil chemistry',
-};
-export const VERDICT_WORDS = WORDS;
+const WORDS = VERDICT_WORDS;
 const SHORTFALL_ORDER: readonly Shortfall[] = ['chemistry', 'fzg-stage', 'film'];
 const SHORTFALL_WORDS: Record<Shortfall, string> = {
   chemistry: 'chemistry',

@@ -1,0 +1,62 @@
+/**
+ * Flankfilm's words and colours (NAMES.md), shared by the CLI, the record and the screen: the
+ * verdicts, states, regimes and decisions in our wording, and the Okabe–Ito palette, where every
+ * colour always goes with a word and an icon shape.
+ */
+import type { Regime } from '../engine/film/regime';
+import type { Decision } from './schema';
+import type { OilFit, VerdictCode } from './results';
+
+export const VERDICT_WORDS: Readonly<Record<VerdictCode, string>> = {
+  'aw-suffices': 'Anti-wear chemistry suffices',
+  'ep-warranted': 'EP chemistry warranted',
+  'beyond-oil': 'Beyond oil chemistry',
+};
+
+/** Short forms for narrow table cells; always next to the icon. */
+export const VERDICT_SHORT: Readonly<Record<VerdictCode, string>> = {
+  'aw-suffices': 'AW suffices',
+  'ep-warranted': 'EP warranted',
+  'beyond-oil': 'Beyond oil',
+};
+
+export const DECISION_WORDS: Readonly<Record<Decision, string>> = {
+  approved: 'Approved',
+  'approved-with-conditions': 'Approved with conditions',
+  'not-approved': 'Not approved',
+};
+
+export const REGIME_WORDS: Readonly<Record<Regime, string>> = {
+  boundary: 'boundary',
+  mixed: 'mixed',
+  'full-film': 'full film (EHL)',
+};
+
+export const OIL_FIT_WORDS: Readonly<Record<OilFit, string>> = {
+  meets: 'this oil meets the need',
+  'falls-short': 'this oil falls short',
+};
+
+/** Okabe–Ito (M. Okabe, K. Ito, "Color Universal Design", 2008). */
+export const OKABE_ITO = {
+  black: '#000000',
+  orange: '#E69F00',
+  skyBlue: '#56B4E9',
+  bluishGreen: '#009E73',
+  yellow: '#F0E442',
+  blue: '#0072B2',
+  vermillion: '#D55E00',
+  reddishPurple: '#CC79A7',
+} as const;
+
+export const VERDICT_COLOURS: Readonly<Record<VerdictCode, string>> = {
+  'aw-suffices': OKABE_ITO.bluishGreen,
+  'ep-warranted': OKABE_ITO.orange,
+  'beyond-oil': OKABE_ITO.vermillion,
+};
+
+export const REGIME_COLOURS: Readonly<Record<Regime, string>> = {
+  'full-film': OKABE_ITO.bluishGreen,
+  mixed: OKABE_ITO.orange,
+  boundary: OKABE_ITO.vermillion,
+};

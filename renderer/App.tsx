@@ -1,0 +1,161 @@
+import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
+import type { Bridge, MenuCommand } from '../app/bridge/contract';
+import type { ReviewStatus } from '../app/review/results';
+import { GearPairPanel } from './components/panels/GearPairPanel';
+import { DutyPanel } from './components/panels/DutyPanel';
+import { OilsPanel } from './components/panels/OilsPanel';
+import { PolicyPanel } from './components/panels/PolicyPanel';
+import { VerdictPanel } from './components/panels/VerdictPanel';
+import { SideBySidePanel } from './components/panels/SideBySidePanel';
+import { MapPanel } from './components/panels/MapPanel';
+import { MeshPanel } from './components/mesh/MeshPanel';
+import { SignoffPanel } from './components/signoff/SignoffPanel';
+import { SignoffDialog } from './components/signoff/SignoffDialog';
+import { TopBar } from './components/TopBar';
+import { RecoveryPrompt } from './components/RecoveryPrompt';
+import { InfoDialog } from './components/InfoDialog';
+import { ProblemList } from './components/ProblemList';
+import { useDocument } from './hooks/useDocument';
+import { useRecompute } from './hooks/useRecompute';
+import { usePersistence } from './hooks/usePersistence';
+import { useFileDrop } from './hooks/useFileDrop';
+import { useDocumentActions } from './hooks/useDocumentActions';
+import { Sheet, type SheetContext } from './state/context';
+import { lookupMessages, messagesByPath } from './state/messages';
+import { newReviewDraft } from './state/templates';
+import type { UnitSystem } from './units/units';
+
+type Recovery = { text: string; path: string | null; savedAt: string };
+
+/** The sheet: inputs on the left, findings on the right; state in a reducer, physics in a worker. */
+export function App({ bridge }: { readonly bridge: Bridge }) {
+  const { doc, dispatch, review, issues } = useDocument();
+  const computed = useRecompute(review, doc.edition);
+  const [units, setUnits] = useState<UnitSystem>('si');
+  const [signing, setSigning] = useState(false);
+  const [recovery, setRecovery] = useState<Recovery | null>(null);
+  const [info, setInfo] = useState<{ title: string; lines: string[] } | null>(null);
+  const actions = useDocumentActions({ bridge, doc, review, dispatch, setUnits });
+  usePersistence(bridge, doc);
+
+  // Opening: offer recovery of kept edits, else the demo.
+  const started = useRef(false);
+  useEffect(() => {
+    if (started.current) return;
+    started.current = true;
+    bridge
+      .recoverAutosave({})
+      .then((r) => (r ? setRecovery(r) : actions.openDemo()))
+      .catch(() => actions.openDemo());
+  }, [bridge, actions]);
+
+  const { open: openReview, guard, load } = actions;
+  useFileDrop({
+    openPath: useCallback((path: string) => void openReview(path), [openReview]),
+    openText: useCallback((text: string) => void guard('open', async () => load(text, null, true, 'Opened the dropped review (not yet saved).')), [guard, load]),
+  });
+
+  const messages = useMemo(() => messagesByPath(issues, review ? computed.error : null), [issues, review, computed.error]);
+  const sheet = useMemo<SheetContext | null>(
+    () => (doc.draft ? { draft: doc.draft, units, dispatch, messagesAt: (k) => lookupMessages(messages, k) } : null),
+    [doc.draft, units, dispatch, messages],
+  );
+
+  const status: ReviewStatus = review ? (computed.status ?? 'draft') : doc.draft?.signoff ? 'changed-since-signing' : 'draft';
+  const limits = useMemo(
+    () => ({ boundaryBelow: review?.policy.boundaryBelowLambda ?? 1, fullFilmFrom: review?.policy.fullFilmFromLambda ?? 3 }),
+    [review?.policy.boundaryBelowLambda, review?.policy.fullFilmFromLambda],
+  );
+
+  const onMenu = useRef<(c: MenuCommand, path?: string) => void>(() => undefined);
+  onMenu.current = (command, path) => {
+    const table: Record<MenuCommand, () => void> = {
+      new: () => dispatch({ type: 'load', draft: newReviewDraft(), path: null, dirty: true }),
+      open: () => void actions.open(path),
+      save: () => void actions.save(false),
+      'save-as': () => void actions.save(true),
+      'export-record': () => void actions.exportRecord(units === 'us' ? 'letter' : 'a4'),
+      'export-csv': () => void actions.exportCsv(),
+      sign: () => setSigning(true),
+      methods: () => setInfo({ title: 'Methods and assumptions', lines: computed.results?.assumptions ?? ['No results yet.'] }),
+      about: () =>
+        void bridge.appInfo({}).then((a) => setInfo({ title: 'About Flankfilm', lines: [`Flankfilm ${a.version}`, `Engine ${a.engineVersion}`, `Platform ${a.platform}`] })),
+      'units-si': () => setUnits('si'),
+      'units-us': () => setUnits('us'),
+    };
+    table[command]();
+  };
+  useEffect(() => bridge.onMenu((e) => onMenu.current(e.command, e.path)), [bridge]);
+
+  const recover = useCallback(
+    (r: Recovery) => {
+      setRecovery(null);
+      void actions.guard('open', async () => actions.load(r.text, r.path, true, 'Recovered the unsaved edits.'));
+    },
+    [actions],
+  );
+  const discard = useCallback(() => {
+    setRecovery(null);
+    void bridge.discardAutosave({}).finally(() => void actions.openDemo());
+  }, [bridge, actions]);
+
+  const results = computed.results;
+  const stale = Boolean(results) && (!review || computed.error !== null);
+  const title = typeof doc.draft?.title === 'string' ? doc.draft.title : 'Flankfilm';
+  return (
+    <div className="app">
+      <TopBar
+        title={title}
+        dirty={doc.dirty}
+        status={status}
+        units={units}
+        busy={actions.busy}
+        notice={actions.notice}
+        canExport={review !== null}
+        computing={computed.computing}
+        onUnits={setUnits}
+        onOpen={() => void actions.open()}
+        onSave={() => void actions.save(false)}
+        onRecord={(paper) => void actions.exportRecord(paper)}
+        onCsv={() => void actions.exportCsv()}
+        onSign={() => setSigning(true)}
+      />
+      {recovery ? <RecoveryPrompt savedAt={recovery.savedAt} path={recovery.path} onRecover={() => recover(recovery)} onDiscard={discard} /> : null}
+      {info ? <InfoDialog title={info.title} lines={info.lines} onClose={() => setInfo(null)} /> : null}
+      {sheet ? (
+        <Sheet.Provider value={sheet}>
+          <main className="sheet">
+            <div className="sheet__inputs" aria-label="Inputs" role="group">
+              <ProblemList issues={issues} engineError={review ? computed.error : null} stale={stale} />
+              <GearPairPanel gear={results?.gear ?? null} stale={stale} />
+              <DutyPanel />
+              <OilsPanel summaries={results?.oils ?? []} />
+              <PolicyPanel />
+            </div>
+            <div className={`sheet__findings${stale ? ' is-stale' : ''}`} aria-label="Findings" role="group" data-stale={stale} data-edition={computed.edition}>
+              {stale ? <p className="stale-note" role="status">Showing the results of the last valid entry.</p> : null}
+              <VerdictPanel results={results} units={units} />
+              <SideBySidePanel results={results} units={units} />
+              <MeshPanel results={results} limits={limits} units={units} />
+              <MapPanel />
+              <SignoffPanel status={status} signoff={review?.signoff} canSign={review !== null} onOpen={() => setSigning(true)} />
+            </div>
+          </main>
+          <SignoffDialog
+            open={signing}
+            previous={review?.signoff}
+            onClose={() => setSigning(false)}
+            onSign={async (form) => {
+              await actions.sign(form);
+              setSigning(false);
+            }}
+          />
+        </Sheet.Provider>
+      ) : (
+        <main className="sheet sheet--empty">
+          <p>{actions.busy ? 'Opening…' : 'No review open.'}</p>
+        </main>
+      )}
+    </div>
+  );
+}

@@ -1,0 +1,85 @@
+import { useEffect, useRef, useState } from 'react';
+import { useSheet } from '../../state/context';
+import { getIn, pathKey, type FieldPath } from '../../state/paths';
+import { formatInput, parseInput } from '../../units/format';
+import { fromDisplay, toDisplay, unitLabel, type QuantityKind } from '../../units/units';
+import { FieldShell, fieldId } from './FieldShell';
+
+interface Props {
+  readonly path: FieldPath;
+  readonly label: string;
+  readonly kind?: QuantityKind;
+  /** A unit outside the switchable kinds (rpm, °, GPa …). */
+  readonly unit?: string;
+  /** Empty removes the key (an optional input). */
+  readonly optional?: boolean;
+  readonly hint?: string;
+  /** The value shown when the draft has none at `path` (a derived value, say). */
+  readonly value?: number | undefined;
+  /** Instead of setting `path`: what to do with the typed value (file units), e.g. torque-or-power. */
+  readonly onValue?: (value: unknown) => void;
+  /** Shown from another input (power from torque): empty is not "required" here. */
+  readonly derived?: boolean;
+  /** A short remark under the control. */
+  readonly note?: string;
+}
+
+const close = (a: number, b: number) => Math.abs(a - b) <= 1e-12 * Math.max(Math.abs(a), Math.abs(b), 1e-300);
+
+/**
+ * A number input in the chosen unit system. The text typed is kept while the user types; the
+ * draft holds the value in file units. Text that is not a number goes into the draft as text, so
+ * the schema marks the field and the last valid results stay on screen.
+ */
+export function NumberField({ path, label, kind = 'none', unit, optional, hint, value, onValue, derived, note }: Props) {
+  const { draft, units, dispatch, messagesAt } = useSheet();
+  const key = pathKey(path);
+  const id = fieldId(key);
+  const stored = getIn(draft, path);
+  const current = typeof stored === 'number' ? stored : value;
+  // A derived value (power from torque) is a readout until typed over: six digits are plenty.
+  const display = (v: number) => (typeof stored === 'number' || !derived ? formatInput(v) : formatInput(Number(v.toPrecision(6))));
+  const shown = current === undefined ? '' : display(toDisplay(kind, current, units));
+  const [text, setText] = useState(typeof stored === 'string' ? stored : shown);
+  const last = useRef({ units, current });
+
+  // Follow the draft when it changes from elsewhere (open, undo of a unit switch), not while typing it.
+  useEffect(() => {
+    const typed = parseInput(text);
+    const typedValue = Number.isNaN(typed) ? undefined : fromDisplay(kind, typed, units);
+    const sameValue = current === undefined ? typeof stored === 'string' || (optional && text.trim() === '') : typedValue !== undefined && close(typedValue, current);
+    if (last.current.units !== units || !sameValue) setText(typeof stored === 'string' ? stored : shown);
+    last.current = { units, current };
+  }, [current, units, shown, stored, kind, optional, text]);
+
+  const commit = (next: string) => {
+    setText(next);
+    const n = parseInput(next);
+    const v = next.trim() === '' && optional ? undefined : Number.isNaN(n) ? next : fromDisplay(kind, n, units);
+    if (onValue) onValue(v);
+    else dispatch({ type: 'set', path, value: v });
+  };
+
+  const local = text.trim() !== '' && Number.isNaN(parseInput(text)) ? ['enter a number'] : text.trim() === '' && !optional && !derived ? ['required'] : [];
+  const messages = local.length ? local : messagesAt(key);
+  const unitText = unit ?? unitLabel(kind, units);
+  return (
+    <FieldShell id={id} label={label} unit={unitText} messages={messages} hint={hint} note={note}>
+      <input
+        id={id}
+        className="field__input"
+        type="text"
+        inputMode="decimal"
+        autoComplete="off"
+        spellCheck={false}
+        value={text}
+        data-path={key}
+        aria-invalid={messages.length > 0}
+        aria-describedby={messages.length ? `${id}-msg` : note ? `${id}-note` : undefined}
+        aria-label={unitText ? `${label} (${unitText})` : label}
+        placeholder={optional ? 'optional' : undefined}
+        onChange={(e) => commit(e.target.value)}
+      />
+    </FieldShell>
+  );
+}

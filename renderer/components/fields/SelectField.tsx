@@ -1,0 +1,49 @@
+import { useSheet } from '../../state/context';
+import { getIn, pathKey, type FieldPath } from '../../state/paths';
+import { FieldShell, fieldId } from './FieldShell';
+
+interface Props<V extends string | number> {
+  readonly path: FieldPath;
+  readonly label: string;
+  readonly options: readonly (readonly [V, string])[];
+  readonly hint?: string;
+  /** Instead of setting `path`. */
+  readonly onValue?: (value: V) => void;
+  /** The value shown when the draft's value is not one of the options. */
+  readonly value?: V;
+}
+
+/** A choice from a fixed list; option values keep their type (numbers stay numbers). */
+export function SelectField<V extends string | number>({ path, label, options, hint, onValue, value }: Props<V>) {
+  const { draft, dispatch, messagesAt } = useSheet();
+  const key = pathKey(path);
+  const id = fieldId(key);
+  const stored = value ?? getIn(draft, path);
+  const index = options.findIndex(([v]) => v === stored);
+  const messages = messagesAt(key);
+  return (
+    <FieldShell id={id} label={label} messages={messages} hint={hint}>
+      <select
+        id={id}
+        className="field__input"
+        value={index < 0 ? '' : String(index)}
+        data-path={key}
+        aria-invalid={messages.length > 0}
+        aria-describedby={messages.length ? `${id}-msg` : undefined}
+        onChange={(e) => {
+          const picked = options[Number(e.target.value)];
+          if (!picked) return;
+          if (onValue) onValue(picked[0]);
+          else dispatch({ type: 'set', path, value: picked[0] });
+        }}
+      >
+        {index < 0 ? <option value="">—</option> : null}
+        {options.map(([v, text], i) => (
+          <option key={String(v)} value={String(i)}>
+            {text}
+          </option>
+        ))}
+      </select>
+    </FieldShell>
+  );
+}

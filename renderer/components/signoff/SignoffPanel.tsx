@@ -1,0 +1,46 @@
+import type { ReviewStatus } from '../../../app/review/results';
+import type { Signoff } from '../../../app/review/schema';
+import { Panel } from '../panels/Panel';
+import { StatusBadge } from '../StatusBadge';
+import { DECISION_WORDS } from './words';
+
+interface Props {
+  readonly status: ReviewStatus;
+  readonly signoff: Signoff | undefined;
+  readonly canSign: boolean;
+  readonly onOpen: () => void;
+}
+
+/** Who signed, when and what they decided; and the button to sign (again). */
+export function SignoffPanel({ status, signoff, canSign, onOpen }: Props) {
+  return (
+    <Panel
+      id="sign-off"
+      title="Sign-off"
+      actions={
+        <button type="button" className="primary" onClick={onOpen} disabled={!canSign} data-testid="open-signoff">
+          {signoff ? 'Sign again…' : 'Sign off…'}
+        </button>
+      }
+    >
+      <p>
+        Status: <StatusBadge status={status} testId="signoff-status" />
+      </p>
+      {signoff ? (
+        <dl className="qlist" data-testid="signoff-details">
+          <div className="qrow"><dt>Reviewer</dt><dd data-testid="signoff-reviewer">{signoff.reviewer}</dd></div>
+          <div className="qrow"><dt>Role</dt><dd>{signoff.role}</dd></div>
+          {signoff.organisation ? <div className="qrow"><dt>Organisation</dt><dd>{signoff.organisation}</dd></div> : null}
+          <div className="qrow"><dt>Decision</dt><dd>{DECISION_WORDS[signoff.decision]}</dd></div>
+          {signoff.conditions ? <div className="qrow"><dt>Conditions</dt><dd>{signoff.conditions}</dd></div> : null}
+          <div className="qrow"><dt>Signed</dt><dd>{new Date(signoff.signedAt).toLocaleString()}</dd></div>
+          <div className="qrow"><dt>Engine</dt><dd>{signoff.engineVersion}</dd></div>
+          <div className="qrow"><dt title="SHA-256 over the inputs, the results summary and the engine version">Fingerprint</dt><dd><code>{signoff.fingerprint.slice(0, 16)}…</code></dd></div>
+        </dl>
+      ) : (
+        <p className="note">Not signed. Sign when the inputs are final; the record then carries the sign-off.</p>
+      )}
+      {!canSign ? <p className="note">Correct the marked inputs before signing.</p> : null}
+    </Panel>
+  );
+}

@@ -1,0 +1,90 @@
+import { getIn, setIn, type FieldPath } from './paths';
+import { pinionTorqueOf } from '../../app/review/toEngine';
+
+/** The review being edited, as plain JSON (it may be invalid while the user types). */
+export type Draft = Record<string, unknown>;
+
+export interface DocState {
+  readonly draft: Draft | null;
+  /** Where the review lives on disk; null for the demo or a new review. */
+  readonly path: string | null;
+  readonly dirty: boolean;
+  /** Bumped by every edit: the recompute of an older edition is dropped (latest wins). */
+  readonly edition: number;
+}
+
+export const initialDocState: DocState = { draft: null, path: null, dirty: false, edition: 0 };
+
+export type DocAction =
+  | { type: 'load'; draft: Draft; path: string | null; dirty?: boolean }
+  | { type: 'set'; path: FieldPath; value: unknown }
+  | { type: 'setDrive'; index: number; given: 'torque' | 'power'; value: unknown }
+  | { type: 'addItem'; list: 'loadCases' | 'oils'; item: Record<string, unknown> }
+  | { type: 'removeItem'; list: 'loadCases' | 'oils'; index: number }
+  | { type: 'toggleComponent'; component: string; on: boolean }
+  | { type: 'saved'; path: string };
+
+export function docReducer(state: DocState, action: DocAction): DocState {
+  switch (action.type) {
+    case 'load':
+      return { draft: action.draft, path: action.path, dirty: action.dirty ?? false, edition: state.edition + 1 };
+    case 'saved':
+      return { ...state, path: action.path, dirty: false };
+    default: {
+      if (!state.draft) return state;
+      const draft = edit(state.draft, action);
+      return draft === state.draft ? state : { ...state, draft, dirty: true, edition: state.edition + 1 };
+    }
+  }
+}
+
+function edit(draft: Draft, action: Exclude<DocAction, { type: 'load' | 'saved' }>): Draft {
+  switch (action.type) {
+    case 'set':
+      return Object.is(getIn(draft, action.path), action.value) ? draft : setIn(draft, action.path, action.value);
+    case 'setDrive': {
+      // A load case gives exactly one of torque and power; the one typed last is the one given.
+      const keep = action.given === 'torque' ? 'pinionTorque_Nm' : 'power_kW';
+      const drop = action.given === 'torque' ? 'power_kW' : 'pinionTorque_Nm';
+      const next = setIn(draft, ['loadCases', action.index, drop], undefined);
+      return setIn(next, ['loadCases', action.index, keep], action.value);
+    }
+    case 'addItem': {
+      const list = (getIn(draft, [action.list]) as unknown[] | undefined) ?? [];
+      return setIn(draft, [action.list], [...list, action.item]);
+    }
+    case 'removeItem': {
+      const list = (getIn(draft, [action.list]) as unknown[] | undefined) ?? [];
+      return setIn(draft, [action.list], list.filter((_, i) => i !== action.index));
+    }
+    case 'toggleComponent': {
+      const list = ((getIn(draft, ['gearPair', 'components']) as string[] | undefined) ?? []).filter((c) => c !== action.component);
+      return setIn(draft, ['gearPair', 'components'], action.on ? [...list, action.component] : list);
+    }
+  }
+}
+
+/** The pinion torque of a load case in the draft, given or from the power; undefined if neither is a number. */
+export function draftTorque(draft: Draft, index: number): number | undefined {
+  const c = getIn(draft, ['loadCases', index]) as { pinionTorque_Nm?: unknown; power_kW?: unknown; pinionSpeed_rpm?: unknown } | undefined;
+  if (!c) return undefined;
+  if (typeof c.pinionTorque_Nm === 'number') return c.pinionTorque_Nm;
+  if (typeof c.power_kW === 'number' && typeof c.pinionSpeed_rpm === 'number' && c.pinionSpeed_rpm > 0) {
+    return pinionTorqueOf({ power_kW: c.power_kW, pinionSpeed_rpm: c.pinionSpeed_rpm });
+  }
+  return undefined;
+}
+
+/** The power of a load case in the draft, given or from the torque (P = T1·ω1); undefined if neither is a number. */
+export function draftPower(draft: Draft, index: number): number | undefined {
+  const c = getIn(draft, ['loadCases', index]) as { pinionTorque_Nm?: unknown; power_kW?: unknown; pinionSpeed_rpm?: unknown } | undefined;
+  if (!c) return undefined;
+  if (typeof c.power_kW === 'number') return c.power_kW;
+  if (typeof c.pinionTorque_Nm === 'number' && typeof c.pinionSpeed_rpm === 'number') {
+    return (c.pinionTorque_Nm * ((2 * Math.PI * c.pinionSpeed_rpm) / 60)) / 1000;
+  }
+  return undefined;
+}
+
+/** Serialise the draft as the review file's text. */
+export const draftText = (draft: Draft): string => `${JSON.stringify(draft, null, 2)}\n`;

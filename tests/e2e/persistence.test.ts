@@ -1,0 +1,97 @@
+import { existsSync, readFileSync } from 'node:fs';
+import { join } from 'node:path';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Browser } from 'playwright-core';
+import { startHarness, type Harness } from '../harness/server';
+import { edition, field, launch, openApp, typeInto, waitForNewResults, waitForResults, WAIT } from './support';
+
+let browser: Browser;
+let harness: Harness;
+beforeAll(async () => {
+  browser = await launch();
+  harness = await startHarness();
+});
+afterAll(async () => {
+  await harness?.close();
+  await browser?.close();
+});
+
+describe('autosave, recovery, window state and menu commands', () => {
+  it('tells main the document is dirty, keeps the edit in the autosave, and offers it back on the next start', async () => {
+    const s = await openApp(browser, { harness });
+    try {
+      await expect.poll(() => harness.documentState()?.dirty, { timeout: WAIT }).toBe(false);
+      expect(harness.documentState()?.title).toContain('Harrow Creek');
+      const e0 = await edition(s.page);
+      await typeInto(field(s.page, 'gearPair.faceWidth_mm'), '72');
+      await waitForNewResults(s.page, e0);
+      await expect.poll(() => harness.documentState()?.dirty, { timeout: WAIT }).toBe(true);
+      // The autosave is debounced (1.5 s) and lands in main's userData.
+      await expect.poll(() => existsSync(join(harness.workDir, 'userData')), { timeout: WAIT }).toBe(true);
+      await s.page.waitForTimeout(2500);
+    } finally {
+      await s.context.close();
+    }
+
+    const context = await browser.newContext({ viewport: { width: 1440, height: 1000 } });
+    try {
+      const page = await context.newPage();
+      page.setDefaultTimeout(WAIT);
+      await page.goto(harness.url);
+      const prompt = page.locator('[data-testid=recovery]');
+      await expect.poll(() => prompt.evaluate((d) => (d as HTMLDialogElement).open).catch(() => false), { timeout: WAIT }).toBe(true);
+      // Focus starts on "Recover the edits": Enter takes them.
+      await page.keyboard.press('Enter');
+      await waitForResults(page);
+      await expect(field(page, 'gearPair.faceWidth_mm').inputValue()).resolves.toBe('72');
+      await expect(page.locator('.topbar__title').textContent()).resolves.toContain('unsaved');
+    } finally {
+      await context.close();
+    }
+  });
+
+  it('a menu command from main (server-sent event) switches the units', async () => {
+    const context = await browser.newContext({ viewport: { width: 1440, height: 1000 } });
+    try {
+      const page = await context.newPage();
+      page.setDefaultTimeout(WAIT);
+      const errors: string[] = [];
+      page.on('pageerror', (e) => errors.push(e.message));
+      await page.goto(harness.url);
+      // The edit of the first test was never saved, so the recovery is offered again: discard it.
+      await page.getByRole('button', { name: /Discard them/ }).click();
+      await waitForResults(page);
+      await expect(field(page, 'gearPair.faceWidth_mm').inputValue()).resolves.toBe('70');
+      await page.waitForTimeout(500); // the event stream opens as the page starts
+      harness.sendMenu({ command: 'units-us' });
+      await expect.poll(() => page.locator('[data-testid=units-us]').isChecked(), { timeout: WAIT }).toBe(true);
+      harness.sendMenu({ command: 'units-si' });
+      await expect.poll(() => page.locator('[data-testid=units-si]').isChecked(), { timeout: WAIT }).toBe(true);
+      expect(errors).toEqual([]);
+    } finally {
+      await context.close();
+    }
+  });
+
+  it('a review file dropped on the window opens', async () => {
+    const s = await openApp(browser);
+    try {
+      const text = readFileSync('assets/demo/harrow-creek-conveyor-spur-pair.flankfilm.json', 'utf8');
+      const e0 = await edition(s.page);
+      await s.page.evaluate((t) => {
+        const dt = new DataTransfer();
+        dt.items.add(new File([t], 'conveyor.flankfilm.json', { type: 'application/json' }));
+        window.dispatchEvent(new DragEvent('dragover', { dataTransfer: dt, cancelable: true }));
+        window.dispatchEvent(new DragEvent('drop', { dataTransfer: dt, cancelable: true }));
+      }, text);
+      await waitForNewResults(s.page, e0);
+      await expect.poll(() => s.page.locator('.topbar__title').textContent(), { timeout: WAIT }).toContain('conveyor head-pulley drive');
+      // The spur pair gives torque, so T1 is stored and P follows from it.
+      const torque = (JSON.parse(text) as { loadCases: { pinionTorque_Nm: number }[] }).loadCases[0]?.pinionTorque_Nm;
+      await expect(field(s.page, 'loadCases[0].pinionTorque_Nm').inputValue()).resolves.toBe(String(torque));
+      await expect(s.page.locator('[data-testid=case-verdict]').count()).resolves.toBe(4); // 2 load cases × 2 oils
+    } finally {
+      await s.close();
+    }
+  });
+});

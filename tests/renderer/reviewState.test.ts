@@ -1,0 +1,84 @@
+import { describe, it, expect } from 'vitest';
+import { DEMO_REVIEWS } from '../../app/review/demo';
+import { parseReviewValue } from '../../app/review/parse';
+import { getIn, setIn } from '../../renderer/state/paths';
+import { docReducer, draftPower, draftText, draftTorque, initialDocState, type Draft } from '../../renderer/state/reviewState';
+import { newReviewDraft } from '../../renderer/state/templates';
+
+const demo = () => structuredClone(DEMO_REVIEWS['harrow-creek-crusher-hs-pair.flankfilm.json']) as Draft;
+const loaded = () => docReducer(initialDocState, { type: 'load', draft: demo(), path: null });
+
+describe('paths', () => {
+  it('setIn copies along the path and shares the rest', () => {
+    const root = { a: { b: 1 }, c: [{ d: 2 }, { d: 3 }] };
+    const next = setIn(root, ['c', 1, 'd'], 4);
+    expect(next.c[1]?.d).toBe(4);
+    expect(root.c[1]?.d).toBe(3);
+    expect(next.a).toBe(root.a);
+    expect(next.c[0]).toBe(root.c[0]);
+  });
+  it('setIn with undefined removes the key (an optional input left empty)', () => {
+    const next = setIn({ gearPair: { centerDistance_mm: 200, faceWidth_mm: 70 } }, ['gearPair', 'centerDistance_mm'], undefined);
+    expect(next.gearPair).toEqual({ faceWidth_mm: 70 });
+    expect('centerDistance_mm' in next.gearPair).toBe(false);
+  });
+  it('getIn reads through arrays and returns undefined past the end', () => {
+    expect(getIn(demo(), ['loadCases', 1, 'name'])).toBe('Hard-rock peak (invented)');
+    expect(getIn(demo(), ['loadCases', 9, 'name'])).toBeUndefined();
+  });
+});
+
+describe('docReducer', () => {
+  it('an edit returns a new state, dirty, with a newer edition; the old state is untouched', () => {
+    const s0 = loaded();
+    const s1 = docReducer(s0, { type: 'set', path: ['gearPair', 'faceWidth_mm'], value: 72 });
+    expect(s1).not.toBe(s0);
+    expect(s1.dirty).toBe(true);
+    expect(s1.edition).toBe(s0.edition + 1);
+    expect(getIn(s1.draft, ['gearPair', 'faceWidth_mm'])).toBe(72);
+    expect(getIn(s0.draft, ['gearPair', 'faceWidth_mm'])).toBe(70);
+  });
+  it('setting the same value is no edit', () => {
+    const s0 = loaded();
+    expect(docReducer(s0, { type: 'set', path: ['gearPair', 'faceWidth_mm'], value: 70 })).toBe(s0);
+  });
+  it('torque typed over a power-given case keeps exactly one of the two, and the schema accepts it', () => {
+    const s1 = docReducer(loaded(), { type: 'setDrive', index: 0, given: 'torque', value: 1500 });
+    const c = getIn(s1.draft, ['loadCases', 0]) as Record<string, unknown>;
+    expect(c.pinionTorque_Nm).toBe(1500);
+    expect('power_kW' in c).toBe(false);
+    expect(parseReviewValue(s1.draft).ok).toBe(true);
+    const s2 = docReducer(s1, { type: 'setDrive', index: 0, given: 'power', value: 150 });
+    const c2 = getIn(s2.draft, ['loadCases', 0]) as Record<string, unknown>;
+    expect(c2.power_kW).toBe(150);
+    expect('pinionTorque_Nm' in c2).toBe(false);
+  });
+  it('P = T1 ω1: 1000 N·m at 1500 rpm is 157.08 kW, and back', () => {
+    const s = docReducer(loaded(), { type: 'setDrive', index: 0, given: 'torque', value: 1000 });
+    const withSpeed = docReducer(s, { type: 'set', path: ['loadCases', 0, 'pinionSpeed_rpm'], value: 1500 });
+    expect(draftPower(withSpeed.draft!, 0)).toBeCloseTo((1000 * 2 * Math.PI * 1500) / 60 / 1000, 9); // ω = 2π n/60 (definition)
+    expect(draftPower(withSpeed.draft!, 0)).toBeCloseTo(157.0796, 4);
+    const back = docReducer(withSpeed, { type: 'setDrive', index: 0, given: 'power', value: 157.07963267948966 });
+    expect(draftTorque(back.draft!, 0)).toBeCloseTo(1000, 9);
+  });
+  it('adds and removes load cases and oils; toggles a component', () => {
+    let s = loaded();
+    s = docReducer(s, { type: 'addItem', list: 'oils', item: { name: 'x' } });
+    expect((getIn(s.draft, ['oils']) as unknown[]).length).toBe(3);
+    s = docReducer(s, { type: 'removeItem', list: 'loadCases', index: 0 });
+    expect(getIn(s.draft, ['loadCases', 0, 'name'])).toBe('Hard-rock peak (invented)');
+    s = docReducer(s, { type: 'toggleComponent', component: 'clutch', on: true });
+    expect(getIn(s.draft, ['gearPair', 'components'])).toEqual(['backstop', 'clutch']);
+    s = docReducer(s, { type: 'toggleComponent', component: 'backstop', on: false });
+    expect(getIn(s.draft, ['gearPair', 'components'])).toEqual(['clutch']);
+  });
+  it('saved clears dirty and keeps the path; load resets', () => {
+    const s = docReducer(docReducer(loaded(), { type: 'set', path: ['title'], value: 'T' }), { type: 'saved', path: '/x.flankfilm.json' });
+    expect(s.dirty).toBe(false);
+    expect(s.path).toBe('/x.flankfilm.json');
+  });
+  it('the new review and the text written are valid review files', () => {
+    expect(parseReviewValue(newReviewDraft()).ok).toBe(true);
+    expect(parseReviewValue(JSON.parse(draftText(demo()))).ok).toBe(true);
+  });
+});

@@ -45,10 +45,18 @@ describe('round trip SI → US → SI', () => {
   const value = fc.double({ min: -1e6, max: 1e8, noNaN: true, noDefaultInfinity: true }).filter((v) => Math.abs(v) > 1e-6);
   const rel = (a: number, b: number) => Math.abs(a - b) / Math.max(Math.abs(b), 1e-300);
 
-  it.each(KINDS)('%s: the converted value converts back to 1e-9 relative', (kind) => {
+  it.each(KINDS.filter((k) => k !== 'temperature'))('%s: the converted value converts back to 1e-9 relative', (kind) => {
     fc.assert(
       fc.property(value, (v) => rel(fromDisplay(kind, toDisplay(kind, v, 'us'), 'us'), v) <= 1e-9),
-      { numRuns: 500 },
+      { numRuns: 500, seed: 20261201 },
+    );
+  });
+
+  // A temperature scale has an offset (0 °C is not "no temperature"): relative to the absolute temperature.
+  it('temperature: the converted value converts back to 1e-9 of the absolute temperature', () => {
+    fc.assert(
+      fc.property(fc.double({ min: -273, max: 1e4, noNaN: true }), (c) => Math.abs(fromDisplay('temperature', toDisplay('temperature', c, 'us'), 'us') - c) / (c + 273.15) <= 1e-9),
+      { numRuns: 500, seed: 20261201 },
     );
   });
 
@@ -58,7 +66,7 @@ describe('round trip SI → US → SI', () => {
         const shown = formatInput(toDisplay(kind, v, 'us'));
         return rel(fromDisplay(kind, parseInput(shown), 'us'), v) <= 1e-9;
       }),
-      { numRuns: 500 },
+      { numRuns: 500, seed: 20261201 },
     );
   });
 
@@ -69,7 +77,7 @@ describe('round trip SI → US → SI', () => {
         const back = fromDisplay('temperature', parseInput(formatInput(toDisplay('temperature', c, 'us'))), 'us');
         return Math.abs(back - c) / (c + 273.15) <= 1e-9;
       }),
-      { numRuns: 500 },
+      { numRuns: 500, seed: 20261201 },
     );
   });
 });

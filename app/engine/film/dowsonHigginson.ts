@@ -1,7 +1,6 @@
-import { requirePositive, type WarningSink } from '../diagnostics';
+import type { WarningSink } from '../diagnostics';
 import type { Metres, MetresPerSecond, NewtonsPerMetre, Pascals, PascalSeconds, PerPascal } from '../units';
-import { requireFinite } from './inputChecks';
-import { warnOutsideLineContactFit } from './lineContactRange';
+import { lineContactGroups } from './lineContactGroups';
 
 /**
  * Dowson–Higginson minimum film thickness of an isothermal, fully flooded EHL line contact.
@@ -39,25 +38,8 @@ export function dowsonHigginsonMinFilm(
   eReduced: Pascals,
   warnings?: WarningSink,
 ): Metres {
-  requirePositive('eta0', eta0, 'Pa·s');
-  requirePositive('alpha', alpha, '1/Pa');
-  requireFinite('uMean', uMean, 'm/s');
-  requirePositive('radius', radius, 'm');
-  requirePositive('loadPerLength', loadPerLength, 'N/m');
-  requirePositive('eReduced', eReduced, 'Pa');
-  if (uMean <= 0) {
-    warnings?.add({
-      code: 'film.no-entrainment',
-      severity: 'warning',
-      field: 'uMean',
-      message: `Mean entrainment velocity ū = ${uMean} m/s is not above 0: no oil is drawn into the contact and no EHL film is formed (film taken as 0).`,
-    });
-    return 0 as Metres;
-  }
-  const eR = eReduced * radius;
-  const U = (eta0 * uMean) / eR;
-  const G = alpha * eReduced;
-  const W = loadPerLength / eR;
-  warnOutsideLineContactFit('Dowson–Higginson', U, W, G, warnings);
+  const g = lineContactGroups('Dowson–Higginson', eta0, alpha, uMean, radius, loadPerLength, eReduced, warnings);
+  if (!g) return 0 as Metres;
+  const { U, W, G } = g;
   return (2.65 * Math.pow(U, 0.7) * Math.pow(G, 0.54) * Math.pow(W, -0.13) * radius) as Metres;
 }

@@ -1,7 +1,6 @@
-import { requirePositive, type WarningSink } from '../diagnostics';
+import type { WarningSink } from '../diagnostics';
 import type { Metres, MetresPerSecond, NewtonsPerMetre, Pascals, PascalSeconds, PerPascal } from '../units';
-import { requireFinite } from './inputChecks';
-import { warnOutsideLineContactFit } from './lineContactRange';
+import { lineContactGroups } from './lineContactGroups';
 
 /** Minimum and central film thickness of a line contact, in metres. Reuse one object in a loop. */
 export interface PanHamrockFilm {
@@ -45,28 +44,13 @@ export function panHamrockFilm(
   warnings?: WarningSink,
   out: PanHamrockFilm = { hMin: 0 as Metres, hCentral: 0 as Metres },
 ): PanHamrockFilm {
-  requirePositive('eta0', eta0, 'Pa·s');
-  requirePositive('alpha', alpha, '1/Pa');
-  requireFinite('uMean', uMean, 'm/s');
-  requirePositive('radius', radius, 'm');
-  requirePositive('loadPerLength', loadPerLength, 'N/m');
-  requirePositive('eReduced', eReduced, 'Pa');
-  if (uMean <= 0) {
-    warnings?.add({
-      code: 'film.no-entrainment',
-      severity: 'warning',
-      field: 'uMean',
-      message: `Mean entrainment velocity ū = ${uMean} m/s is not above 0: no oil is drawn into the contact and no EHL film is formed (film taken as 0).`,
-    });
+  const g = lineContactGroups('Pan–Hamrock', eta0, alpha, uMean, radius, loadPerLength, eReduced, warnings);
+  if (!g) {
     out.hMin = 0 as Metres;
     out.hCentral = 0 as Metres;
     return out;
   }
-  const eR = eReduced * radius;
-  const U = (eta0 * uMean) / eR;
-  const G = alpha * eReduced;
-  const W = loadPerLength / eR;
-  warnOutsideLineContactFit('Pan–Hamrock', U, W, G, warnings);
+  const { U, W, G } = g;
   out.hMin = (1.714 * Math.pow(W, -0.128) * Math.pow(U, 0.694) * Math.pow(G, 0.568) * radius) as Metres;
   out.hCentral = (2.922 * Math.pow(W, -0.166) * Math.pow(U, 0.692) * Math.pow(G, 0.47) * radius) as Metres;
   return out;

@@ -6,16 +6,11 @@ import { toothForces, type ToothForces } from '../load/toothForces';
 import { contactModulus, hertzLinePressure, hertzSemiWidth, reducedRadius } from '../stress/hertz';
 import { nominalContactStress, type NominalContactStress } from '../stress/iso6336Nominal';
 import type { Material } from '../materials';
-import type { Metres, MetresPerSecond, NewtonMetres, NewtonsPerMetre, Pascals, RadiansPerSecond } from '../units';
+import type { EngineDuty } from './types';
+import type { Metres, MetresPerSecond, NewtonsPerMetre, Pascals, RadiansPerSecond } from '../units';
 
-export interface MeshDuty {
-  readonly pinionSpeed: RadiansPerSecond;
-  readonly pinionTorque: NewtonMetres;
-  readonly applicationFactor: number;
-  readonly dynamicFactor: number;
-  readonly faceLoadFactor: number;
-  readonly transverseLoadFactor: number;
-}
+/** What the mechanics need of a load case (see EngineDuty). */
+export type MeshDuty = Pick<EngineDuty, 'pinionSpeed' | 'pinionTorque' | 'applicationFactor' | 'dynamicFactor' | 'faceLoadFactor' | 'transverseLoadFactor'>;
 
 /** Everything along the path that follows from geometry, materials and load alone (struct of arrays, SI). */
 export interface MeshMechanics {

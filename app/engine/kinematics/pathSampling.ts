@@ -19,21 +19,36 @@ export function samplePath(points: PathPoints, n: number): Float64Array {
   const step = (E - A) / (n - 1);
   for (let i = 0; i < n; i++) s[i] = A + i * step;
   s[n - 1] = E;
-  const taken = new Set<number>([0, n - 1]);
+  // Move the nearest free interior grid point onto each of B, C and D (at most three are taken).
+  const taken = [0, n - 1, -1, -1, -1];
+  let count = 2;
+  const isTaken = (i: number) => {
+    for (let k = 0; k < count; k++) if (taken[k] === i) return true;
+    return false;
+  };
+  let moved = false;
   for (const p of [points.B, points.C, points.D]) {
     if (p <= A || p >= E) continue; // outside the path (εα < 1 is rejected earlier; C may lie outside A–E on odd designs)
     let i = Math.round((p - A) / step);
-    // nearest free interior index, searching outwards
     for (let k = 0; k < n; k++) {
       const lo = i - k;
       const hi = i + k;
-      if (lo > 0 && lo < n - 1 && !taken.has(lo)) { i = lo; break; }
-      if (hi > 0 && hi < n - 1 && !taken.has(hi)) { i = hi; break; }
+      if (lo > 0 && lo < n - 1 && !isTaken(lo)) { i = lo; break; }
+      if (hi > 0 && hi < n - 1 && !isTaken(hi)) { i = hi; break; }
     }
-    taken.add(i);
+    taken[count++] = i;
+    if (s[i] !== p) moved = true;
     s[i] = p;
   }
-  s.sort();
+  // The nearest grid point keeps the order, unless two of B, C, D shared one and one moved further.
+  if (moved) {
+    for (let i = 1; i < n; i++) {
+      if ((s[i] as number) < (s[i - 1] as number)) {
+        s.sort();
+        break;
+      }
+    }
+  }
   return s;
 }
 

@@ -137,7 +137,7 @@ export function App({ bridge }: { readonly bridge: Bridge }) {
               <VerdictPanel results={results} units={units} />
               <SideBySidePanel results={results} units={units} />
               <MeshPanel results={results} limits={limits} units={units} />
-              <MapPanel />
+              <MapPanel review={review} edition={doc.edition} results={results} units={units} />
               <SignoffPanel status={status} signoff={review?.signoff} canSign={review !== null} onOpen={() => setSigning(true)} />
             </div>
           </main>

@@ -1,13 +1,7 @@
 import type { VerdictCode } from '../../app/review/results';
+import { VERDICT_WORDS } from '../../app/review/vocabulary';
 
-/** Verdict words (NAMES.md) and the shape that goes with each colour, so colour is never alone. */
-export const VERDICT_WORDS: Readonly<Record<VerdictCode, string>> = {
-  'aw-suffices': 'Anti-wear chemistry suffices',
-  'ep-warranted': 'EP chemistry warranted',
-  'beyond-oil': 'Beyond oil chemistry',
-};
-
-/** Circle with a tick, triangle with a bar, octagon with a cross. */
+/** The shape that goes with each verdict colour, so colour is never alone: circle with a tick, triangle with a bar, octagon with a cross. */
 export function VerdictIcon({ code, size = 18 }: { readonly code: VerdictCode; readonly size?: number }) {
   return (
     <svg className={`vicon vicon--${code}`} width={size} height={size} viewBox="0 0 20 20" aria-hidden="true" focusable="false">

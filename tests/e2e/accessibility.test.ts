@@ -1,17 +1,12 @@
 import { readFileSync } from 'node:fs';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser, Page } from 'playwright-core';
-import { launch, openApp, shootPanel, type Session, WAIT } from './support';
+import { describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { openApp, sessionForFile, shootPanel, type Session, WAIT } from './support';
 
 const PANELS = ['gear-pair', 'duty', 'oils', 'policy', 'verdict', 'side-by-side', 'mesh', 'map', 'sign-off'];
 
-let browser: Browser;
-beforeAll(async () => {
-  browser = await launch();
-});
-afterAll(async () => {
-  await browser?.close();
-});
+// Each test opens its own page (a colour scheme, a dialog): the file shares only the browser.
+const file = sessionForFile({ open: false });
 
 /** Chromium's own accessible name of every rendered input, select and textarea (CDP Accessibility domain). */
 async function accessibleNames(page: Page): Promise<{ html: string; role: string; name: string }[]> {
@@ -44,7 +39,7 @@ const luminance = (rgb: string): number => {
 
 describe('accessibility, tooltips, theme and PNG export', () => {
   it('every input has an accessible name, the Sign-off dialog included', async () => {
-    const s: Session = await openApp(browser);
+    const s: Session = await openApp(file.browser);
     try {
       const names = await accessibleNames(s.page);
       expect(names.length).toBeGreaterThan(60);
@@ -66,7 +61,7 @@ describe('accessibility, tooltips, theme and PNG export', () => {
   });
 
   it('every result carries its definition and source as a tooltip', async () => {
-    const s = await openApp(browser);
+    const s = await openApp(file.browser);
     try {
       const tips = await s.page.locator('.qty').evaluateAll((els) => els.map((e) => ({ title: e.getAttribute('title') ?? '', described: Boolean(e.getAttribute('aria-describedby')) })));
       expect(tips.length).toBeGreaterThan(50);
@@ -79,17 +74,18 @@ describe('accessibility, tooltips, theme and PNG export', () => {
   });
 
   it('follows the OS colour scheme (dark), and shows every panel legibly', async () => {
-    const s = await openApp(browser, { colorScheme: 'dark' });
+    const s = await openApp(file.browser, { colorScheme: 'dark' });
     try {
       const bg = await s.page.evaluate(() => getComputedStyle(document.body).backgroundColor);
       expect(luminance(bg)).toBeLessThan(0.2);
       const fg = await s.page.evaluate(() => getComputedStyle(document.body).color);
       expect(luminance(fg)).toBeGreaterThan(0.8);
-      for (const id of PANELS) await shootPanel(s.page, id, `dark-${id}`);
+      // The Map is shown before it is computed here; map.test.ts saves dark-map.png with the maps drawn.
+      for (const id of PANELS) await shootPanel(s.page, id, id === 'map' ? 'dark-map-idle' : `dark-${id}`);
     } finally {
       await s.close();
     }
-    const light = await openApp(browser, { colorScheme: 'light' });
+    const light = await openApp(file.browser, { colorScheme: 'light' });
     try {
       expect(luminance(await light.page.evaluate(() => getComputedStyle(document.body).backgroundColor))).toBeGreaterThan(0.8);
     } finally {
@@ -98,7 +94,7 @@ describe('accessibility, tooltips, theme and PNG export', () => {
   });
 
   it('each Mesh chart exports a PNG through a download link', async () => {
-    const s = await openApp(browser);
+    const s = await openApp(file.browser);
     try {
       for (const id of ['hertz', 'velocity', 'film', 'temperature']) {
         await s.page.locator(`[data-chart=${id}] button`).click();

@@ -1,17 +1,8 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser, Locator, Page } from 'playwright-core';
-import { edition, field, launch, openApp, resultValue, shootPanel, typeInto, waitForNewResults, type Session, WAIT } from './support';
+import { describe, expect, it } from 'vitest';
+import type { Locator, Page } from 'playwright-core';
+import { edition, field, resultValue, shootPanel, typeInto, waitForNewResults, sessionForFile, WAIT } from './support';
 
-let browser: Browser;
-let s: Session;
-beforeAll(async () => {
-  browser = await launch();
-  s = await openApp(browser);
-});
-afterAll(async () => {
-  await s?.close();
-  await browser?.close();
-});
+const s = sessionForFile();
 
 /** The inline message that describes an input (aria-describedby), or null. */
 async function messageOf(page: Page, input: Locator): Promise<string | null> {

@@ -1,43 +1,33 @@
 import { existsSync, readFileSync } from 'node:fs';
 import { join } from 'node:path';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser } from 'playwright-core';
-import { startHarness, type Harness } from '../harness/server';
-import { edition, field, launch, openApp, typeInto, waitForNewResults, waitForResults, WAIT } from './support';
+import { describe, expect, it } from 'vitest';
+import { edition, field, openApp, sessionForFile, typeInto, waitForNewResults, waitForResults, WAIT } from './support';
 
-let browser: Browser;
-let harness: Harness;
-beforeAll(async () => {
-  browser = await launch();
-  harness = await startHarness();
-});
-afterAll(async () => {
-  await harness?.close();
-  await browser?.close();
-});
+// One harness for the file: its userData (the autosave) outlives each page.
+const file = sessionForFile({ open: false, harness: true });
 
 describe('autosave, recovery, window state and menu commands', () => {
   it('tells main the document is dirty, keeps the edit in the autosave, and offers it back on the next start', async () => {
-    const s = await openApp(browser, { harness });
+    const s = await openApp(file.browser, { harness: file.harness });
     try {
-      await expect.poll(() => harness.documentState()?.dirty, { timeout: WAIT }).toBe(false);
-      expect(harness.documentState()?.title).toContain('Harrow Creek');
+      await expect.poll(() => file.harness.documentState()?.dirty, { timeout: WAIT }).toBe(false);
+      expect(file.harness.documentState()?.title).toContain('Harrow Creek');
       const e0 = await edition(s.page);
       await typeInto(field(s.page, 'gearPair.faceWidth_mm'), '72');
       await waitForNewResults(s.page, e0);
-      await expect.poll(() => harness.documentState()?.dirty, { timeout: WAIT }).toBe(true);
+      await expect.poll(() => file.harness.documentState()?.dirty, { timeout: WAIT }).toBe(true);
       // The autosave is debounced (1.5 s) and lands in main's userData.
-      await expect.poll(() => existsSync(join(harness.workDir, 'userData')), { timeout: WAIT }).toBe(true);
+      await expect.poll(() => existsSync(join(file.harness.workDir, 'userData')), { timeout: WAIT }).toBe(true);
       await s.page.waitForTimeout(2500);
     } finally {
       await s.context.close();
     }
 
-    const context = await browser.newContext({ viewport: { width: 1440, height: 1000 } });
+    const context = await file.browser.newContext({ viewport: { width: 1440, height: 1000 } });
     try {
       const page = await context.newPage();
       page.setDefaultTimeout(WAIT);
-      await page.goto(harness.url);
+      await page.goto(file.harness.url);
       const prompt = page.locator('[data-testid=recovery]');
       await expect.poll(() => prompt.evaluate((d) => (d as HTMLDialogElement).open).catch(() => false), { timeout: WAIT }).toBe(true);
       // Focus starts on "Recover the edits": Enter takes them.
@@ -51,21 +41,21 @@ describe('autosave, recovery, window state and menu commands', () => {
   });
 
   it('a menu command from main (server-sent event) switches the units', async () => {
-    const context = await browser.newContext({ viewport: { width: 1440, height: 1000 } });
+    const context = await file.browser.newContext({ viewport: { width: 1440, height: 1000 } });
     try {
       const page = await context.newPage();
       page.setDefaultTimeout(WAIT);
       const errors: string[] = [];
       page.on('pageerror', (e) => errors.push(e.message));
-      await page.goto(harness.url);
+      await page.goto(file.harness.url);
       // The edit of the first test was never saved, so the recovery is offered again: discard it.
       await page.getByRole('button', { name: /Discard them/ }).click();
       await waitForResults(page);
       await expect(field(page, 'gearPair.faceWidth_mm').inputValue()).resolves.toBe('70');
       await page.waitForTimeout(500); // the event stream opens as the page starts
-      harness.sendMenu({ command: 'units-us' });
+      file.harness.sendMenu({ command: 'units-us' });
       await expect.poll(() => page.locator('[data-testid=units-us]').isChecked(), { timeout: WAIT }).toBe(true);
-      harness.sendMenu({ command: 'units-si' });
+      file.harness.sendMenu({ command: 'units-si' });
       await expect.poll(() => page.locator('[data-testid=units-si]').isChecked(), { timeout: WAIT }).toBe(true);
       expect(errors).toEqual([]);
     } finally {
@@ -74,7 +64,7 @@ describe('autosave, recovery, window state and menu commands', () => {
   });
 
   it('a review file dropped on the window opens', async () => {
-    const s = await openApp(browser);
+    const s = await openApp(file.browser);
     try {
       const text = readFileSync('assets/demo/harrow-creek-conveyor-spur-pair.flankfilm.json', 'utf8');
       const e0 = await edition(s.page);

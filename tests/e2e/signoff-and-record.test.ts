@@ -1,20 +1,11 @@
 import { execFileSync } from 'node:child_process';
 import { existsSync, statSync } from 'node:fs';
 import { join } from 'node:path';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser, Page } from 'playwright-core';
-import { edition, field, launch, openApp, shoot, shootPanel, waitForNewResults, type Session, WAIT } from './support';
+import { describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { edition, field, shoot, shootPanel, waitForNewResults, sessionForFile, WAIT } from './support';
 
-let browser: Browser;
-let s: Session;
-beforeAll(async () => {
-  browser = await launch();
-  s = await openApp(browser);
-});
-afterAll(async () => {
-  await s?.close();
-  await browser?.close();
-});
+const s = sessionForFile();
 
 const status = (page: Page) => page.locator('[data-testid=review-status]').getAttribute('data-status');
 const activePath = (page: Page) => page.evaluate(() => (document.activeElement as HTMLElement | null)?.dataset.path ?? null);

@@ -6,7 +6,7 @@
 import { mkdirSync } from 'node:fs';
 import { join } from 'node:path';
 import { chromium, type Browser, type BrowserContext, type Locator, type Page } from 'playwright-core';
-import { expect } from 'vitest';
+import { afterAll, beforeAll, expect } from 'vitest';
 import { startHarness, type Harness } from '../harness/server';
 
 export const SCREENSHOTS = join('test-output', 'screenshots');
@@ -53,6 +53,59 @@ export async function openApp(browser: Browser, options: { colorScheme?: 'light'
       await context.close();
       if (!options.harness) await harness.close();
     },
+  };
+}
+
+export interface FileSessionOptions {
+  /** Open the demo on a page (default true); false gives only the browser (and the harness, if asked). */
+  readonly open?: boolean;
+  /** With `open: false`: start a harness for the whole file anyway. */
+  readonly harness?: boolean;
+  readonly colorScheme?: 'light' | 'dark';
+}
+
+/**
+ * The set-up every spec file shares: one Chromium for the file and, unless `open: false`, a fresh
+ * harness with the demo open and computed; all closed after the file. Call it at the top of the
+ * file (it registers beforeAll/afterAll); the session's members are there once the tests run.
+ */
+export function sessionForFile(options: FileSessionOptions = {}): Session {
+  let browser: Browser | null = null;
+  let session: Session | null = null;
+  let harness: Harness | null = null;
+  beforeAll(async () => {
+    browser = await launch();
+    if (options.open !== false) session = await openApp(browser, { colorScheme: options.colorScheme });
+    else if (options.harness) harness = await startHarness();
+  });
+  afterAll(async () => {
+    await session?.close();
+    await harness?.close();
+    await browser?.close();
+  });
+  const open = (): Session => {
+    if (!session) throw new Error('no page is open for this file: sessionForFile({ open: false }), or the set-up failed');
+    return session;
+  };
+  return {
+    get browser() {
+      if (!browser) throw new Error('the browser did not start');
+      return browser;
+    },
+    get harness() {
+      if (harness) return harness;
+      return open().harness;
+    },
+    get context() {
+      return open().context;
+    },
+    get page() {
+      return open().page;
+    },
+    get pageErrors() {
+      return open().pageErrors;
+    },
+    close: () => open().close(),
   };
 }
 

@@ -1,17 +1,8 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser, Page } from 'playwright-core';
-import { chartSummary, field, launch, openApp, resultValue, shootPanel, type Session, WAIT } from './support';
+import { describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { chartSummary, field, resultValue, shootPanel, sessionForFile, WAIT } from './support';
 
-let browser: Browser;
-let s: Session;
-beforeAll(async () => {
-  browser = await launch();
-  s = await openApp(browser);
-});
-afterAll(async () => {
-  await s?.close();
-  await browser?.close();
-});
+const s = sessionForFile();
 
 /** Every numeric input's text, by review path. */
 async function numberInputs(page: Page): Promise<Record<string, string>> {

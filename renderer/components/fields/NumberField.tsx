@@ -53,6 +53,8 @@ export function NumberField({ path, label, kind = 'none', unit, optional, hint, 
   }, [current, units, shown, stored, kind, optional, text]);
 
   const commit = (next: string) => {
+    // Start of the edit-to-chart latency (tests/e2e/bench.ts measures it to 'chart-updated').
+    performance.mark('edit');
     setText(next);
     const n = parseInput(next);
     const v = next.trim() === '' && optional ? undefined : Number.isNaN(n) ? next : fromDisplay(kind, n, units);

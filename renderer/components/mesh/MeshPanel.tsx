@@ -1,4 +1,4 @@
-import { memo, useId, useMemo, useState } from 'react';
+import { memo, useEffect, useId, useMemo, useState } from 'react';
 import type { Results } from '../../../app/review/results';
 import type { UnitSystem } from '../../units/units';
 import { Panel } from '../panels/Panel';
@@ -20,6 +20,10 @@ function MeshPanelView({ results, limits, units }: Props) {
   const index = picked < cases.length ? picked : 0;
   const c = cases[index];
   const specs = useMemo(() => (c && results ? meshCharts(c, results.gear, limits, units) : []), [c, results, limits, units]);
+  // The charts (children) have drawn their new data by now: the end of the edit-to-chart latency.
+  useEffect(() => {
+    if (specs.length) performance.mark('chart-updated');
+  }, [specs]);
   if (!results || !c) return <Panel id="mesh" title="Mesh"><p className="note">No results yet.</p></Panel>;
   const stem = `flankfilm-mesh-${index + 1}`;
   return (

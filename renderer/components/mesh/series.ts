@@ -1,16 +1,6 @@
 import type { CaseResult, GearResult, PointResult } from '../../../app/review/results';
+import { OKABE_ITO, REGIME_COLOURS, REGIME_WORDS } from '../../../app/review/vocabulary';
 import { toDisplay, unitLabel, type QuantityKind, type UnitSystem } from '../../units/units';
-
-/** Okabe–Ito colours (Okabe & Ito, 2008), safe for colour-blind readers. */
-export const OKABE_ITO = {
-  orange: '#E69F00',
-  skyBlue: '#56B4E9',
-  bluishGreen: '#009E73',
-  yellow: '#F0E442',
-  blue: '#0072B2',
-  vermillion: '#D55E00',
-  reddishPurple: '#CC79A7',
-} as const;
 
 export interface SeriesSpec {
   readonly label: string;
@@ -94,9 +84,9 @@ export function meshCharts(c: CaseResult, gear: GearResult, limits: RegimeLimits
       markers,
       y2Max: lambdaTop,
       bands: [
-        { from: 0, to: limits.boundaryBelow, label: 'boundary', color: OKABE_ITO.vermillion },
-        { from: limits.boundaryBelow, to: limits.fullFilmFrom, label: 'mixed', color: OKABE_ITO.orange },
-        { from: limits.fullFilmFrom, to: lambdaTop, label: 'full film (EHL)', color: OKABE_ITO.bluishGreen },
+        { from: 0, to: limits.boundaryBelow, label: REGIME_WORDS.boundary, color: REGIME_COLOURS.boundary },
+        { from: limits.boundaryBelow, to: limits.fullFilmFrom, label: REGIME_WORDS.mixed, color: REGIME_COLOURS.mixed },
+        { from: limits.fullFilmFrom, to: lambdaTop, label: REGIME_WORDS['full-film'], color: REGIME_COLOURS['full-film'] },
       ],
       series: [
         { label: 'hmin', axis: 'y', color: OKABE_ITO.blue, points: along(c.path, units, 'film', (p) => p.filmThicknessMin_um) },

@@ -1,7 +1,8 @@
 import { useEffect, useRef, useState, type FormEvent } from 'react';
 import { DECISIONS, type Signoff } from '../../../app/review/schema';
 import { trapTab } from '../focusTrap';
-import { DECISION_WORDS, type SignoffForm } from './words';
+import { DECISION_WORDS } from '../../../app/review/vocabulary';
+import type { SignoffForm } from './words';
 
 interface Props {
   readonly open: boolean;

@@ -2,7 +2,7 @@ import type { ReviewStatus } from '../../../app/review/results';
 import type { Signoff } from '../../../app/review/schema';
 import { Panel } from '../panels/Panel';
 import { StatusBadge } from '../StatusBadge';
-import { DECISION_WORDS } from './words';
+import { DECISION_WORDS } from '../../../app/review/vocabulary';
 
 interface Props {
   readonly status: ReviewStatus;

@@ -47,36 +47,36 @@ function time(fn: () => void, runs: number, warmup = 100): number[] {
   return t;
 }
 
-/** Transcendental operations per path point in the recompute: mechanics 2 √; Blok 3 √; film 3 ln + 4 exp. */
-const OPS_PER_POINT = { sqrt: 5, log: 3, exp: 4 };
+/**
+ * Transcendental operations the recompute needs. A case point: mechanics 2 √, Blok 3 √, film 3 ln +
+ * 4 exp (h_min, h_c, h_Y, φT). A grade-finder point: 2 exp (film and φT; its logarithms are shared).
+ */
+const OPS = { casePoint: { sqrt: 5, log: 3, exp: 4 }, finderPoint: { sqrt: 0, log: 0, exp: 2 } };
 
-function pointCount(r: Review): number {
+function opCount(r: Review): { sqrt: number; log: number; exp: number } {
   const res = run(r);
   const main = res.cases.reduce((s, c) => s + c.path.length, 0);
   const tables = new Set(res.gradeFinder.map((g) => JSON.stringify(g.table)));
-  // The finder evaluates one cell per grade and case: film only (3 ln + 2 exp per point), counted as points.
   const finder = [...tables].reduce((s, t) => s + (JSON.parse(t) as unknown[]).length, 0) * r.loadCases.length * Math.min(FINDER_PATH_POINTS, r.policy.pathPoints);
-  return main + finder;
+  const n = (k: 'sqrt' | 'log' | 'exp') => main * OPS.casePoint[k] + finder * OPS.finderPoint[k];
+  return { sqrt: n('sqrt'), log: n('log'), exp: n('exp') };
 }
 
 /** A bare loop doing the same count of transcendental operations, on varying arguments. */
-function floorLoop(points: number): number {
+function floorLoop(ops: { sqrt: number; log: number; exp: number }): number {
   let acc = 0;
-  for (let i = 0; i < points; i++) {
-    const x = 1.0001 + i * 1e-7;
-    for (let k = 0; k < OPS_PER_POINT.sqrt; k++) acc += Math.sqrt(x + k);
-    for (let k = 0; k < OPS_PER_POINT.log; k++) acc += Math.log(x + k);
-    for (let k = 0; k < OPS_PER_POINT.exp; k++) acc += Math.exp(-x - k);
-  }
+  for (let i = 0; i < ops.sqrt; i++) acc += Math.sqrt(1.0001 + i * 1e-7);
+  for (let i = 0; i < ops.log; i++) acc += Math.log(1.0001 + i * 1e-7);
+  for (let i = 0; i < ops.exp; i++) acc += Math.exp(-1.0001 - i * 1e-9);
   return acc;
 }
 
 async function main() {
   const r400 = workload(400);
   const recompute = time(() => run(r400), 60);
-  const points = pointCount(r400);
+  const ops = opCount(r400);
   let sink = 0;
-  const floor = time(() => (sink += floorLoop(points)), 60);
+  const floor = time(() => (sink += floorLoop(ops)), 60);
   const scaling: Record<string, number> = {};
   for (const n of [100, 200, 400, 800]) {
     const r = workload(n);
@@ -105,7 +105,7 @@ async function main() {
     recompute_ms_median: median(recompute),
     floor_ratio: median(recompute) / median(floor),
     floor_ms_median: median(floor),
-    points_per_recompute: points,
+    transcendental_ops_per_recompute: ops,
     map_ms: median(mapTimes),
     pdf_ms,
     latency_p95_ms: browser.latency_p95_ms ?? null,

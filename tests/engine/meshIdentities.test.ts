@@ -8,6 +8,7 @@ import { degreesToRadians, millimetres, rpmToRadiansPerSecond, type Metres, type
 import { FZG_TYPE_C } from '../reference/fzgTestGears';
 
 const steel = MATERIALS['steel-carburized'];
+// Any duty will do: these are identities of the kinematics and the sharing, not values.
 const duty = { pinionSpeed: rpmToRadiansPerSecond(1500), pinionTorque: 200 as NewtonMetres, applicationFactor: 1, dynamicFactor: 1, faceLoadFactor: 1, transverseLoadFactor: 1 };
 
 describe('path sampling', () => {

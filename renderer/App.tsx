@@ -24,6 +24,10 @@ import { Sheet, type SheetContext } from './state/context';
 import { lookupMessages, messagesByPath } from './state/messages';
 import { newReviewDraft } from './state/templates';
 import type { UnitSystem } from './units/units';
+import { basisTag, METHODS, type MethodEntry } from '../app/review/methods';
+
+/** One method as a line of the Help dialog: what, the formula, the source and how firmly it is held. */
+const methodLine = (m: MethodEntry): string => `${m.topic} — ${m.quantity}: ${m.formula} (${m.source}${basisTag(m.basis) ? `; ${basisTag(m.basis)}` : ''})`;
 
 type Recovery = { text: string; path: string | null; savedAt: string };
 
@@ -77,7 +81,7 @@ export function App({ bridge }: { readonly bridge: Bridge }) {
       'export-record': () => void actions.exportRecord(units === 'us' ? 'letter' : 'a4'),
       'export-csv': () => void actions.exportCsv(),
       sign: () => setSigning(true),
-      methods: () => setInfo({ title: 'Methods and assumptions', lines: computed.results?.assumptions ?? ['No results yet.'] }),
+      methods: () => setInfo({ title: 'Methods and sources', lines: [...(computed.results?.assumptions ?? []), ...METHODS.map(methodLine)] }),
       about: () =>
         void bridge.appInfo({}).then((a) => setInfo({ title: 'About Flankfilm', lines: [`Flankfilm ${a.version}`, `Engine ${a.engineVersion}`, `Platform ${a.platform}`] })),
       'units-si': () => setUnits('si'),

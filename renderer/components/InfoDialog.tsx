@@ -7,7 +7,7 @@ interface Props {
   readonly onClose: () => void;
 }
 
-/** About Flankfilm, and the stated assumptions of the methods. */
+/** About Flankfilm, and Methods and sources: the assumptions of this review, then every formula with its source. */
 export function InfoDialog({ title, lines, onClose }: Props) {
   const ref = useRef<HTMLDialogElement>(null);
   useEffect(() => {

@@ -40,7 +40,7 @@ describe('autosave, recovery, window state and menu commands', () => {
     }
   });
 
-  it('a menu command from main (server-sent event) switches the units', async () => {
+  it('menu commands from main (server-sent events) switch the units and open Methods and sources', async () => {
     const context = await file.browser.newContext({ viewport: { width: 1440, height: 1000 } });
     try {
       const page = await context.newPage();
@@ -57,6 +57,15 @@ describe('autosave, recovery, window state and menu commands', () => {
       await expect.poll(() => page.locator('[data-testid=units-us]').isChecked(), { timeout: WAIT }).toBe(true);
       file.harness.sendMenu({ command: 'units-si' });
       await expect.poll(() => page.locator('[data-testid=units-si]').isChecked(), { timeout: WAIT }).toBe(true);
+      // Help → Methods and sources lists every formula with its source and how firmly it is held.
+      file.harness.sendMenu({ command: 'methods' });
+      const dialog = page.getByRole('dialog', { name: 'Methods and sources' });
+      await expect.poll(() => dialog.isVisible(), { timeout: WAIT }).toBe(true);
+      const text = await dialog.innerText();
+      expect(text).toMatch(/Dowson & Higginson/);
+      expect(text).toMatch(/ISO\/TS 6336-20/);
+      expect(text).toMatch(/\[memory\]/);
+      await dialog.getByRole('button', { name: 'Close' }).click();
       expect(errors).toEqual([]);
     } finally {
       await context.close();

@@ -1,7 +1,7 @@
 import { FINGERPRINT_SCHEME } from '../../review/fingerprint';
 import type { RecordContext } from '../context';
 import { drawStatusIcon, STATUS_COLOURS } from '../icons';
-import { basisTag, METHODS } from '../methods';
+import { basisTag, METHODS } from '../../review/methods';
 import { caseTitle } from './caseResults';
 import { DECISION_WORDS, GREY, STATUS_LABELS } from '../words';
 

@@ -1,5 +1,5 @@
 /**
- * The "Methods and sources" section of the record: every formula the engine uses, with its
+ * Methods and sources (the record's section and the app's Help): every formula the engine uses, with its
  * published source. `basis` says how firmly the value or form is held:
  *   'published'        — the form as the cited standard or paper gives it;
  *   'memory'           — recalled, consistent with our arithmetic, not read from the text: printed "[memory]";
@@ -56,8 +56,12 @@ export const METHODS: readonly MethodEntry[] = [
   { topic: 'Scuffing', quantity: 'Scuffing temperature from the FZG stage', formula: 'θS = 80 + (0.85 + 1.4 XW) XL S² °C', source: 'ISO/TS 6336-20; ISO 14635-1 (FZG A/8.3/90)', basis: 'memory' },
   { topic: 'Scuffing', quantity: 'Scuffing safety', formula: 'SB = (θS − θoil)/(θB,max − θoil);  default SB,min = 1.5', source: 'ISO/TS 6336-20 (the default minimum is [memory], weak)', basis: 'memory' },
   { topic: 'Scuffing', quantity: 'Integral temperature method', formula: 'θint = θM + 1.5 θfla,int;  θintS = 80 + 0.23 T1T XL;  SintS = θintS/θint;  default SintS,min = 1.8', source: 'ISO/TS 6336-21', basis: 'memory' },
+  { topic: 'Scuffing', quantity: 'Flash temperature at E for the integral method', formula: 'θfla,E = C · θfl,Blok(E, whole load KBγ wBt);  θfla,int = θfla,E Xε;  C = policy.integralFlashCalibration, default 0.44', source: 'Flankfilm: C reproduces θintS on the FZG A/8.3/90 test gear at 90 °C within ±10 % over stages 5–12 (the standard\'s own closed form for θfla,E is not reproduced); Xε per ISO/TS 6336-21', basis: 'memory' },
+  { topic: 'Film', quantity: 'Temperature the film is computed at', formula: 'oil properties at the bulk temperature θM (clamped to the oil model\'s range, with a warning)', source: 'as ISO/TR 15144-1 and AGMA 925 take the film at the flank temperature', basis: 'common practice' },
   { topic: 'Scuffing', quantity: 'Scuffing probability', formula: 'θS ~ Normal(θS, σ = spread · θS);  P = Φ((θB,max − θS)/σ); default spread 0.15', source: 'AGMA 925 form', basis: 'memory' },
   { topic: 'Oil classes', quantity: 'FZG floors of the oil classes', formula: 'EP gear oil (CLP) FZG A/8.3/90 ≥ 12; anti-wear hydraulic oil (HLP) ≥ 10; R&O and turbine oils usually 5–9', source: 'DIN 51517-3; DIN 51524-2; R&O range common practice', basis: 'published' },
+  { topic: 'Verdict', quantity: 'Grade finder', formula: 'for each ISO VG: KV40 = grade mid-point, KV100 from the oil\'s VI (ASTM D2270 inverted); λmin over every load case at the hotter of its own temperature and the top of the policy range; the lowest grade with λmin ≥ λ target', source: 'ISO 3448; ASTM D2270; the film models above', basis: 'published' },
+  { topic: 'Verdict', quantity: 'Operating map', formula: 'λmin, SB, SintS and the verdict over oil temperature × 10–150 % of the case torque, by the same models as the cases', source: 'the models above', basis: 'published' },
   { topic: 'Verdict', quantity: 'EP escalation for shock duty', formula: 'KA at or above the policy limit (default 1.75) counts as shock duty', source: 'common practice', basis: 'common practice' },
 ];
 

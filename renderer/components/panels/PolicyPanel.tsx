@@ -38,6 +38,7 @@ export function PolicyPanel() {
           <NumberField path={[...p, 'frictionCoefficient']} label="Friction coefficient μ" optional hint="Empty: the ISO/TS 6336-20 estimate" />
           <NumberField path={[...p, 'scuffingTemperatureSpread']} label="Spread of θS (σ/θS)" />
           <NumberField path={[...p, 'pathPoints']} label="Points along the path" />
+          <NumberField path={[...p, 'integralFlashCalibration']} label="θfla,E calibration (integral)" hint="Blok flash at E → ISO/TS 6336-21 θfla,E; 0.44 reproduces θintS on the FZG A/8.3/90 test" />
         </div>
         <CheckField path={[...p, 'thermalFilmCorrection']} label="Inlet shear heating correction (Murch–Wilson)" checked={thermal !== false} onChange={(on) => dispatch({ type: 'set', path: [...p, 'thermalFilmCorrection'], value: on })} />
       </fieldset>

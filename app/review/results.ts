@@ -17,9 +17,15 @@ export interface PointResult {
   pathFraction: number;
   loadShare: number;
   hertzStress_MPa: number;
+  /** Tangential flank velocities v1 = ω1 ρ1 (pinion) and v2 = ω2 ρ2 (wheel). */
+  pinionFlankVelocity_mps: number;
+  wheelFlankVelocity_mps: number;
   slidingVelocity_mps: number;
   sumVelocity_mps: number;
   slideToRoll: number;
+  /** Specific sliding ζ1 = (v1 − v2)/v1 of the pinion and ζ2 = (v2 − v1)/v2 of the wheel. */
+  specificSlidingPinion: number;
+  specificSlidingWheel: number;
   filmThicknessMin_um: number | null;
   filmThicknessCentral_um: number | null;
   lambda: number | null;

@@ -85,3 +85,15 @@ describe('helical pair reached as β → 0', () => {
     }
   });
 });
+
+describe('specific sliding (kinematics of involute gearing)', () => {
+  it('ζ1 = (v1 − v2)/v1 and ζ2 = (v2 − v1)/v2, zero at C, with ζ2 = −ζ1/(1 − ζ1)', () => {
+    const g = gearPairGeometry(FZG_TYPE_C);
+    const m = meshMechanics(g, steel, steel, duty, 101);
+    expect(m.specificSliding1[m.pitchIndex] as number).toBeCloseTo(0, 12);
+    for (let i = 0; i < m.n; i++) {
+      const z1 = m.specificSliding1[i] as number;
+      expect(m.specificSliding2[i] as number).toBeCloseTo(-z1 / (1 - z1), 9);
+    }
+  });
+});

@@ -1,5 +1,4 @@
 import { EngineInputError } from '../diagnostics';
-import type { Metres } from '../units';
 import type { PathPoints } from '../geometry/types';
 
 export const MIN_PATH_POINTS = 11;
@@ -50,15 +49,4 @@ export function samplePath(points: PathPoints, n: number): Float64Array {
     }
   }
   return s;
-}
-
-/** Index of the sample nearest to `position` (the samples are sorted). */
-export function nearestIndex(samples: Float64Array, position: Metres): number {
-  let best = 0;
-  let bestDist = Infinity;
-  for (let i = 0; i < samples.length; i++) {
-    const d = Math.abs((samples[i] as number) - position);
-    if (d < bestDist) { bestDist = d; best = i; }
-  }
-  return best;
 }

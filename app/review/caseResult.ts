@@ -97,6 +97,7 @@ export function caseToResult(review: Review, lc: LoadCase, oil: ReviewOil | null
     applicationFactor: lc.applicationFactor,
     oilTemperature_C: lc.oilTemperature_C,
     pitchLineVelocity_mps: m.pitchLineVelocity,
+    referenceLineVelocity_mps: (m.pinionAngularSpeed * a.input.geometry.referenceDiameter1) / 2,
     nominalContactStress_MPa: toMegapascals(m.nominal.sigmaH),
     nominalContactStressBasic_MPa: toMegapascals(m.nominal.sigmaH0),
     maxHertzStress_MPa: toMegapascals(m.hertzPressure[maxI] as Pascals),

@@ -80,7 +80,10 @@ export interface CaseResult {
   pinionTorque_Nm: number;
   applicationFactor: number;
   oilTemperature_C: number;
+  /** On the working pitch circle dw1. */
   pitchLineVelocity_mps: number;
+  /** On the reference circle d1 (as ISO 6336 quotes v for Kv). */
+  referenceLineVelocity_mps: number;
   nominalContactStress_MPa: number;
   nominalContactStressBasic_MPa: number;
   maxHertzStress_MPa: number;

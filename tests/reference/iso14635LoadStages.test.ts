@@ -41,3 +41,22 @@ describe('FZG test speed (ISO 14635-1: A/8.3/90)', () => {
     expect(m.pitchLineVelocity).toBeCloseTo(8.3, 1);
   });
 });
+
+describe('velocities on dw1 and on d1 (ISO 21771)', () => {
+  it('the FZG type A pinion at 2170 rpm: 8.32 m/s on dw1 = 73.2 mm, 8.18 m/s on d1 = 72 mm (v = ω d/2, arithmetic)', async () => {
+    const { parseReviewValue } = await import('../../app/review/parse');
+    const { run } = await import('../../app/review/run');
+    const p = parseReviewValue({
+      format: 'flankfilm.review', version: 1, title: 'FZG type A (ISO 14635-1)',
+      gearPair: { normalModule_mm: 4.5, faceWidth_mm: 20, centerDistance_mm: 91.5, pinion: { teeth: 16, profileShift: 0.8532, tipDiameter_mm: 88.77, roughnessRa_um: 0.3, material: 'steel-carburized' }, wheel: { teeth: 24, profileShift: -0.5, tipDiameter_mm: 112.5, roughnessRa_um: 0.3, material: 'steel-carburized' } },
+      loadCases: [{ name: 'stage 9', pinionSpeed_rpm: 2170, pinionTorque_Nm: 302, oilTemperature_C: 90, lubrication: 'dip' }],
+      oils: [],
+    });
+    if (!p.ok) throw new Error(JSON.stringify(p.issues));
+    const c = run(p.review).cases[0];
+    expect(c?.pitchLineVelocity_mps).toBeCloseTo((2 * Math.PI * 2170 / 60) * 0.0732 / 2, 9);
+    expect(c?.referenceLineVelocity_mps).toBeCloseTo((2 * Math.PI * 2170 / 60) * 0.072 / 2, 9);
+    expect(c?.pitchHertzStress_MPa).toBeGreaterThan(1386 * 0.99); // stage 9 of the load-stage table [memory]
+    expect(c?.pitchHertzStress_MPa).toBeLessThan(1386 * 1.01);
+  });
+});

@@ -47,6 +47,7 @@ export async function reviewCommand(args: string[], io: CliIo): Promise<number> 
   else io.out(summaryText(results, { status: status(loaded.review, results), review: loaded.review }));
   if (values.map) {
     const maps = operatingMaps(loaded.review) ?? [];
+    if (maps.length === 0) io.err(`${values.map}: the review has no oils, so the map has no cells (header only)\n`);
     try {
       await atomicWrite(values.map, operatingMapsCsv(maps));
     } catch (e) {

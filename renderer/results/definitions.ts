@@ -27,6 +27,7 @@ export const DEFINITIONS = {
   integralTemperature: d('θint', 'Integral temperature', 'temperature', 'θint = θM + 1.5 θfla,int.', 'ISO/TS 6336-21'),
   integralSafety: d('SintS', 'Scuffing safety (integral)', 'none', 'SintS = θintS / θint; compared with SintS,min of the policy.', 'ISO/TS 6336-21 (integral temperature method)'),
   requiredFzgStage: d('FZG needed', 'FZG stage needed', 'none', 'Smallest FZG A/8.3/90 failure stage for which SB ≥ SB,min; “>12” is beyond the scale.', 'ISO 14635-1 stages; ISO/TS 6336-20'),
+  requiredFzgStageIntegral: d('FZG needed, integral', 'FZG stage needed (integral)', 'none', 'Smallest FZG A/8.3/90 failure stage for which SintS ≥ SintS,min; “>12” is beyond the scale.', 'ISO 14635-1 stages; ISO/TS 6336-21'),
   scuffingProbability: d('P', 'Scuffing probability', 'none', 'P = Φ((θB,max − θS)/σ), σ = spread × θS from the policy.', 'AGMA 925 style'),
   lambdaGFMin: d('λGF,min', 'Min micropitting film', 'none', 'λGF = h / Ra,avg, its smallest value along the path.', 'ISO/TS 6336-22; film from ISO/TR 15144-1'),
   transverseContactRatio: d('εα', 'Transverse contact ratio', 'none', 'Length of the path of contact divided by the transverse base pitch.', 'ISO 21771'),

@@ -68,7 +68,8 @@ type Row = [string, string];
 function keyFigures(u: Units, c: CaseResult): Row[] {
   const at = (x: number | null): string => (x === null ? '' : ` at ${u.num(x, 'length')} ${u.unit('length')}`);
   const o = c.oilAtTemperature;
-  const stage = c.requiredFzgStage === null ? DASH : c.requiredFzgStage === '>12' ? 'above 12' : `stage ${c.requiredFzgStage}`;
+  const st = (x: CaseResult['requiredFzgStage']) => (x === null ? DASH : x === '>12' ? 'above 12' : `stage ${x}`);
+  const stage = c.requiredFzgStage === null ? DASH : `${st(c.requiredFzgStage)} (flash), ${st(c.requiredFzgStageIntegral)} (integral)`;
   return [
     ['Pinion speed n1', u.fmt(c.pinionSpeed_rpm, 'speed', 5)],
     ['Pinion torque T1', u.fmt(c.pinionTorque_Nm, 'torque')],

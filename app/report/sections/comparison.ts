@@ -60,7 +60,8 @@ export function drawComparison(ctx: RecordContext): void {
 function cellOf(c: CaseResult | undefined): Cell {
   if (!c) return DASH;
   const fig = `SB ${formatNumber(c.scuffingSafety, 3)} / SintS ${formatNumber(c.integralSafety, 3)} / λmin ${formatNumber(c.lambdaMin, 2)}`;
-  const stage = c.requiredFzgStage === null ? '' : `\nneeds FZG ${c.requiredFzgStage === '>12' ? 'above 12' : c.requiredFzgStage}`;
+  const st = (x: CaseResult['requiredFzgStage']) => (x === '>12' ? 'above 12' : String(x));
+  const stage = c.requiredFzgStage === null ? '' : `\nneeds FZG ${st(c.requiredFzgStage)} (flash) / ${st(c.requiredFzgStageIntegral)} (integral)`;
   if (!c.verdict) return `${DASH}\n${fig}${stage}`;
   return { text: `${VERDICT_WORDS[c.verdict.code]}\n${fig}${stage}`, icon: c.verdict.code };
 }

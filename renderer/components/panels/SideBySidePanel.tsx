@@ -44,6 +44,8 @@ function SideBySidePanelView({ results, units }: { readonly results: Results | n
                         <dd><Quantity def="integralSafety" value={c.integralSafety} units={units} sig={3} testId="sbs-sints" /></dd>
                         <dt>FZG needed</dt>
                         <dd><Quantity def="requiredFzgStage" value={c.requiredFzgStage === null ? null : String(c.requiredFzgStage)} units={units} testId="sbs-fzg" /></dd>
+                        <dt>FZG needed, integral</dt>
+                        <dd><Quantity def="requiredFzgStageIntegral" value={c.requiredFzgStageIntegral === null ? null : String(c.requiredFzgStageIntegral)} units={units} testId="sbs-fzg-int" /></dd>
                       </dl>
                       {c.verdict ? <VerdictBadge code={c.verdict.code} compact /> : null}
                     </td>

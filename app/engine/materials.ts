@@ -1,3 +1,4 @@
+import { thermalContactCoefficient } from './heat/blokFlash';
 import type { JoulesPerKilogramKelvin, KilogramsPerCubicMetre, Pascals, ThermalContactCoefficient, WattsPerMetreKelvin } from './units';
 
 /** Flank material data the engine needs, in SI. */
@@ -37,5 +38,5 @@ export const MATERIALS: Readonly<Record<MaterialPreset, Material>> = {
 
 /** Thermal contact coefficient B_M = √(k ρ c), W·s^0.5/(m²·K) (Blok 1937). */
 export function materialContactCoefficient(m: Material): ThermalContactCoefficient {
-  return Math.sqrt(m.thermalConductivity * m.density * m.specificHeat) as ThermalContactCoefficient;
+  return thermalContactCoefficient(m.thermalConductivity, m.density, m.specificHeat);
 }

@@ -38,12 +38,10 @@ function pointAt(a: CaseAnalysis, i: number): PointResult {
 }
 
 /** The facts the verdict rules read, from one analysis. */
-function verdictFacts(review: Review, lc: LoadCase, oil: ReviewOil, all: readonly ReviewOil[], a: CaseAnalysis): VerdictFacts {
+function verdictFacts(review: Review, lc: LoadCase, oil: ReviewOil, all: readonly ReviewOil[], a: CaseAnalysis, maxHertz: Pascals): VerdictFacts {
   const film = a.film as NonNullable<CaseAnalysis['film']>;
   const heat = a.heat as NonNullable<CaseAnalysis['heat']>;
   const sc = a.scuffing as NonNullable<CaseAnalysis['scuffing']>;
-  let maxP = 0;
-  for (const p of a.mechanics.hertzPressure) if (p > maxP) maxP = p;
   return {
     caseName: lc.name,
     oilName: oil.name,
@@ -54,7 +52,7 @@ function verdictFacts(review: Review, lc: LoadCase, oil: ReviewOil, all: readonl
     applicationFactor: lc.applicationFactor,
     oilTemperature_C: lc.oilTemperature_C,
     pitchLineVelocity_mps: a.mechanics.pitchLineVelocity,
-    maxHertzStress_MPa: maxP / 1e6,
+    maxHertzStress_MPa: toMegapascals(maxHertz),
     lambdaMin: film.lambdaMin,
     lambdaGFMin: film.lambdaGFMin,
     regime: film.caseRegime,
@@ -88,7 +86,7 @@ export function caseToResult(review: Review, lc: LoadCase, oil: ReviewOil | null
   const heat = a.heat;
   const sc = a.scuffing;
   const st = a.oilAtFilmTemperature;
-  const verdict = oil && film ? decideVerdict(verdictFacts(review, lc, oil, all, a), review.policy) : null;
+  const verdict = oil && film ? decideVerdict(verdictFacts(review, lc, oil, all, a, m.hertzPressure[maxI] as Pascals), review.policy) : null;
   return {
     loadCase: lc.name,
     oil: oil?.name ?? null,

@@ -1,8 +1,9 @@
-import { BLOK_CONSTANT_SEMI_WIDTH } from '../heat/blokFlash';
+import { blokFlashTemperature } from '../heat/blokFlash';
+import { hertzSemiWidth } from '../stress/hertz';
 import { LUBRICATION_FACTOR_XS } from '../heat/bulkTemperature';
 import { integralContactRatioFactor } from '../heat/contactRatioFactor';
 import { helicalLoadFactor } from '../heat/helicalLoadFactor';
-import { FZG_A_PINION_TORQUE, INTEGRAL_WEIGHT_BULK, INTEGRAL_WEIGHT_FLASH } from '../heat/integralTemperature';
+import { FZG_A_PINION_TORQUE, INTEGRAL_WEIGHT_BULK, INTEGRAL_WEIGHT_FLASH, integralScuffingTemperature } from '../heat/integralTemperature';
 import { multipleMeshFactor } from '../heat/meshingPinions';
 import { isoMeanFriction } from '../heat/isoFriction';
 import { scuffingTemperature } from '../heat/scuffingTemperature';
@@ -14,7 +15,7 @@ import type { CaseInput, EngineOil } from '../mesh/types';
 import type { FzgStageNeed } from '../mesh/scuffing';
 import { verdictCodeOf } from '../verdict/code';
 import type { VerdictCode } from '../verdict/types';
-import { celsiusToKelvin, type Kelvin, type Metres, type MetresPerSecond, type NewtonsPerMetre } from '../units';
+import { celsiusToKelvin, kelvinToCelsius, type Kelvin, type Metres, type MetresPerSecond, type NewtonMetres, type NewtonsPerMetre } from '../units';
 
 export const VERDICT_CODES: readonly VerdictCode[] = ['aw-suffices', 'ep-warranted', 'beyond-oil'];
 
@@ -117,7 +118,7 @@ export function prepareSweep(input: Omit<CaseInput, 'oil'>): SweepCase {
   for (let i = 0; i < n; i++) {
     const v1 = m.v1[i] as number, v2 = m.v2[i] as number;
     const w = m.lineLoad[i] as number, bH = m.hertzSemiWidth[i] as number;
-    const f = v1 === v2 ? 0 : (BLOK_CONSTANT_SEMI_WIDTH * w * Math.abs(v1 - v2)) / (Math.sqrt(bH) * (bM1 * Math.sqrt(v1) + bM2 * Math.sqrt(v2)));
+    const f = blokFlashTemperature(1, w as NewtonsPerMetre, v1 as MetresPerSecond, v2 as MetresPerSecond, bM1, bM2, bH as Metres); // θfl is linear in μ
     flashPerMu[i] = f;
     if (f > flashPerMuMax) flashPerMuMax = f;
     const lnU = Math.log((m.sumVelocity[i] as number) / 2);
@@ -129,9 +130,9 @@ export function prepareSweep(input: Omit<CaseInput, 'oil'>): SweepCase {
   }
   const last = n - 1;
   const fullLoad = m.unitLoad * kBg;
-  const bHE = Math.sqrt((4 * fullLoad * (m.reducedRadius[last] as number)) / (Math.PI * m.contactModulus));
+  const bHE = hertzSemiWidth(fullLoad as NewtonsPerMetre, m.reducedRadius[last] as Metres, m.contactModulus);
   const v1E = m.v1[last] as number, v2E = m.v2[last] as number;
-  const flashEPerMu = (BLOK_CONSTANT_SEMI_WIDTH * fullLoad * Math.abs(v1E - v2E)) / (Math.sqrt(bHE) * (bM1 * Math.sqrt(v1E) + bM2 * Math.sqrt(v2E)));
+  const flashEPerMu = blokFlashTemperature(1, fullLoad as NewtonsPerMetre, v1E as MetresPerSecond, v2E as MetresPerSecond, bM1, bM2, bHE);
   const xEps = integralContactRatioFactor((g.points.E - g.points.C) / g.transverseBasePitch, Math.max(0, (g.points.C - g.points.A) / g.transverseBasePitch));
   return {
     input,
@@ -163,7 +164,7 @@ export function prepareSweepOil(sc: SweepCase, oil: EngineOil): SweepOil {
   const thetaIntSOf = new Float64Array(13);
   for (let s = 1; s <= 12; s++) {
     thetaSOf[s] = scuffingTemperature(s, sc.xW, xL).value;
-    thetaIntSOf[s] = 80 + 0.23 * (FZG_A_PINION_TORQUE[s - 1] as number) * xL; // °C, ISO/TS 6336-21 [memory]
+    thetaIntSOf[s] = kelvinToCelsius(integralScuffingTemperature(FZG_A_PINION_TORQUE[s - 1] as NewtonMetres, xL));
   }
   return { oil, thetaS: scuffingTemperature(oil.fzgFailureStage, sc.xW, xL).value, thetaSOf, thetaIntSOf, oilStage: oil.fzgFailureStage === '>12' ? 12 : oil.fzgFailureStage };
 }

@@ -4,8 +4,8 @@ import { decideVerdict } from '../engine/verdict/decide';
 import type { VerdictFacts } from '../engine/verdict/types';
 import { kelvinToCelsius, toMegapascals, toMicrometres, toMillimetres, type Kelvin, type Metres, type Pascals } from '../engine/units';
 import type { ReviewOil } from './oils';
-import type { CaseResult, PointResult } from './results';
-import type { LoadCase, Review } from './schema';
+import type { CaseResult, LimitCheck, PointResult } from './results';
+import type { LoadCase, Policy, Review } from './schema';
 
 const orNull = (x: number): number | null => (Number.isFinite(x) ? x : null);
 
@@ -136,9 +136,37 @@ export function caseToResult(review: Review, lc: LoadCase, oil: ReviewOil | null
     scuffingProbability: sc ? orNull(sc.probability) : null,
     lambdaGFMin: film ? film.lambdaGFMin : null,
     micropittingAdvisory: film ? micropittingAdvisory(film.lambdaGFMin) : null,
-    verdict: verdict ? { code: verdict.code, oilFit: verdict.oilFit, shortfalls: verdict.shortfalls, reasons: verdict.reasons, cautions: verdict.cautions } : null,
+    verdict: verdict
+      ? {
+          code: verdict.code,
+          oilFit: verdict.oilFit,
+          shortfalls: verdict.shortfalls,
+          chemistryNeed: verdict.chemistryNeed ?? 'beyond-oil',
+          neededFzgStage: verdict.neededStage > 12 ? '>12' : verdict.neededStage,
+          governingMethod: verdict.governingMethod,
+          checks: limitChecks(review.policy, sc?.safety ?? null, sc?.integralSafety ?? null, film?.lambdaMin ?? null),
+          reasons: verdict.reasons,
+          cautions: verdict.cautions,
+        }
+      : null,
     warnings: a.warnings,
   };
+}
+
+/** SB, SintS (for the methods the policy uses) and λmin against their policy limits. */
+export function limitChecks(p: Policy, sb: number | null, sInt: number | null, lambdaMin: number | null): LimitCheck[] {
+  const check = (quantity: LimitCheck['quantity'], symbol: string, value: number | null, limit: number): LimitCheck => ({
+    quantity,
+    symbol,
+    value,
+    limit,
+    pass: value === null ? null : value >= limit,
+  });
+  const out: LimitCheck[] = [];
+  if (p.scuffingMethods !== 'integral') out.push(check('scuffingSafety', 'SB', sb, p.scuffingSafetyMin));
+  if (p.scuffingMethods !== 'flash') out.push(check('integralSafety', 'SintS', sInt, p.integralSafetyMin));
+  out.push(check('lambdaMin', 'λmin', lambdaMin, p.lambdaTarget));
+  return out;
 }
 
 /**

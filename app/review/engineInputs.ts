@@ -17,7 +17,7 @@ export function enginePolicyOf(p: Policy): EnginePolicy {
     frictionCoefficient: p.frictionCoefficient ?? null,
     scuffingTemperatureSpread: p.scuffingTemperatureSpread,
     shockApplicationFactor: p.shockApplicationFactor,
-    integralFlashCalibration: p.integralFlashCalibration,
+    scuffingMethods: p.scuffingMethods,
   };
 }
 

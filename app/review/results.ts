@@ -63,12 +63,35 @@ export interface Caution {
 }
 
 export type Shortfall = 'film' | 'fzg-stage' | 'chemistry';
+export type ScuffingMethod = 'flash' | 'integral';
+export type ScuffingMethods = ScuffingMethod | 'both';
+/** The chemistry class a duty needs; `beyond-oil` when no oil in scope gives the margin. */
+export type ChemistryNeed = 'r-and-o' | 'anti-wear' | 'extreme-pressure' | 'beyond-oil';
+
+/** One figure against its policy limit: SB ≥ SB,min, SintS ≥ SintS,min, λmin ≥ λ target. */
+export interface LimitCheck {
+  quantity: 'scuffingSafety' | 'integralSafety' | 'lambdaMin';
+  /** The symbol as a person reads it: SB, SintS, λmin. */
+  symbol: string;
+  value: number | null;
+  limit: number;
+  /** null when the figure is not defined (no temperature rise). */
+  pass: boolean | null;
+}
 
 export interface CaseVerdict {
   code: VerdictCode;
   oilFit: OilFit | null;
   /** What the oil falls short on: its film λ (a grade matter), its FZG stage, or its chemistry. */
   shortfalls: Shortfall[];
+  /** The chemistry class this case needs with this oil. */
+  chemistryNeed: ChemistryNeed;
+  /** The FZG stage this case needs by the policy's methods. */
+  neededFzgStage: FzgStageNeeded;
+  /** The method that sets the stage needed. */
+  governingMethod: ScuffingMethod;
+  /** Each figure against its policy limit, for the methods in use. */
+  checks: LimitCheck[];
   reasons: VerdictReason[];
   cautions: Caution[];
 }
@@ -140,7 +163,16 @@ export interface OverallVerdict {
   oil: string;
   code: VerdictCode;
   oilFit: OilFit;
+  /** The case with the least scuffing margin among those with the most severe verdict. */
   governingLoadCase: string;
+  governingMethod: ScuffingMethod;
+  /** The FZG stage the duty needs with this oil (most demanding case) against the oil's own. */
+  neededFzgStage: FzgStageNeeded;
+  oilFzgStage: number | '>12';
+  chemistryNeed: ChemistryNeed;
+  oilChemistry: string;
+  /** The worst figure over the cases against its limit. */
+  checks: Array<LimitCheck & { loadCase: string }>;
   /** Time-share-weighted fraction of duty for which the oil meets the need. */
   dutyShareMet: number;
   /** Every shortfall over the load cases. */
@@ -180,9 +212,63 @@ export interface GearResult {
   checks: Array<{ code: string; severity: string; message: string }>;
 }
 
+/** What the duty needs, stated once, apart from what any oil offers. */
+export interface DutyNeed {
+  code: VerdictCode;
+  chemistry: ChemistryNeed;
+  /** The FZG A/8.3/90 stage by each method the policy uses (null where a method is not used). */
+  fzgStageFlash: FzgStageNeeded | null;
+  fzgStageIntegral: FzgStageNeeded | null;
+  /** The lowest ISO VG that meets the λ target in every case (null: none up to VG 3200, or no oils). */
+  isoVG: number | null;
+  governingLoadCase: string;
+  governingMethod: ScuffingMethod;
+  methods: ScuffingMethods;
+  /** One sentence, in words. */
+  statement: string;
+}
+
+export type ChangeFindingCode = 'supported' | 'supported-with-conditions' | 'not-supported';
+
+export interface ChangeSide {
+  scuffingSafety: number | null;
+  integralSafety: number | null;
+  lambdaMin: number | null;
+  scuffingProbability: number | null;
+  neededFzgStage: FzgStageNeeded | null;
+  oilFzgStage: number | '>12';
+  meets: boolean;
+}
+
+export interface ChangeFinding {
+  /** Oil names. */
+  from: string;
+  to: string;
+  finding: ChangeFindingCode;
+  /** One sentence a manager can read. */
+  statement: string;
+  conditions: string[];
+  byCase: Array<{ loadCase: string; before: ChangeSide; after: ChangeSide }>;
+}
+
+/** A caution, once, with the cases and oils it applies to. */
+export interface CautionSummary {
+  id: string;
+  text: string;
+  /** True when this review's inputs make it apply; standing cautions that do not apply are false. */
+  applies: boolean;
+  appliesTo: Array<{ loadCase: string; oil: string }>;
+}
+
 export interface Results {
   flankfilm: string;
   title: string;
+  /** What the duty needs (null without oils). */
+  need: DutyNeed | null;
+  /** Change findings, one per proposed oil, when the review has an in-service oil. */
+  changes: ChangeFinding[];
+  /** Every caution once: those that apply first. */
+  cautions: CautionSummary[];
   gear: GearResult;
   oils: OilSummary[];
   cases: CaseResult[];

@@ -10,6 +10,9 @@ import { caseToResult } from './caseResult';
 import { oilModelsOf, oilSummaries } from './oils';
 import { overallVerdicts } from './overall';
 import { gradeFinder } from './gradeFinder';
+import { dutyNeed } from './need';
+import { changeFindings } from './changes';
+import { cautionSummary } from './cautionSummary';
 import { engineDutyOf, enginePolicyOf } from './engineInputs';
 
 /**
@@ -34,14 +37,18 @@ export function run(review: Review): Results {
       cases.push(caseToResult(review, lc, oil, oils, a));
     }
   });
+  const grades = gradeFinder(review, geometry, pinion, wheel, policy, oils);
   return {
     flankfilm: ENGINE_VERSION,
     title: review.title,
+    need: dutyNeed(review, cases, grades),
+    changes: changeFindings(review, cases),
+    cautions: cautionSummary(cases),
     gear: gearResult(geometry),
     oils: oilSummaries(oils),
     cases,
     verdicts: overallVerdicts(review, cases),
-    gradeFinder: gradeFinder(review, geometry, pinion, wheel, policy, oils),
+    gradeFinder: grades,
     assumptions: assumptionsOf(review),
   };
 }

@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { MATERIAL_PRESETS } from '../engine/materials';
 import { BASE_OILS, CHEMISTRIES } from '../engine/oil/types';
+import { SCUFFING_METHODS } from '../engine/mesh/types';
 
 /**
  * The review file, version 1 (`*.flankfilm.json`). Units are in the key names; the file is the
@@ -115,8 +116,8 @@ export const policySchema = z
     scuffingTemperatureSpread: finite().gt(0).lte(0.5).default(0.15),
     /** KA at and above which the duty counts as shock duty for the EP escalation rule (common practice). */
     shockApplicationFactor: finite().gte(1).lte(4).default(1.75),
-    /** Blok flash at E → integral-method θfla,E; 0.44 reproduces θintS on the FZG A test (see engine mesh/scuffing.ts). */
-    integralFlashCalibration: finite().gt(0).lte(2).default(0.44),
+    /** Scuffing methods the verdict uses: flash (ISO/TS 6336-20), integral (ISO/TS 6336-21) or both (the more demanding governs). */
+    scuffingMethods: z.enum(SCUFFING_METHODS).default('both'),
   })
   .superRefine((p, ctx) => {
     if (p.temperatureRange_C[0] >= p.temperatureRange_C[1]) ctx.addIssue({ code: 'custom', path: ['temperatureRange_C'], message: 'the lower end must be below the upper end' });

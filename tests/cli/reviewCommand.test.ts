@@ -73,7 +73,7 @@ describe('bad input: exit 1, the field named, the file untouched', () => {
     ['unknown base oil', (r) => (r.oils[0].baseOil = 'whale'), /oils\[0\]\.baseOil/],
     ['unknown chemistry', (r) => (r.oils[0].chemistry = 'magic'), /oils\[0\]\.chemistry/],
     ['impossible centre distance', (r) => (r.gearPair.centerDistance_mm = 150), /centerDistance_mm/],
-    ['inconsistent centre distance and shifts', (r) => (r.gearPair.centerDistance_mm = 231), /centerDistance_mm/],
+    ['centre distance below the no-backlash value of the shifts (the teeth jam)', (r) => (r.gearPair.centerDistance_mm = 221), /centerDistance_mm/],
     ['impossible tip diameter', (r) => (r.gearPair.pinion.tipDiameter_mm = 120), /gearPair\.pinion\.tipDiameter_mm/],
     ['tip inside the base circle', (r) => (r.gearPair.pinion.tipDiameter_mm = 80), /gearPair\.pinion\.tipDiameter_mm/],
     ['prototype-pollution key', (r) => (r.gearPair = JSON.parse(JSON.stringify(r.gearPair).replace('{', '{"__proto__":{"polluted":1},'))), /__proto__/],

@@ -53,4 +53,16 @@ describe('nominal contact stress σH0 (ISO 6336-2)', () => {
     const nearly = nominalContactStress(pair(1e-4), 12500 as Newtons, eStar, { kA: 1, kv: 1, kHbeta: 1, kHalpha: 1 });
     expect(Math.abs(nearly.sigmaH0 / spur.sigmaH0 - 1)).toBeLessThan(1e-6);
   });
+  // Helical hand calculation, β = 18°, same pair and T1 = 500 N·m (ISO 6336-2:2019 formulas, arithmetic):
+  // d1 = 20·4/cos 18° = 84.117 mm, Ft = 2·500e3/84.117 = 11 888.2 N, αt = atan(tan 20°/cos 18°) = 20.942°,
+  // βb = asin(sin 18° cos 20°) = 16.881°, pbt = π·4·cos αt/cos 18° = 12.340 mm, εα = (24.051 − 4.820)/12.340 = 1.5584,
+  // εβ = 50 sin 18°/(4π) = 1.2295 ≥ 1 → Zε = √(1/εα) = 0.8011, ZH = √(2 cos βb cos αt/(cos² αt sin αt)) = 2.3944,
+  // Zβ = 1/√cos 18° = 1.02541, σH0 = 2.3944 · 189.81 · 0.8011 · 1.02541 · √(11888.2 · 4/(84.117 · 50 · 3)) = 724.74 N/mm².
+  // With the 1996 edition's Zβ = √cos β the same pair gives 724.74 · cos 18° = 689.27 N/mm² (4.9 % low).
+  it('helical hand calculation, β = 18°: σH0 = 724.7 N/mm² within 0.3 % with Zβ = 1/√cos β (ISO 6336-2:2019)', () => {
+    const s = nominalContactStress(pair(18), 11888.206 as Newtons, eStar, { kA: 1, kv: 1, kHbeta: 1, kHalpha: 1 });
+    expect(s.zBeta).toBeCloseTo(1.025408, 6);
+    expect(Math.abs(s.sigmaH0 / 1e6 / 724.74 - 1)).toBeLessThan(0.003);
+    expect(Math.abs(s.sigmaH0 / 1e6 / 689.27 - 1)).toBeGreaterThan(0.04);
+  });
 });

@@ -27,11 +27,19 @@ describe('FZG A/8.3/90 load-stage pinion torques (ISO 14635-1 [memory])', () => 
   });
 });
 
-describe('ISO/TS 6336-21 integral scuffing temperature θintS = 80 + 0.23 T1T XL °C [memory]', () => {
-  it('stage 9 (302 N·m) → 149.46 °C; stage 12 → 202.94 °C; PAO XL 0.8 at stage 12 → 178.35 °C', () => {
-    expect(kelvinToCelsius(integralScuffingTemperature(Nm(302)))).toBeCloseTo(149.46, 9);
-    expect(kelvinToCelsius(integralScuffingTemperature(Nm(534.5)))).toBeCloseTo(202.935, 9);
-    expect(kelvinToCelsius(integralScuffingTemperature(Nm(534.5), 0.8))).toBeCloseTo(178.348, 9);
+describe('ISO/TS 6336-21 integral scuffing temperature θintS = θMT + XWrelT·C2·θfla,int,T [memory]', () => {
+  it('stage 12, mineral: θMT = 80 + 0.23·534.5 = 202.935 °C, θfla,int,T = 0.2·534.5 = 106.9 K, θintS = 202.935 + 1.5·106.9 = 363.285 °C', () => {
+    expect(kelvinToCelsius(integralScuffingTemperature(Nm(534.5)))).toBeCloseTo(363.285, 9);
+  });
+  it('stage 9 (302 N·m): 80 + 69.46 + 1.5·60.4 = 240.06 °C; PAO XL 0.8 at stage 12: 80 + 0.8·(0.23 + 0.3)·534.5 = 306.628 °C', () => {
+    expect(kelvinToCelsius(integralScuffingTemperature(Nm(302)))).toBeCloseTo(240.06, 9);
+    expect(kelvinToCelsius(integralScuffingTemperature(Nm(534.5), 0.8))).toBeCloseTo(306.628, 9);
+  });
+  it('XWrelT scales the flash part only: nitrided flanks (XW 1.5 against the carburised test gear) at stage 12 → 202.935 + 1.5·1.5·106.9 = 443.46 °C', () => {
+    expect(kelvinToCelsius(integralScuffingTemperature(Nm(534.5), 1, 1.5))).toBeCloseTo(443.46, 9);
+  });
+  it('θMT alone (the earlier, wrong reading) is not θintS', () => {
+    expect(kelvinToCelsius(integralScuffingTemperature(Nm(534.5)))).not.toBeCloseTo(202.935, 0);
   });
 });
 

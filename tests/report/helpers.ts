@@ -1,3 +1,4 @@
+import { SCUFFING_METHODS } from '../../app/engine/mesh/types';
 import { execFileSync, spawnSync } from 'node:child_process';
 import { mkdirSync, mkdtempSync, readFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
@@ -73,7 +74,7 @@ export function setAt<T>(obj: T, path: ReadonlyArray<string | number>, value: un
 }
 
 
-const ENUM_VALUES: readonly string[] = [...MATERIAL_PRESETS, ...BASE_OILS, ...CHEMISTRIES, ...COMPONENTS, ...DECISIONS, ...FILM_FORMULAS, 'in-service', 'proposed', 'candidate', 'dip', 'spray', 'si', 'us'];
+const ENUM_VALUES: readonly string[] = [...MATERIAL_PRESETS, ...BASE_OILS, ...CHEMISTRIES, ...COMPONENTS, ...DECISIONS, ...FILM_FORMULAS, ...SCUFFING_METHODS, 'in-service', 'proposed', 'candidate', 'dip', 'spray', 'si', 'us'];
 
 /** Candidate edits of one leaf value, most natural first. */
 export function candidateEdits(v: unknown): unknown[] {

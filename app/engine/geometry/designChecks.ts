@@ -35,12 +35,19 @@ export function designChecks(g: GearPairGeometry): EngineWarning[] {
       message: `The pinion tip reaches past T2 (T1E = ${mm(E)} ≥ T1T2 = ${mm(g.lineOfAction)}): it would cut into the wheel below its base circle.`,
     });
   }
-  if (g.transverseContactRatio < 1) {
+  if (g.totalContactRatio < 1) {
     out.push({
       code: 'geometry.contact-ratio-below-one',
       severity: 'error',
       field: 'gearPair',
-      message: `Transverse contact ratio εα = ${g.transverseContactRatio.toFixed(3)} < 1: contact is not continuous, the pair cannot run smoothly. Increase the tip diameters or the tooth counts.`,
+      message: `Total contact ratio εγ = εα + εβ = ${g.totalContactRatio.toFixed(3)} < 1: contact is not continuous, the pair cannot run smoothly. Increase the tip diameters, the tooth counts, the face width or the helix angle.`,
+    });
+  } else if (g.transverseContactRatio < 1) {
+    out.push({
+      code: 'geometry.transverse-contact-ratio-below-one',
+      severity: 'warning',
+      field: 'gearPair',
+      message: `Transverse contact ratio εα = ${g.transverseContactRatio.toFixed(3)} < 1 (short tips): contact stays continuous through the overlap (εγ = ${g.totalContactRatio.toFixed(3)}), but each transverse section is in single-pair contact; check the tip diameters.`,
     });
   }
   for (const side of ['pinion', 'wheel'] as const) {

@@ -27,7 +27,9 @@ const F = {
  * (measured from T1) and the contact ratios, followed by the design checks.
  *
  * Either the centre distance or the profile shifts may be given; the other is derived.
- * If both are given they must agree within 0.005·mn, else an EngineInputError names the field.
+ * If both are given, a centre distance above the no-backlash value of the shifts (by more than
+ * 0.005·mn) is backlash: the given a sets αwt and a warning states the difference; one below it
+ * would jam the teeth and raises an EngineInputError that names the field and the limit.
  * Impossible geometry (no contact, a tip inside its base circle) raises EngineInputError.
  */
 export function gearPairGeometry(g: GearPairInput): GearPairGeometry {
@@ -69,13 +71,21 @@ export function gearPairGeometry(g: GearPairInput): GearPairGeometry {
     if (givenX1 !== undefined && givenX2 !== undefined) {
       const impliedA = centreDistanceFromShifts(a0, at, an, z1, z2, givenX1 + givenX2);
       const tol = CENTRE_DISTANCE_TOLERANCE_PER_MODULE * mn;
-      if (Math.abs(impliedA - a) > tol) {
+      if (a < impliedA - tol) {
         throw new EngineInputError(
-          'geometry.centre-distance-inconsistent',
+          'geometry.centre-distance-too-small',
           F.a,
-          `±${(tol * 1e3).toFixed(3)} mm of ${(impliedA * 1e3).toFixed(3)} mm`,
-          `${F.a} = ${(a * 1e3).toFixed(3)} mm disagrees with the profile shifts x1 + x2 = ${(givenX1 + givenX2).toFixed(4)}, which give ${(impliedA * 1e3).toFixed(3)} mm. Give one or the other, or make them agree.`,
+          `≥ ${(impliedA * 1e3).toFixed(3)} mm`,
+          `${F.a} = ${(a * 1e3).toFixed(3)} mm is below ${(impliedA * 1e3).toFixed(3)} mm, the no-backlash centre distance of the profile shifts x1 + x2 = ${(givenX1 + givenX2).toFixed(4)}: the teeth would jam. Increase the centre distance or reduce the profile shifts.`,
         );
+      }
+      if (a > impliedA + tol) {
+        notes.push({
+          code: 'geometry.backlash',
+          severity: 'warning',
+          field: F.a,
+          message: `The centre distance ${(a * 1e3).toFixed(3)} mm is ${((a - impliedA) * 1e3).toFixed(3)} mm above ${(impliedA * 1e3).toFixed(3)} mm, the no-backlash value of the profile shifts x1 + x2 = ${(givenX1 + givenX2).toFixed(4)}: the difference is backlash. The working pressure angle is taken from the given centre distance.`,
+        });
       }
       x1 = givenX1;
       x2 = givenX2;

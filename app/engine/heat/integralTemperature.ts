@@ -33,10 +33,11 @@ export interface IntegralTemperature {
  *   θint     = θM + 1.5 · θfla,int
  *
  * θfla,E is an input: the flash temperature at the pinion tip E with the full transverse
- * unit load (no load sharing; X_ε carries it) and the mean friction μm. The standard has a
- * closed form for it (thermo-elastic, geometry, angle, approach and tip-relief factors) that is
- * not reproduced here because its constants are not recalled reliably; the Blok flash
- * temperature at E (blokFlash.ts, with w = K_Bγ w_Bt) is the same physics.
+ * unit load (no load sharing; X_ε carries it) and the mean friction μm. The standard writes it
+ * as a closed form (thermo-elastic, geometry, angle, approach and tip-relief factors); here it is
+ * the Blok flash temperature at E (blokFlash.ts, with w = K_Bγ w_Bt), the same physics, with no
+ * scale factor: on the FZG A test gear at stage 12 and 90 °C it gives θfla,E · X_ε ≈ 106 K
+ * against the test's own θfla,int,T = 0.2 · 534.5 = 107 K (tests/reference/fzgScuffingCalibration.test.ts).
  *
  * @param thetaOil - oil temperature, K
  * @param flashTipE - θfla,E, K (difference, ≥ 0)
@@ -59,20 +60,38 @@ export function integralTemperature(thetaOil: Kelvin, flashTipE: KelvinDifferenc
   };
 }
 
+/** θfla,int,T = 0.2 · T1T · X_L: the test gear's own integral flash temperature (K, T1T in N·m), ISO/TS 6336-21 [memory]. */
+export const TEST_FLASH_PER_TORQUE = 0.2;
+/** θMT = 80 + 0.23 · T1T · X_L: the test gear's bulk temperature (°C, T1T in N·m), ISO/TS 6336-21 [memory]. */
+export const TEST_BULK_PER_TORQUE = 0.23;
+
 /**
- * Integral scuffing temperature from the FZG A/8.3/90 test:
+ * Integral scuffing temperature from the FZG A/8.3/90 test. It is the integral temperature the
+ * test gear itself reaches at the failure stage, bulk part and weighted flash part:
  *
- *   θintS = 80 + 0.23 · T1T · X_L   (°C, T1T in N·m)
+ *   θintS = θMT + X_WrelT · C2 · θfla,int,T
+ *   θMT        = 80 + 0.23 · T1T · X_L          (°C)
+ *   θfla,int,T = 0.2 · T1T · X_L                (K)
+ *   C2 = 1.5
+ *
+ * For stage 12 (T1T = 534.5 N·m), mineral oil, X_WrelT = 1: 202.9 + 1.5 · 106.9 = 363.3 °C.
+ * (θMT alone, 80 + 0.23 T1T, is the test's bulk temperature, not its integral scuffing
+ * temperature: it leaves out the flash part and makes the method ≈ 2× too strict.)
  *
  * @param t1T - pinion torque of the failure load stage, N·m (> 0); see {@link FZG_A_PINION_TORQUE}
  * @param xL - lubricant factor X_L (> 0), default 1 (mineral oil)
+ * @param xWrelT - relative structural factor X_WrelT = X_W / X_WT of the rated flanks against the
+ *   case-carburised test gear (X_WT = 1), default 1
  * @returns θintS, K
  * Source: ISO/TS 6336-21:2017, integral scuffing temperature [memory].
  */
-export function integralScuffingTemperature(t1T: NewtonMetres, xL = 1): Kelvin {
+export function integralScuffingTemperature(t1T: NewtonMetres, xL = 1, xWrelT = 1): Kelvin {
   requirePositive('t1T', t1T, 'N·m');
   requirePositive('xL', xL);
-  return celsiusToKelvin(80 + 0.23 * t1T * xL);
+  requirePositive('xWrelT', xWrelT);
+  const bulkT = 80 + TEST_BULK_PER_TORQUE * t1T * xL;
+  const flashT = TEST_FLASH_PER_TORQUE * t1T * xL;
+  return celsiusToKelvin(bulkT + xWrelT * INTEGRAL_WEIGHT_FLASH * flashT);
 }
 
 /**

@@ -61,12 +61,12 @@ export function scuffingAssessment(input: CaseInput, m: MeshMechanics, heat: Tem
   const fullLoad = (m.unitLoad * heat.helicalLoadFactor) as NewtonsPerMetre;
   const bHE = hertzSemiWidth(fullLoad, m.reducedRadius[last] as Metres, m.contactModulus);
   const blokE = blokFlashTemperature(heat.friction, fullLoad, m.v1[last] as MetresPerSecond, m.v2[last] as MetresPerSecond, materialContactCoefficient(input.pinion), materialContactCoefficient(input.wheel), bHE);
-  const flashE = (policy.integralFlashCalibration * blokE) as KelvinDifference;
+  const flashE = blokE;
   const eps1 = (g.points.E - g.points.C) / g.transverseBasePitch;
   const eps2 = Math.max(0, (g.points.C - g.points.A) / g.transverseBasePitch);
   const xEps = integralContactRatioFactor(eps1, eps2);
   const integral = integralTemperature(tOil, flashE, xEps, input.duty.pinionMeshes);
-  const intS = (stage: number) => integralScuffingTemperature(FZG_A_PINION_TORQUE[stage - 1] as NewtonMetres, xL);
+  const intS = (stage: number) => integralScuffingTemperature(FZG_A_PINION_TORQUE[stage - 1] as NewtonMetres, xL, xW);
   const thetaIntS = intS(stageOf(oil.fzgFailureStage));
   const sInt = integralScuffingSafety(thetaIntS, integral.integral, sink);
   const sIntAt = (stage: number) => integralScuffingSafety(intS(stage), integral.integral).value;
@@ -91,16 +91,6 @@ export function scuffingAssessment(input: CaseInput, m: MeshMechanics, heat: Tem
     contactRatioFactor: xEps,
   };
 }
-
-/**
- * ISO/TS 6336-21 has its own closed form for θfla,E, which we do not reproduce (its constants are
- * not recalled reliably). The Blok flash temperature at E with the whole load stands in for it,
- * scaled by this factor. Default 0.44: the value with which the integral method reproduces its own
- * integral scuffing temperature θintS = 80 + 0.23 T1T on the FZG A/8.3/90 test gear at 90 °C over
- * load stages 5–12 within ±10 % — the calibration ISO/TS 6336-21 defines θintS by
- * (tests/reference/fzgScuffingCalibration.test.ts). It is a policy input.
- */
-export const INTEGRAL_FLASH_CALIBRATION = 0.44;
 
 /** The smallest stage 1…12 that passes (safety rises with the stage), else '>12'. */
 function smallestStage(passes: (stage: number) => boolean): FzgStageNeed {

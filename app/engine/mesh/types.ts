@@ -8,6 +8,9 @@ import type { Kelvin, Metres, NewtonMetres, RadiansPerSecond } from '../units';
 
 export type FilmFormula = 'dowson-higginson' | 'pan-hamrock';
 export type Lubrication = 'dip' | 'spray';
+/** Scuffing methods: flash temperature (ISO/TS 6336-20), integral temperature (ISO/TS 6336-21), or both. */
+export const SCUFFING_METHODS = ['flash', 'integral', 'both'] as const;
+export type ScuffingMethods = (typeof SCUFFING_METHODS)[number];
 
 /** The review's policy, as the engine uses it. */
 export interface EnginePolicy {
@@ -24,8 +27,8 @@ export interface EnginePolicy {
   readonly frictionCoefficient: number | null;
   readonly scuffingTemperatureSpread: number;
   readonly shockApplicationFactor: number;
-  /** Scale from the Blok flash temperature at E to the integral method's θfla,E (see mesh/scuffing.ts). */
-  readonly integralFlashCalibration: number;
+  /** Which scuffing methods the verdict uses; with both, the more demanding governs. */
+  readonly scuffingMethods: ScuffingMethods;
 }
 
 /** One load case, in SI. */

@@ -154,7 +154,7 @@ export function prepareSweep(input: Omit<CaseInput, 'oil'>): SweepCase {
     xW: Math.min(input.pinion.structuralFactorXW, input.wheel.structuralFactorXW),
     vSumC: m.sumVelocity[m.pitchIndex] as MetresPerSecond,
     rhoC: m.reducedRadius[m.pitchIndex] as Metres,
-    intFlashPerMu: policy.integralFlashCalibration * flashEPerMu * xEps,
+    intFlashPerMu: flashEPerMu * xEps,
   };
 }
 
@@ -164,7 +164,7 @@ export function prepareSweepOil(sc: SweepCase, oil: EngineOil): SweepOil {
   const thetaIntSOf = new Float64Array(13);
   for (let s = 1; s <= 12; s++) {
     thetaSOf[s] = scuffingTemperature(s, sc.xW, xL).value;
-    thetaIntSOf[s] = kelvinToCelsius(integralScuffingTemperature(FZG_A_PINION_TORQUE[s - 1] as NewtonMetres, xL));
+    thetaIntSOf[s] = kelvinToCelsius(integralScuffingTemperature(FZG_A_PINION_TORQUE[s - 1] as NewtonMetres, xL, sc.xW));
   }
   return { oil, thetaS: scuffingTemperature(oil.fzgFailureStage, sc.xW, xL).value, thetaSOf, thetaIntSOf, oilStage: oil.fzgFailureStage === '>12' ? 12 : oil.fzgFailureStage };
 }

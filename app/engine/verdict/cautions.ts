@@ -1,5 +1,10 @@
 import type { Caution, VerdictCode, VerdictFacts } from './types';
 
+/** The life-halving rule of thumb holds above about this sump temperature (common practice). */
+const OXIDATION_RULE_FROM_C = 60;
+/** A sump at or above this is hot enough for the oxidation caution to apply (common practice). */
+const HOT_SUMP_C = 80;
+
 const has = (f: VerdictFacts, ...ids: string[]) => ids.some((id) => f.components.includes(id));
 
 /**
@@ -19,11 +24,17 @@ export function cautionsFor(f: VerdictFacts, code: VerdictCode): Caution[] {
       has(f, 'backstop', 'clutch'),
       'Backstops, sprag or ratchet holdbacks and wet clutches depend on friction: EP and friction-modified oils can make them slip. Confirm with the maker of the backstop or clutch that the oil is approved for it.',
     ],
-    [
-      'oxidation',
-      f.oilTemperature_C >= 80,
-      `Oxidation: as a rule of thumb an oil's life roughly halves for every 10 °C rise in sump temperature (common practice); at ${f.oilTemperature_C.toFixed(0)} °C shorten the oil-analysis interval or improve cooling.`,
-    ],
+    f.oilTemperature_C >= HOT_SUMP_C
+      ? [
+          'oxidation',
+          true,
+          `Oxidation: above a sump temperature of about ${OXIDATION_RULE_FROM_C} °C an oil's life roughly halves for every 10 °C rise (common practice); at ${f.oilTemperature_C.toFixed(0)} °C shorten the oil-analysis interval or improve cooling.`,
+        ]
+      : [
+          'oxidation',
+          false,
+          `Oxidation: above a sump temperature of about ${OXIDATION_RULE_FROM_C} °C an oil's life roughly halves for every 10 °C rise (common practice); a hot sump calls for shorter oil-analysis intervals.`,
+        ],
     [
       'pag-mixing',
       f.baseOil.startsWith('pag') || f.otherOils.some((o) => o.baseOil.startsWith('pag')),

@@ -1,6 +1,7 @@
 import { cautionsFor } from './cautions';
 import { RULES, type RuleOutcome } from './rules';
-import { verdictCodeOf } from './code';
+import { governingMethod, neededStage, verdictCodeOf } from './code';
+import { CHEMISTRY_WORDS } from './words';
 import type { Reason, Shortfall, Verdict, VerdictCode, VerdictFacts, VerdictPolicy } from './types';
 
 /**
@@ -23,13 +24,13 @@ export function decideVerdict(f: VerdictFacts, p: VerdictPolicy): Verdict {
     code === 'beyond-oil'
       ? 'No oil in scope gives the margin: change the design or the duty — lower load or speed, a cooler sump, smoother flanks (lower Ra), tip relief, or a flank treatment or material with a higher structural factor.'
       : chemistryOk
-        ? `The oil's chemistry (${f.chemistry}) fits the need (${code === 'ep-warranted' ? 'EP' : needsAw ? 'anti-wear at least' : 'anti-wear or R&O'}).`
-        : `The oil's chemistry (${f.chemistry}) falls short: ${code === 'ep-warranted' ? 'EP chemistry is warranted' : 'at least anti-wear chemistry is needed in the boundary regime'}.`;
+        ? `The oil's chemistry, ${CHEMISTRY_WORDS[f.chemistry]}, fits the need (${code === 'ep-warranted' ? 'EP' : needsAw ? 'anti-wear at least' : 'anti-wear or R&O'}).`
+        : `The oil's chemistry, ${CHEMISTRY_WORDS[f.chemistry]}, falls short: ${code === 'ep-warranted' ? 'EP chemistry is warranted' : 'at least anti-wear chemistry is needed in the boundary regime'}.`;
   reasons.push({
     rule: code === 'beyond-oil' ? 'verdict.beyond-oil' : 'oil.chemistry',
     text: chemistryText,
     threshold: code === 'beyond-oil' ? `EP floor FZG ${p.epOilFzgStage} (policy)` : 'chemistry against need',
-    source: 'common practice; DIN 51517-3 (CLP) and DIN 51524-2 (HLP) define the EP and AW oil classes',
+    source: 'common practice; gear-oil classes R&O (DIN 51517-2 CL) and EP (DIN 51517-3 CLP); anti-wear floor from the hydraulic-oil class DIN 51524-2 (HLP)',
   });
   const shortfalls: Shortfall[] = outcomes.flatMap((o) => (o.oilFallsShort ? [o.oilFallsShort] : []));
   if (!chemistryOk && code !== 'beyond-oil') shortfalls.push('chemistry');
@@ -39,6 +40,9 @@ export function decideVerdict(f: VerdictFacts, p: VerdictPolicy): Verdict {
     code,
     oilFit,
     shortfalls,
+    governingMethod: governingMethod(f, p),
+    chemistryNeed: code === 'beyond-oil' ? null : code === 'ep-warranted' ? 'extreme-pressure' : needsAw ? 'anti-wear' : 'r-and-o',
+    neededStage: neededStage(f, p),
     reasons,
     cautions: cautionsFor(f, code),
     gradeAdvice: lambdaShort ? `λmin ${f.lambdaMin.toFixed(2)} < ${p.lambdaTarget}: see the grade finder for the lowest ISO VG that meets it.` : null,

@@ -1,6 +1,7 @@
 import type { Reason, Shortfall, VerdictFacts, VerdictPolicy } from './types';
 import type { FzgStageNeed } from '../mesh/scuffing';
-import { isShockInBoundary } from './code';
+import { governingMethod, isShockInBoundary, neededStage, usesFlash, usesIntegral } from './code';
+import { METHOD_WORDS, stageWords } from './words';
 
 /**
  * The verdict's rules, one small function each, which give the reasons in order. A rule returns
@@ -17,12 +18,14 @@ export type Rule = (f: VerdictFacts, p: VerdictPolicy) => RuleOutcome | null;
 
 const n2 = (x: number) => x.toFixed(2);
 const n0 = (x: number) => x.toFixed(0);
-const stageText = (s: FzgStageNeed) => (s === '>12' ? 'above 12' : String(s));
+const stageText = (s: FzgStageNeed) => stageWords(s);
 const stageNum = (s: FzgStageNeed | number) => (s === '>12' ? 13 : s);
-const FLOOR_SOURCE = 'policy floors: anti-wear oil DIN 51524-2 (HLP) FZG ≥ 10; EP oil DIN 51517-3 (CLP) FZG ≥ 12';
+const floorsText = (p: VerdictPolicy) =>
+  `policy floors: anti-wear oil FZG ≥ ${p.antiWearOilFzgStage} (the hydraulic-oil class DIN 51524-2 HLP asks for 10), EP gear oil FZG ≥ ${p.epOilFzgStage} (DIN 51517-3 CLP asks for 12)`;
 
 /** The FZG stage the flash-temperature method needs, against the AW and EP floors. */
 export const requiredStageRule: Rule = (f, p) => {
+  if (!usesFlash(p)) return null;
   const need = stageNum(f.requiredStage);
   const beyond = need > p.epOilFzgStage;
   const ep = !beyond && need > p.antiWearOilFzgStage;
@@ -35,14 +38,15 @@ export const requiredStageRule: Rule = (f, p) => {
     reason: {
       rule: 'scuffing.required-stage',
       text: `θB,max = ${n0(f.maxContactTemperature_C)} °C at ${n0(f.oilTemperature_C)} °C oil: SB ≥ ${p.scuffingSafetyMin} needs an oil of FZG A/8.3/90 failure stage ${stageText(f.requiredStage)}, ${where}.`,
-      threshold: `SB,min = ${p.scuffingSafetyMin} (policy); ${FLOOR_SOURCE}`,
-      source: 'ISO/TS 6336-20 flash temperature method; θS = 80 + (0.85 + 1.4 XW) XL S² °C [memory]',
+      threshold: `SB,min = ${p.scuffingSafetyMin} (policy); ${floorsText(p)}`,
+      source: 'ISO/TS 6336-20 flash temperature method; θS = 80 + (0.85 + 1.4 XW) XL S² °C',
     },
   };
 };
 
 /** The integral temperature method, as a second opinion that can escalate or rule out oil. */
 export const integralRule: Rule = (f, p) => {
+  if (!usesIntegral(p)) return null;
   const atFloor = f.integralSafetyAtEpFloor;
   if (atFloor !== null && atFloor < p.integralSafetyMin) {
     return {
@@ -50,7 +54,7 @@ export const integralRule: Rule = (f, p) => {
         rule: 'scuffing.integral-beyond-ep-floor',
         text: `By the integral temperature method even an oil at the EP floor (stage ${p.epOilFzgStage}) gives SintS = ${n2(atFloor)} < ${p.integralSafetyMin}.`,
         threshold: `SintS,min = ${p.integralSafetyMin} (policy)`,
-        source: 'ISO/TS 6336-21 integral temperature method [memory]',
+        source: 'ISO/TS 6336-21 integral temperature method',
       },
     };
   }
@@ -60,8 +64,8 @@ export const integralRule: Rule = (f, p) => {
       reason: {
         rule: 'scuffing.integral-required-stage',
         text: `By the integral temperature method SintS ≥ ${p.integralSafetyMin} needs FZG stage ${stageText(f.requiredStageIntegral)}, above the anti-wear floor (${p.antiWearOilFzgStage}).`,
-        threshold: `SintS,min = ${p.integralSafetyMin} (policy); ${FLOOR_SOURCE}`,
-        source: 'ISO/TS 6336-21 integral temperature method [memory]',
+        threshold: `SintS,min = ${p.integralSafetyMin} (policy); ${floorsText(p)}`,
+        source: 'ISO/TS 6336-21 integral temperature method',
       },
     };
   }
@@ -70,7 +74,7 @@ export const integralRule: Rule = (f, p) => {
       rule: 'scuffing.integral-ok',
       text: `By the integral temperature method SintS ≥ ${p.integralSafetyMin} needs FZG stage ${stageText(f.requiredStageIntegral)}, within the anti-wear floor.`,
       threshold: `SintS,min = ${p.integralSafetyMin} (policy)`,
-      source: 'ISO/TS 6336-21 integral temperature method [memory]',
+      source: 'ISO/TS 6336-21 integral temperature method',
     },
   };
 };
@@ -95,7 +99,7 @@ export const regimeRule: Rule = (f) => {
     reason: {
       rule: 'film.regime',
       text: boundary
-        ? `Boundary lubrication (λmin = ${n2(f.lambdaMin)}): film ${f.filmMin_um.toFixed(3)} µm against composite roughness ${f.compositeRoughness_um.toFixed(3)} µm. An anti-wear tribofilm (≈0.05–0.15 µm) must carry the asperity contacts: at least anti-wear chemistry is needed; this alone does not call for EP.`
+        ? `Boundary lubrication (λmin = ${n2(f.lambdaMin)}): film ${f.filmMin_um.toFixed(3)} µm against composite roughness ${f.compositeRoughness_um.toFixed(3)} µm. An anti-wear tribofilm (about 0.05–0.15 µm, common practice) must carry the asperity contacts: at least anti-wear chemistry is needed; this alone does not call for EP.`
         : `${f.regime === 'mixed' ? 'Mixed' : 'Full-film'} lubrication (λmin = ${n2(f.lambdaMin)}): film ${f.filmMin_um.toFixed(3)} µm against composite roughness ${f.compositeRoughness_um.toFixed(3)} µm.`,
       threshold: 'λ < 1 boundary, 1 ≤ λ < 3 mixed, λ ≥ 3 full film (policy; common practice)',
       source: 'Dowson–Higginson / Pan–Hamrock EHL film; λ with Rq = 1.25 Ra (common practice)',
@@ -120,16 +124,22 @@ export const lambdaTargetRule: Rule = (f, p) => {
   };
 };
 
-/** The oil's own FZG stage against what the duty needs. */
-export const oilStageRule: Rule = (f) => {
-  const need = Math.max(stageNum(f.requiredStage), stageNum(f.requiredStageIntegral));
+/** The oil's own FZG stage against what the duty needs, and which method sets the need. */
+export const oilStageRule: Rule = (f, p) => {
+  const need = neededStage(f, p);
   const has = stageNum(f.oilFzgStage);
   const ok = has >= need;
+  const method = METHOD_WORDS[governingMethod(f, p)];
+  const figures = [
+    usesFlash(p) ? `SB = ${f.scuffingSafety === null ? '—' : n2(f.scuffingSafety)}` : null,
+    usesIntegral(p) ? `SintS = ${f.integralSafety === null ? '—' : n2(f.integralSafety)}` : null,
+    `scuffing probability ${(100 * f.scuffingProbability).toFixed(1)} %`,
+  ].filter((x): x is string => x !== null);
   return {
     reason: {
       rule: 'oil.fzg-stage',
-      text: `This oil's FZG A/8.3/90 failure stage is ${f.oilFzgStage === '>12' ? 'above 12' : f.oilFzgStage}${ok ? ', enough' : ', short of'} the stage ${need > 12 ? 'above 12' : need} the duty needs (SB = ${f.scuffingSafety === null ? '—' : n2(f.scuffingSafety)}, SintS = ${f.integralSafety === null ? '—' : n2(f.integralSafety)}, scuffing probability ${(100 * f.scuffingProbability).toFixed(1)} %).`,
-      threshold: 'oil stage ≥ required stage',
+      text: `The duty needs FZG A/8.3/90 failure stage ${stageWords(need)}, set by the ${method}. This oil's stage is ${stageWords(f.oilFzgStage)}: ${ok ? 'it meets that' : 'short of that'} (${figures.join(', ')}).`,
+      threshold: 'oil stage ≥ stage needed',
       source: 'ISO 14635-1 (FZG A/8.3/90); ISO/TS 6336-20 and -21',
     },
     ...(ok ? {} : { oilFallsShort: 'fzg-stage' as const }),

@@ -1,6 +1,7 @@
 import type { Regime } from '../film/regime';
 import type { Chemistry, BaseOil } from '../oil/types';
 import type { FzgStageNeed } from '../mesh/scuffing';
+import type { ScuffingMethods } from '../mesh/types';
 
 export type VerdictCode = 'aw-suffices' | 'ep-warranted' | 'beyond-oil';
 export type OilFit = 'meets' | 'falls-short';
@@ -45,7 +46,12 @@ export interface VerdictPolicy {
   readonly antiWearOilFzgStage: number;
   readonly epOilFzgStage: number;
   readonly shockApplicationFactor: number;
+  /** Which scuffing methods decide: flash, integral or both (the more demanding governs). */
+  readonly scuffingMethods: ScuffingMethods;
 }
+
+/** One scuffing method: flash temperature (ISO/TS 6336-20) or integral temperature (ISO/TS 6336-21). */
+export type ScuffingMethod = 'flash' | 'integral';
 
 export interface Reason {
   readonly rule: string;
@@ -67,6 +73,12 @@ export interface Verdict {
   readonly code: VerdictCode;
   readonly oilFit: OilFit;
   readonly shortfalls: Shortfall[];
+  /** The method that governs the stage needed (the more demanding of those the policy uses). */
+  readonly governingMethod: ScuffingMethod;
+  /** The chemistry class the duty needs with this oil; null when no oil gives the margin. */
+  readonly chemistryNeed: 'r-and-o' | 'anti-wear' | 'extreme-pressure' | null;
+  /** The FZG stage the duty needs by the policy's methods (13 = above the A/8.3/90 scale). */
+  readonly neededStage: number;
   readonly reasons: Reason[];
   readonly cautions: Caution[];
   /** The grade advice when λ falls short (a viscosity matter, not a chemistry one). */

@@ -1,0 +1,52 @@
+import { METHOD_WORDS } from '../engine/verdict/words';
+import { governingCase } from './margin';
+import { mostDemandingChemistry, stageNumber, stageOf, stageWords } from './overall';
+import type { CaseResult, ChemistryNeed, DutyNeed, GradeFinderResult } from './results';
+import type { Review } from './schema';
+
+export const CHEMISTRY_NEED_WORDS: Readonly<Record<ChemistryNeed, string>> = {
+  'r-and-o': 'R&O chemistry is enough',
+  'anti-wear': 'anti-wear chemistry at least',
+  'extreme-pressure': 'EP chemistry',
+  'beyond-oil': 'a design or duty change: no oil in scope gives the margin',
+};
+
+/**
+ * What the duty needs, stated once and apart from what any oil offers: the chemistry class, the
+ * FZG A/8.3/90 stage by each method in use, the lowest ISO VG for the λ target, and the governing
+ * case and method. Friction and film depend a little on the oil, so each figure is the most
+ * demanding over the oils reviewed (each oil's own need stands in its verdict).
+ */
+export function dutyNeed(review: Review, cases: readonly CaseResult[], grades: readonly GradeFinderResult[]): DutyNeed | null {
+  const withVerdict = cases
+    .map((c, i) => ({ c, share: review.loadCases[Math.floor(i / Math.max(1, review.oils.length))]?.timeShare ?? 0 }))
+    .filter((x) => x.c.verdict !== null);
+  const gov = governingCase(withVerdict, review.policy);
+  if (gov === null) return null;
+  const methods = review.policy.scuffingMethods;
+  const maxStage = (pick: (c: CaseResult) => number) => stageOf(Math.max(...withVerdict.map((x) => pick(x.c))));
+  const flash = methods === 'integral' ? null : maxStage((c) => stageNumber(c.requiredFzgStage));
+  const integral = methods === 'flash' ? null : maxStage((c) => stageNumber(c.requiredFzgStageIntegral));
+  const chemistry = mostDemandingChemistry(withVerdict.map((x) => x.c.verdict?.chemistryNeed ?? 'r-and-o'));
+  const vgs = grades.map((g) => g.recommendedVG);
+  const isoVG = vgs.length > 0 && vgs.every((v): v is number => v !== null) ? Math.max(...vgs) : null;
+  const gv = gov.c.verdict as NonNullable<CaseResult['verdict']>;
+  const stagePart = [flash !== null ? `FZG stage ${stageWords(flash)} by the flash temperature method` : null, integral !== null ? `${stageWords(integral)} by the integral temperature method` : null]
+    .filter((x): x is string => x !== null)
+    .join(' and ');
+  const vgPart = isoVG !== null ? `ISO VG ${isoVG} at least for λmin ≥ ${review.policy.lambdaTarget}` : `no ISO VG up to 3200 reaches λmin ≥ ${review.policy.lambdaTarget}`;
+  return {
+    code: gv.code,
+    chemistry,
+    fzgStageFlash: flash,
+    fzgStageIntegral: integral,
+    isoVG,
+    governingLoadCase: gov.c.loadCase,
+    governingMethod: gv.governingMethod,
+    methods,
+    statement:
+      chemistry === 'beyond-oil'
+        ? `No oil in scope gives the duty its scuffing margin (${stagePart} needed; the EP floor is ${review.policy.epOilFzgStage}): change the design or the duty. Governed by "${gov.c.loadCase}" and the ${METHOD_WORDS[gv.governingMethod]}.`
+        : `The duty needs ${CHEMISTRY_NEED_WORDS[chemistry]}, ${stagePart}, and ${vgPart}; governed by "${gov.c.loadCase}" and the ${METHOD_WORDS[gv.governingMethod]}.`,
+  };
+}

@@ -1,6 +1,7 @@
 import type { CaseAnalysis } from '../engine/mesh/analyseCase';
 import { REGIMES } from '../engine/mesh/film';
 import { decideVerdict } from '../engine/verdict/decide';
+import { NOMINAL_STRESS_EDITION } from '../engine/stress/iso6336Nominal';
 import type { VerdictFacts } from '../engine/verdict/types';
 import { kelvinToCelsius, toMegapascals, toMicrometres, toMillimetres, type Kelvin, type Metres, type Pascals } from '../engine/units';
 import type { ReviewOil } from './oils';
@@ -97,6 +98,7 @@ export function caseToResult(review: Review, lc: LoadCase, oil: ReviewOil | null
     pitchLineVelocity_mps: m.pitchLineVelocity,
     referenceLineVelocity_mps: (m.pinionAngularSpeed * a.input.geometry.referenceDiameter1) / 2,
     nominalContactStress_MPa: toMegapascals(m.nominal.sigmaH),
+    nominalContactStressEdition: NOMINAL_STRESS_EDITION,
     nominalContactStressBasic_MPa: toMegapascals(m.nominal.sigmaH0),
     maxHertzStress_MPa: toMegapascals(m.hertzPressure[maxI] as Pascals),
     maxHertzStressPosition_mm: toMillimetres(m.position[maxI] as Metres),

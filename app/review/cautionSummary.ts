@@ -1,3 +1,4 @@
+import { CAUTION_TITLES } from '../engine/verdict/cautions';
 import type { CaseResult, CautionSummary } from './results';
 
 /**
@@ -10,7 +11,7 @@ export function cautionSummary(cases: readonly CaseResult[]): CautionSummary[] {
   for (const c of cases) {
     for (const k of c.verdict?.cautions ?? []) {
       const applies = k.kind === 'triggered';
-      const entry = byId.get(k.id) ?? { id: k.id, text: k.text, applies: false, appliesTo: [] };
+      const entry = byId.get(k.id) ?? { id: k.id, title: CAUTION_TITLES[k.id] ?? k.id, text: k.text, applies: false, appliesTo: [] };
       if (applies) {
         if (!entry.applies) entry.text = k.text;
         entry.applies = true;

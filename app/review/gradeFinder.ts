@@ -19,7 +19,7 @@ import type { Review } from './schema';
 export const FINDER_PATH_POINTS = 41;
 
 /** The grades worth offering for enclosed industrial gears (ISO 3448). */
-const CANDIDATE_GRADES = ISO_VG_GRADES.filter((g) => g >= 32 && g <= 1500);
+export const CANDIDATE_GRADES = ISO_VG_GRADES.filter((g) => g >= 32 && g <= 1500);
 
 /**
  * For each oil's base oil and VI: λmin per ISO VG over every load case, each at the hotter of its

@@ -3,6 +3,9 @@ import { governingCase } from './margin';
 import { mostDemandingChemistry, stageNumber, stageOf, stageWords } from './overall';
 import type { CaseResult, ChemistryNeed, DutyNeed, GradeFinderResult } from './results';
 import type { Review } from './schema';
+import { CANDIDATE_GRADES } from './gradeFinder';
+
+const capitalise = (s: string) => s.charAt(0).toUpperCase() + s.slice(1);
 
 export const CHEMISTRY_NEED_WORDS: Readonly<Record<ChemistryNeed, string>> = {
   'r-and-o': 'R&O chemistry is enough',
@@ -34,10 +37,24 @@ export function dutyNeed(review: Review, cases: readonly CaseResult[], grades: r
   const stagePart = [flash !== null ? `FZG stage ${stageWords(flash)} by the flash temperature method` : null, integral !== null ? `${stageWords(integral)} by the integral temperature method` : null]
     .filter((x): x is string => x !== null)
     .join(' and ');
-  const vgPart = isoVG !== null ? `ISO VG ${isoVG} at least for λmin ≥ ${review.policy.lambdaTarget}` : `no ISO VG up to 3200 reaches λmin ≥ ${review.policy.lambdaTarget}`;
+  const topVG = CANDIDATE_GRADES[CANDIDATE_GRADES.length - 1];
+  const vgPart = isoVG !== null ? `ISO VG ${isoVG} at least for λmin ≥ ${review.policy.lambdaTarget}` : `no ISO VG up to ${topVG} reaches λmin ≥ ${review.policy.lambdaTarget}`;
+  const needed = Math.max(stageNumber(flash), stageNumber(integral));
+  const p = review.policy;
+  const chemistryReason =
+    chemistry === 'beyond-oil'
+      ? `the FZG stage needed, ${stageWords(needed)}, is above the EP floor of ${p.epOilFzgStage}, or the integral method fails even there`
+      : chemistry === 'extreme-pressure'
+        ? needed > p.antiWearOilFzgStage
+          ? `FZG stage ${stageWords(needed)} is needed, above the anti-wear floor of ${p.antiWearOilFzgStage}`
+          : `shock duty, KA at or above ${p.shockApplicationFactor}, in the boundary regime, whatever the scuffing margin, as common practice asks`
+        : chemistry === 'anti-wear'
+          ? 'boundary lubrication: a tribofilm must carry the asperity contacts'
+          : 'neither the film nor the scuffing margin asks for more than an R&O oil';
   return {
     code: gv.code,
     chemistry,
+    chemistryReason,
     fzgStageFlash: flash,
     fzgStageIntegral: integral,
     isoVG,
@@ -46,7 +63,7 @@ export function dutyNeed(review: Review, cases: readonly CaseResult[], grades: r
     methods,
     statement:
       chemistry === 'beyond-oil'
-        ? `No oil in scope gives the duty its scuffing margin (${stagePart} needed; the EP floor is ${review.policy.epOilFzgStage}): change the design or the duty. Governed by "${gov.c.loadCase}" and the ${METHOD_WORDS[gv.governingMethod]}.`
-        : `The duty needs ${CHEMISTRY_NEED_WORDS[chemistry]}, ${stagePart}, and ${vgPart}; governed by "${gov.c.loadCase}" and the ${METHOD_WORDS[gv.governingMethod]}.`,
+        ? `No oil in scope gives the duty its scuffing margin: ${stagePart} needed against an EP floor of ${review.policy.epOilFzgStage}; change the design or the duty. Governed by "${gov.c.loadCase}" and the ${METHOD_WORDS[gv.governingMethod]}.`
+        : `${capitalise(CHEMISTRY_NEED_WORDS[chemistry])}, because ${chemistryReason}; ${stagePart}; ${vgPart}. Governed by "${gov.c.loadCase}" and the ${METHOD_WORDS[gv.governingMethod]}.`,
   };
 }

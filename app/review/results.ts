@@ -108,6 +108,8 @@ export interface CaseResult {
   /** On the reference circle d1 (as ISO 6336 quotes v for Kv). */
   referenceLineVelocity_mps: number;
   nominalContactStress_MPa: number;
+  /** The ISO 6336-2 edition of σH (its Zβ), to print beside the figure. */
+  nominalContactStressEdition: string;
   nominalContactStressBasic_MPa: number;
   maxHertzStress_MPa: number;
   maxHertzStressPosition_mm: number;
@@ -216,6 +218,8 @@ export interface GearResult {
 export interface DutyNeed {
   code: VerdictCode;
   chemistry: ChemistryNeed;
+  /** Why that class, in words. */
+  chemistryReason: string;
   /** The FZG A/8.3/90 stage by each method the policy uses (null where a method is not used). */
   fzgStageFlash: FzgStageNeeded | null;
   fzgStageIntegral: FzgStageNeeded | null;
@@ -254,6 +258,8 @@ export interface ChangeFinding {
 /** A caution, once, with the cases and oils it applies to. */
 export interface CautionSummary {
   id: string;
+  /** A short title, for the list of those that do not apply. */
+  title: string;
   text: string;
   /** True when this review's inputs make it apply; standing cautions that do not apply are false. */
   applies: boolean;

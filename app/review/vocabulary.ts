@@ -5,7 +5,8 @@
  */
 import type { Regime } from '../engine/film/regime';
 import type { Decision } from './schema';
-import type { OilFit, VerdictCode } from './results';
+import type { ChangeFindingCode, OilFit, ScuffingMethods, Shortfall, VerdictCode } from './results';
+export { BASE_OIL_WORDS, CHEMISTRY_WORDS, METHOD_WORDS } from '../engine/verdict/words';
 
 export const VERDICT_WORDS: Readonly<Record<VerdictCode, string>> = {
   'aw-suffices': 'Anti-wear chemistry suffices',
@@ -33,8 +34,32 @@ export const REGIME_WORDS: Readonly<Record<Regime, string>> = {
 };
 
 export const OIL_FIT_WORDS: Readonly<Record<OilFit, string>> = {
-  meets: 'this oil meets the need',
-  'falls-short': 'this oil falls short',
+  meets: 'meets the need',
+  'falls-short': 'short of the need',
+};
+
+export const CHANGE_WORDS: Readonly<Record<ChangeFindingCode, string>> = {
+  supported: 'Change supported',
+  'supported-with-conditions': 'Change supported with conditions',
+  'not-supported': 'Change not supported',
+};
+
+export const CHANGE_COLOURS: Readonly<Record<ChangeFindingCode, string>> = {
+  supported: '#009E73',
+  'supported-with-conditions': '#E69F00',
+  'not-supported': '#D55E00',
+};
+
+export const SHORTFALL_SHORT: Readonly<Record<Shortfall, string>> = {
+  chemistry: 'chemistry',
+  'fzg-stage': 'FZG stage',
+  film: 'film (a grade matter)',
+};
+
+export const METHODS_WORDS: Readonly<Record<ScuffingMethods, string>> = {
+  both: 'flash and integral temperature methods (the more demanding governs)',
+  flash: 'flash temperature method (ISO/TS 6336-20) alone',
+  integral: 'integral temperature method (ISO/TS 6336-21) alone',
 };
 
 /** Okabe–Ito (M. Okabe, K. Ito, "Color Universal Design", 2008). */

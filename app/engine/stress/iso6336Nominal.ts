@@ -24,7 +24,7 @@ export function contactRatioFactor(epsAlpha: number, epsBeta: number): number {
 }
 
 /** The edition whose Zβ the nominal stress uses, to print beside σH. */
-export const NOMINAL_STRESS_EDITION = 'ISO 6336-2:2019 (Zβ = 1/√cos β, as in :2006)';
+export const NOMINAL_STRESS_EDITION = 'ISO 6336-2:2019, Zβ = 1/√cos β';
 
 /**
  * Helix-angle factor Zβ = 1/√(cos β) (ISO 6336-2:2006 and :2019 [memory]). The 1996 edition (and

@@ -11,6 +11,17 @@ const has = (f: VerdictFacts, ...ids: string[]) => ids.some((id) => f.components
  * The cautions that go with every verdict. Each is always listed (standing); it is marked
  * `triggered` when this review's inputs make it apply. The last one always applies.
  */
+/** Short titles for the list of standing cautions that do not apply to a review. */
+export const CAUTION_TITLES: Readonly<Record<string, string>> = {
+  'yellow-metals': 'Yellow metals and active-sulphur EP additives',
+  'friction-sensitive': 'Backstops and wet clutches',
+  oxidation: 'Oxidation in a hot sump',
+  'pag-mixing': 'PAG oils: mixing, seals and paints',
+  flushing: 'Changing chemistry or base oil: drain and flush',
+  'food-contact': 'Food-contact duty',
+  defer: 'An engineering aid, not an approval',
+};
+
 export function cautionsFor(f: VerdictFacts, code: VerdictCode): Caution[] {
   const epInPlay = f.chemistry === 'extreme-pressure' || code !== 'aw-suffices';
   const list: Array<[string, boolean, string]> = [

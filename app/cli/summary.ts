@@ -6,7 +6,7 @@ import { STATUS_WORDS } from '../review/status';
 
 const f = (x: number | null | undefined, d = 2) => (x === null || x === undefined ? '—' : x.toFixed(d));
 const stage = (s: CaseResult['requiredFzgStage'] | number) => (s === null ? '—' : s === '>12' || s > 12 ? 'above 12' : String(s));
-const pct = (x: number | null) => (x === null ? '—' : `${(100 * x).toFixed(x < 0.001 ? 3 : 1)} %`);
+const pct = (x: number | null) => (x === null ? '—' : x < 1e-4 ? '< 0.01 %' : `${(100 * x).toFixed(x < 0.01 ? 2 : 1)} %`);
 
 const ORDER: readonly Shortfall[] = ['chemistry', 'fzg-stage', 'film'];
 const shortfallList = (xs: readonly Shortfall[]) => ORDER.filter((s) => xs.includes(s)).map((s) => SHORTFALL_SHORT[s]).join(', ');

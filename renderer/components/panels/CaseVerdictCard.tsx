@@ -2,34 +2,45 @@ import type { CaseResult } from '../../../app/review/results';
 import type { UnitSystem } from '../../units/units';
 import { Quantity } from '../Quantity';
 import { VerdictBadge } from '../VerdictBadge';
-import { CautionList } from './CautionList';
+import { CheckChip } from '../verdict/CheckChip';
 
 interface Props {
   readonly result: CaseResult;
   readonly units: UnitSystem;
   /** The governing case shows its reasons unfolded. */
   readonly governing: boolean;
-  /** Cautions already shown at the oil. */
-  readonly skipCautions: ReadonlySet<string>;
 }
 
-/** One load case × oil: the verdict, its chain of reasons with numbers and sources, and the cautions. */
-export function CaseVerdictCard({ result: c, units, governing, skipCautions }: Props) {
+/** One load case × oil: what the case needs, the oil's figures against their limits, and the chain of reasons with sources. */
+export function CaseVerdictCard({ result: c, units, governing }: Props) {
   const v = c.verdict;
   return (
-    <section className={`case-verdict band--${v?.code ?? 'none'}`} aria-label={`${c.loadCase}, ${c.oil ?? 'no oil'}`} data-testid="case-verdict">
+    <section className="case-verdict" aria-label={`${c.loadCase}, ${c.oil ?? 'no oil'}`} data-testid="case-verdict">
       <header className="case-verdict__head">
         <h4>{c.loadCase}</h4>
-        {v ? <VerdictBadge code={v.code} compact /> : <span className="note">No verdict without an oil</span>}
+        {v ? (
+          <span className="case-verdict__need">
+            <span className="note">The case needs:</span> <VerdictBadge code={v.code} compact />
+          </span>
+        ) : (
+          <span className="note">No verdict without an oil</span>
+        )}
       </header>
+      {v ? (
+        <p className="case-verdict__checks" aria-label="Figures against their limits">
+          {v.checks.map((k) => (
+            <CheckChip key={k.quantity} check={k} />
+          ))}
+        </p>
+      ) : null}
       <p className="case-verdict__figures">
         <Quantity def="maxHertzStress" value={c.maxHertzStress_MPa} units={units} sig={4} withSymbol testId="max-hertz" /> ·{' '}
-        <Quantity def="lambdaMin" value={c.lambdaMin} units={units} sig={2} withSymbol /> ·{' '}
-        <Quantity def="scuffingSafety" value={c.scuffingSafety} units={units} sig={3} withSymbol /> ·{' '}
-        <Quantity def="integralSafety" value={c.integralSafety} units={units} sig={3} withSymbol /> ·{' '}
-        <Quantity def="maxContactTemperature" value={c.maxContactTemperature_C} units={units} sig={3} withSymbol /> ·{' '}
-        <Quantity def="scuffingTemperature" value={c.scuffingTemperature_C} units={units} sig={3} withSymbol />
-        {c.scuffingTemperatureAtLeast ? ' (at least)' : ''}
+        <Quantity def="maxContactTemperature" value={c.maxContactTemperature_C} units={units} sig={4} withSymbol /> ·{' '}
+        {c.scuffingTemperatureAtLeast ? (
+          <span className="note">θS: the oil is above stage 12, not limiting</span>
+        ) : (
+          <Quantity def="scuffingTemperature" value={c.scuffingTemperature_C} units={units} sig={4} withSymbol />
+        )}
       </p>
       {v && v.reasons.length ? (
         <details className="reasons-box" open={governing}>
@@ -38,14 +49,13 @@ export function CaseVerdictCard({ result: c, units, governing, skipCautions }: P
           </summary>
           <ol className="reasons" aria-label="Reasons">
             {v.reasons.map((r) => (
-              <li key={r.rule} data-rule={r.rule}>
+              <li key={r.rule}>
                 {r.text} <span className="reason__meta">Threshold: {r.threshold}. Source: {r.source}.</span>
               </li>
             ))}
           </ol>
         </details>
       ) : null}
-      {v ? <CautionList cautions={v.cautions.filter((k) => !skipCautions.has(k.id))} label={`Cautions for ${c.loadCase}`} /> : null}
       {c.warnings.length ? (
         <ul className="warnings" aria-label="Engine warnings">
           {c.warnings.map((w) => (

@@ -1,12 +1,25 @@
 import { memo } from 'react';
-import type { Results } from '../../../app/review/results';
+import type { CaseResult, LimitCheck, Results } from '../../../app/review/results';
 import type { UnitSystem } from '../../units/units';
 import { Quantity } from '../Quantity';
 import { VerdictBadge } from '../VerdictBadge';
 import { GradeFinder } from './GradeFinder';
 import { Panel } from './Panel';
 
-/** Oils (rows) × load cases (columns): λmin, SB, SintS, FZG stage needed and the verdict. */
+const stage = (s: number | '>12' | null) => (s === null ? '—' : s === '>12' ? 'above 12' : String(s));
+const checkOf = (c: CaseResult, q: LimitCheck['quantity']) => c.verdict?.checks.find((k) => k.quantity === q) ?? null;
+
+/** Pass or fail beside a figure, as a word and a shape (never colour alone). */
+function Mark({ check: k }: { readonly check: LimitCheck | null }) {
+  if (!k || k.pass === null) return null;
+  return (
+    <span className={`mark mark--${k.pass ? 'pass' : 'fail'}`} title={`${k.symbol} ${k.pass ? '≥' : '<'} ${k.limit} (policy)`}>
+      <span aria-hidden="true">{k.pass ? '✓' : '✗'}</span> {k.pass ? 'pass' : 'fail'}
+    </span>
+  );
+}
+
+/** Oils (rows) × load cases (columns): λmin, SB, SintS against their limits, the FZG stage needed and what the case needs. */
 function SideBySidePanelView({ results, units }: { readonly results: Results | null; readonly units: UnitSystem }) {
   if (!results) return <Panel id="side-by-side" title="Side by side"><p className="note">No results yet.</p></Panel>;
   const loadCases = [...new Set(results.cases.map((c) => c.loadCase))];
@@ -34,20 +47,32 @@ function SideBySidePanelView({ results, units }: { readonly results: Results | n
                   const c = results.cases.find((x) => x.loadCase === lc && x.oil === oil);
                   if (!c) return <td key={lc}>—</td>;
                   return (
-                    <td key={lc} className={`band--${c.verdict?.code ?? 'none'}`} data-testid="sbs-cell">
+                    <td key={lc} data-testid="sbs-cell">
                       <dl className="sbs__cell">
                         <dt>λmin</dt>
-                        <dd><Quantity def="lambdaMin" value={c.lambdaMin} units={units} sig={2} testId="sbs-lambda" /></dd>
-                        <dt>SB</dt>
-                        <dd><Quantity def="scuffingSafety" value={c.scuffingSafety} units={units} sig={3} testId="sbs-sb" /></dd>
-                        <dt>SintS</dt>
-                        <dd><Quantity def="integralSafety" value={c.integralSafety} units={units} sig={3} testId="sbs-sints" /></dd>
+                        <dd><Quantity def="lambdaMin" value={c.lambdaMin} units={units} sig={3} testId="sbs-lambda" /> <Mark check={checkOf(c, 'lambdaMin')} /></dd>
+                        {checkOf(c, 'scuffingSafety') ? (
+                          <>
+                            <dt>SB</dt>
+                            <dd><Quantity def="scuffingSafety" value={c.scuffingSafety} units={units} sig={3} testId="sbs-sb" /> <Mark check={checkOf(c, 'scuffingSafety')} /></dd>
+                          </>
+                        ) : null}
+                        {checkOf(c, 'integralSafety') ? (
+                          <>
+                            <dt>SintS</dt>
+                            <dd><Quantity def="integralSafety" value={c.integralSafety} units={units} sig={3} testId="sbs-sints" /> <Mark check={checkOf(c, 'integralSafety')} /></dd>
+                          </>
+                        ) : null}
                         <dt>FZG needed</dt>
-                        <dd><Quantity def="requiredFzgStage" value={c.requiredFzgStage === null ? null : String(c.requiredFzgStage)} units={units} testId="sbs-fzg" /></dd>
-                        <dt>FZG needed, integral</dt>
-                        <dd><Quantity def="requiredFzgStageIntegral" value={c.requiredFzgStageIntegral === null ? null : String(c.requiredFzgStageIntegral)} units={units} testId="sbs-fzg-int" /></dd>
+                        <dd data-testid="sbs-fzg">{stage(c.verdict?.neededFzgStage ?? c.requiredFzgStage)}</dd>
+                        <dt>flash · integral</dt>
+                        <dd data-testid="sbs-fzg-methods">{stage(c.requiredFzgStage)} · {stage(c.requiredFzgStageIntegral)}</dd>
                       </dl>
-                      {c.verdict ? <VerdictBadge code={c.verdict.code} compact /> : null}
+                      {c.verdict ? (
+                        <p className="sbs__need">
+                          <span className="note">Needs</span> <VerdictBadge code={c.verdict.code} compact />
+                        </p>
+                      ) : null}
                     </td>
                   );
                 })}

@@ -1,20 +1,17 @@
 import { memo } from 'react';
-import type { CaseResult, Caution, Results } from '../../../app/review/results';
+import type { CaseResult, Results } from '../../../app/review/results';
 import type { UnitSystem } from '../../units/units';
-import { formatPercent } from '../../units/format';
-import { Quantity } from '../Quantity';
-import { VerdictBadge } from '../VerdictBadge';
+import { ChangeCard } from '../verdict/ChangeCard';
+import { CautionSummaryList } from '../verdict/CautionSummaryList';
+import { NeedCard } from '../verdict/NeedCard';
+import { OilFindingHead } from '../verdict/OilFindingHead';
 import { CaseVerdictCard } from './CaseVerdictCard';
-import { CautionList } from './CautionList';
 import { Panel } from './Panel';
 
-/** Cautions every case of the oil carries are shown once, at the oil; the rest at their case. */
-function sharedCautions(cases: readonly CaseResult[]): Caution[] {
-  const [first, ...rest] = cases.map((c) => c.verdict?.cautions ?? []);
-  return (first ?? []).filter((k) => rest.every((list) => list.some((x) => x.id === k.id)));
-}
-
-/** Per oil: the overall verdict and its governing case, then each load case's verdict with reasons and cautions. */
+/**
+ * The change findings first, then what the duty needs (once), then each oil's finding against it
+ * with its cases, and every caution once at the end.
+ */
 function VerdictPanelView({ results, units }: { readonly results: Results | null; readonly units: UnitSystem }) {
   if (!results) {
     return (
@@ -28,39 +25,35 @@ function VerdictPanelView({ results, units }: { readonly results: Results | null
     const k = c.oil ?? '(no oil)';
     byOil.set(k, [...(byOil.get(k) ?? []), c]);
   }
+  const caseCount = new Set(results.cases.map((c) => c.loadCase)).size;
   return (
     <Panel id="verdict" title="Verdict">
+      {results.changes.map((ch) => (
+        <ChangeCard key={ch.to} change={ch} />
+      ))}
+      {results.need ? <NeedCard need={results.need} /> : <p className="note">Add an oil to see what the duty needs and whether the oil meets it.</p>}
       <div className="verdict-oils">
         {[...byOil.entries()].map(([oil, cases], oi) => {
           const overall = results.verdicts.find((v) => v.oil === oil);
-          const shared = sharedCautions(cases);
-          const sharedIds = new Set(shared.map((k) => k.id));
           return (
-            <article key={oil} className={`verdict-oil band--${overall?.code ?? 'none'}`} data-testid={`verdict-oil-${oi}`} aria-label={`Verdict for ${oil}`}>
+            <article key={oil} className="verdict-oil" data-testid={`verdict-oil-${oi}`} aria-label={`Finding for ${oil}`}>
               <header className="verdict-oil__head">
                 <h3>{oil}</h3>
-                {overall ? (
-                  <>
-                    <VerdictBadge code={overall.code} />
-                    <p className="verdict-oil__fit" data-testid="oil-fit">
-                      {overall.oilFit === 'meets' ? 'This oil meets the need' : 'This oil falls short of the need'} · governing case: <strong data-testid="governing-case">{overall.governingLoadCase}</strong> ·{' '}
-                      <Quantity def="dutyShareMet" value={formatPercent(overall.dutyShareMet)} units={units} withSymbol />
-                    </p>
-                    <p className="verdict-oil__summary">{overall.summary}</p>
-                  </>
-                ) : null}
-                <CautionList cautions={shared} label={`Cautions for ${oil}`} />
+                {overall ? <OilFindingHead verdict={overall} /> : null}
               </header>
               {cases.map((c) => (
-                <CaseVerdictCard key={c.loadCase} result={c} units={units} governing={c.loadCase === overall?.governingLoadCase} skipCautions={sharedIds} />
+                <CaseVerdictCard key={c.loadCase} result={c} units={units} governing={c.loadCase === overall?.governingLoadCase} />
               ))}
             </article>
           );
         })}
       </div>
+      {results.cautions.length ? <CautionSummaryList cautions={results.cautions} caseCount={caseCount} /> : <p className="note">{DEFER}</p>}
     </Panel>
   );
 }
+
+const DEFER = "This review is an engineering aid, not an approval: follow the gearbox maker's lubricant list, local codes and the judgement of a licensed engineer.";
 
 /** Re-renders only when its results or units change, not on every keystroke in the inputs. */
 export const VerdictPanel = memo(VerdictPanelView);

@@ -81,7 +81,7 @@ function assumptionsOf(review: Review): string[] {
     `ISO 6336-2 factors not computed by Flankfilm are inputs: Kv = ${gp.dynamicFactorKv}, KHβ = ${gp.faceLoadFactorKHbeta}, KHα = ${gp.transverseLoadFactorKHalpha}${gp.dynamicFactorKv === 1 && gp.faceLoadFactorKHbeta === 1 && gp.transverseLoadFactorKHalpha === 1 ? ' (all taken as 1)' : ''}.`,
     'Load sharing XΓ for unmodified flanks (no tip relief), ISO/TS 6336-20.',
     'Pitch-line velocity on the working pitch circle dw1.',
-    'Hertz stress along the path: line contact in the normal plane, ρn = ρ/cos βb, with load sharing; the pitch-point figure pitchHertzStress_MPa carries the whole load on one pair, as load-stage tables quote it.',
+    'Hertz stress along the path: line contact in the normal plane, ρn = ρ/cos βb, with load sharing; the pitch-point figure “pC, whole load” carries the whole load on one pair, as load-stage tables quote it.',
   ];
   return out;
 }

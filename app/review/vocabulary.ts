@@ -4,7 +4,8 @@
  * colour always goes with a word and an icon shape.
  */
 import type { Regime } from '../engine/film/regime';
-import type { Decision } from './schema';
+import type { Decision, Oil } from './schema';
+import type { MaterialPreset } from '../engine/materials';
 import type { ChangeFindingCode, OilFit, ScuffingMethods, Shortfall, VerdictCode } from './results';
 export { BASE_OIL_WORDS, CHEMISTRY_WORDS, METHOD_WORDS } from '../engine/verdict/words';
 
@@ -31,6 +32,18 @@ export const REGIME_WORDS: Readonly<Record<Regime, string>> = {
   boundary: 'boundary',
   mixed: 'mixed',
   'full-film': 'full film (EHL)',
+};
+
+export const MATERIAL_WORDS: Readonly<Record<MaterialPreset, string>> = {
+  'steel-carburized': 'Steel, case carburized',
+  'steel-through-hardened': 'Steel, through hardened',
+  'steel-nitrided': 'Steel, nitrided',
+};
+
+export const ROLE_WORDS: Readonly<Record<Oil['role'], string>> = {
+  'in-service': 'In service',
+  proposed: 'Proposed',
+  candidate: 'Candidate',
 };
 
 export const OIL_FIT_WORDS: Readonly<Record<OilFit, string>> = {

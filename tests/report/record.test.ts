@@ -159,6 +159,22 @@ describe('determinism, paper, units and performance', () => {
     expect(text).toContain('Draft');
   }, T);
 
+  it('the cover puts the change finding first, then the duty\'s need once, then each oil against it; no rule ids or codes anywhere', async () => {
+    const review = signedDemo();
+    const { path } = await writeRecord(review, 'cover-order.pdf');
+    const cover = tool('pdftotext', ['-enc', 'UTF-8', '-f', '1', '-l', '1', path, '-']);
+    const iChange = cover.indexOf('The change of oil');
+    const iNeed = cover.indexOf('What the duty needs');
+    const iOils = cover.indexOf('Each oil against the need');
+    expect(iChange).toBeGreaterThan(0);
+    expect(iNeed).toBeGreaterThan(iChange);
+    expect(iOils).toBeGreaterThan(iNeed);
+    expect(cover).toMatch(/Change supported with conditions/);
+    const all = tool('pdftotext', ['-enc', 'UTF-8', path, '-']);
+    expect(all).not.toMatch(/Rule: |falls-short|r-and-o|scuffing\.required-stage|oil\.fzg-stage/);
+    expect(all.match(/drain hot, flush with the new oil/g)).toHaveLength(1);
+  }, T);
+
   it('a changed review states "Changed since signing" on its cover', async () => {
     const review = signedDemo();
     const edited = { ...review, loadCases: review.loadCases.map((c, i) => (i === 0 ? { ...c, applicationFactor: c.applicationFactor + 0.1 } : c)) };

@@ -1,10 +1,10 @@
-import { drawStatusIcon, drawVerdictIcon, STATUS_COLOURS } from '../icons';
+import { drawStatusIcon, STATUS_COLOURS } from '../icons';
 import type { RecordContext } from '../context';
-import { FONT_REGULAR } from '../layout';
-import { formatPercent } from '../units';
-import { DECISION_WORDS, DEFER_TEXT, GREY, INK, OIL_FIT_WORDS, STATUS_LABELS, VERDICT_WORDS } from '../words';
+import { DECISION_WORDS, DEFER_TEXT, GREY, INK, STATUS_LABELS } from '../words';
+import { ROLE_WORDS } from '../../review/vocabulary';
+import { drawChanges, drawNeedAndFindings } from './decision';
 
-/** Cover: title, id, revision, state, date, and the overall verdict per oil, one entry each. */
+/** Cover: title, id, revision, state, date; the change findings first, then the duty's need and each oil's finding. */
 export function drawCover(ctx: RecordContext): void {
   const { layout: L, review, results, status, parts } = ctx;
   const doc = L.doc;
@@ -31,30 +31,17 @@ export function drawCover(ctx: RecordContext): void {
   if (s) {
     const line =
       status === 'signed'
-        ? `Signed by ${s.reviewer} (${s.role}${s.organisation ? `, ${s.organisation}` : ''}) at ${s.signedAt}: ${DECISION_WORDS[s.decision]}.`
-        : `The sign-off by ${s.reviewer} (${s.signedAt}) no longer matches: an input, a result or the engine version has changed since signing. The sign-off is shown on the last page for reference only.`;
+        ? `Signed by ${s.reviewer} (${s.role}${s.organisation ? `, ${s.organisation}` : ''}) on ${s.signedAt.slice(0, 10)}: ${DECISION_WORDS[s.decision]}.`
+        : `The sign-off by ${s.reviewer} (${s.signedAt.slice(0, 10)}) no longer matches: an input, a result or the engine version has changed since signing. The sign-off is shown on the last page for reference only.`;
     L.para(line, { size: 9 });
+    if (s.conditions) L.para(`Conditions of the decision: ${s.conditions}`, { size: 9 });
   } else {
     L.para('Not signed. This record has no sign-off yet; it states the computation, not a decision.', { size: 9, color: GREY });
   }
   L.y += 6;
 
-  L.heading('Verdict per oil', 2);
-  if (results.verdicts.length === 0) {
-    L.para('No oils are in scope: the record gives the gear pair’s stresses and velocities only, with no film, temperature or verdict.', { size: 9 });
-  }
-  for (const v of results.verdicts) {
-    const text = `${VERDICT_WORDS[v.code]} — ${v.oil}`;
-    const detail = `Governing load case: ${v.governingLoadCase}; ${OIL_FIT_WORDS[v.oilFit]}; the need is met for ${formatPercent(v.dutyShareMet)} of the duty by time share.`;
-    L.font(true, 9.5);
-    const h = doc.heightOfString(text, { width: L.width - 22 }) + doc.font(FONT_REGULAR).fontSize(8.5).heightOfString(detail, { width: L.width - 22 }) + 8;
-    L.ensure(h);
-    const top = L.y;
-    drawVerdictIcon(doc, v.code, L.left, top, 14);
-    L.font(true, 9.5).text(text, L.left + 22, top + 1, { width: L.width - 22 });
-    L.font(false, 8.5, INK).text(detail, L.left + 22, L.y + 1, { width: L.width - 22 });
-    L.y += 7;
-  }
+  drawChanges(ctx, results);
+  drawNeedAndFindings(ctx, results);
   L.y += 4;
   drawJob(ctx);
   L.y += 6;
@@ -66,7 +53,7 @@ function drawJob(ctx: RecordContext): void {
   const { layout: L, review, results } = ctx;
   const gp = review.gearPair;
   const kind = gp.helixAngle_deg > 0 ? `helical (β = ${gp.helixAngle_deg}°)` : 'spur';
-  const oils = review.oils.map((o) => `“${o.name}” (${o.role})`).join(', ');
+  const oils = review.oils.map((o) => `“${o.name}” (${ROLE_WORDS[o.role].toLowerCase()})`).join(', ');
   const cases = review.loadCases.map((c) => `“${c.name}”`).join(', ');
   L.heading('The job', 2);
   L.para(

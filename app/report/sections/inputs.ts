@@ -2,6 +2,7 @@ import { MATERIALS, type MaterialPreset } from '../../engine/materials';
 import type { GearPair, Review } from '../../review/schema';
 import type { RecordContext } from '../context';
 import { formatNumber, type Units } from '../units';
+import { BASE_OIL_WORDS, MATERIAL_WORDS, ROLE_WORDS } from '../../review/vocabulary';
 
 const CHEMISTRY_WORDS: Readonly<Record<Review['oils'][number]['chemistry'], string>> = { 'r-and-o': 'R&O', 'anti-wear': 'AW', 'extreme-pressure': 'EP' };
 
@@ -92,11 +93,11 @@ export function drawInputs(ctx: RecordContext): void {
         const s = results.oils[i];
         return [
           o.name,
-          o.role,
+          ROLE_WORDS[o.role],
           `${formatNumber(o.kv40_mm2s, 4)} / ${formatNumber(o.kv100_mm2s, 4)} ${u.unit('kinematicViscosity')}`,
           s ? `${formatNumber(s.viscosityIndex, 3)} (${s.viscosityIndexSource})` : formatNumber(o.viscosityIndex ?? null),
           u.fmt(o.density15_kgm3, 'density'),
-          `${o.baseOil}, ${CHEMISTRY_WORDS[o.chemistry]}${s?.isoVG ? `, ISO VG ${s.isoVG}` : ''}`,
+          `${BASE_OIL_WORDS[o.baseOil]}, ${CHEMISTRY_WORDS[o.chemistry]}${s?.isoVG ? `, ISO VG ${s.isoVG}` : ''}`,
           String(o.fzgFailureStage),
           o.pressureViscosity_1perGPa !== undefined ? u.fmt(o.pressureViscosity_1perGPa, 'pressureViscosity') : 'from ISO/TR 15144-1',
         ];
@@ -117,14 +118,14 @@ function tip(u: Units, input: number | undefined, used: number): string {
 }
 
 function materialName(m: GearPair['pinion']['material']): string {
-  return typeof m === 'string' ? m : 'custom (see Materials)';
+  return typeof m === 'string' ? MATERIAL_WORDS[m] : 'custom (see Materials)';
 }
 
 function materialRow(u: Units, member: 'pinion' | 'wheel', m: GearPair['pinion']['material']): string[] {
   if (typeof m === 'string') {
     const p = MATERIALS[m as MaterialPreset];
     return [
-      `${member}: ${m}`,
+      `${member}: ${MATERIAL_WORDS[m]}`,
       u.fmt(p.youngsModulus / 1e9, 'modulus'),
       formatNumber(p.poissonRatio, 3),
       u.fmt(p.thermalConductivity, 'conductivity', 3),

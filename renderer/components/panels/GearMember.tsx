@@ -1,14 +1,10 @@
 import { MATERIAL_PRESETS } from '../../../app/engine/materials';
+import { MATERIAL_WORDS } from '../../../app/review/vocabulary';
 import { useSheet } from '../../state/context';
 import { getIn } from '../../state/paths';
 import { NumberField } from '../fields/NumberField';
 import { SelectField } from '../fields/SelectField';
 
-const MATERIAL_WORDS: Readonly<Record<(typeof MATERIAL_PRESETS)[number], string>> = {
-  'steel-carburized': 'Steel, case carburized',
-  'steel-through-hardened': 'Steel, through hardened',
-  'steel-nitrided': 'Steel, nitrided',
-};
 
 /** Steel thermal data as a starting point for a custom material (materials.ts). */
 const CUSTOM_START = { youngsModulus_GPa: 206, poissonRatio: 0.3, thermalConductivity_WmK: 50, density_kgm3: 7800, specificHeat_JkgK: 470, structuralFactorXW: 1 };

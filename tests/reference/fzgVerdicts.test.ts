@@ -89,7 +89,8 @@ describe('change findings on the FZG A gear (flash method; the need follows from
     const ch = r.changes.find((c) => c.to === EP12.name);
     expect(ch?.from).toBe(RO6.name);
     expect(ch?.finding).toBe('supported-with-conditions'); // the FZG A gear runs in boundary lubrication (λmin ≈ 0.1)
-    expect(ch?.conditions.join(' ')).toMatch(/λ target/);
+    expect(ch?.conditions.join(' ')).toMatch(/λmin ≥ 1/); // the policy's λ target (default 1)
+    expect(ch?.statement).toMatch(/below the λ target/);
     expect(ch?.byCase[0]?.before.oilFzgStage).toBe(6);
     expect(ch?.byCase[0]?.after.oilFzgStage).toBe(12);
   });

@@ -8,7 +8,7 @@ import { atomicWrite } from '../files/atomicWrite';
 import type { Results } from '../review/results';
 import type { Review } from '../review/schema';
 import { resultsToCsv } from '../report/csv';
-import { renderRecord, type Paper } from '../report/record';
+import { renderRecord, signaturePlaceholderFor, type Paper } from '../report/record';
 import { operatingMaps } from '../review/operatingMaps';
 import { signRecordPdf, SigningError } from '../report/pdfSign';
 import { EXIT, type CliIo } from './io';
@@ -62,17 +62,7 @@ async function writePdf(review: Review, results: Results, path: string, options:
     pdf = await renderRecord(review, results, {
       paper: options.paper,
       maps: operatingMaps(review) ?? [],
-      ...(p12
-        ? {
-            signature: {
-              name: review.signoff?.reviewer ?? 'Flankfilm',
-              reason: review.signoff ? `Flankfilm record, ${review.signoff.decision}` : 'Flankfilm record (draft)',
-              contactInfo: review.signoff?.organisation ?? '',
-              location: '',
-              signingTime,
-            },
-          }
-        : {}),
+      ...(p12 ? { signature: signaturePlaceholderFor(review, signingTime) } : {}),
     });
     if (p12) pdf = await signRecordPdf(pdf, p12, process.env[P12_PASSPHRASE_ENV] ?? '', signingTime);
   } catch (e) {

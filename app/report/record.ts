@@ -58,6 +58,20 @@ export interface RecordOptions {
   maps?: readonly OperatingMapResult[];
 }
 
+/**
+ * The signature placeholder of a record of `review` signed at `signingTime`: what `flankfilm
+ * review --p12` writes, and what verify rebuilds a signed record with.
+ */
+export function signaturePlaceholderFor(review: Review, signingTime: Date): SignaturePlaceholder {
+  return {
+    name: review.signoff?.reviewer ?? 'Flankfilm',
+    reason: review.signoff ? `Flankfilm record, ${review.signoff.decision}` : 'Flankfilm record (draft)',
+    contactInfo: review.signoff?.organisation ?? '',
+    location: '',
+    signingTime,
+  };
+}
+
 /** Creation date of the record: sign-off time, else review date, else the Unix epoch. */
 export function recordDate(review: Review): Date {
   const iso = review.signoff?.signedAt ?? (review.date ? `${review.date}T00:00:00Z` : '1970-01-01T00:00:00Z');

@@ -4,7 +4,7 @@
  * file as it was. The PKCS#12 passphrase comes from FLANKFILM_P12_PASSPHRASE, never from argv.
  */
 import { readFile } from 'node:fs/promises';
-import { atomicWrite } from '../files/atomicWrite';
+import { atomicWrite, WriteRefused } from '../files/atomicWrite';
 import type { Results } from '../review/results';
 import type { Review } from '../review/schema';
 import { resultsToCsv } from '../report/csv';
@@ -83,5 +83,6 @@ async function writePdf(review: Review, results: Results, path: string, options:
 }
 
 function errCode(e: unknown): string {
+  if (e instanceof WriteRefused) return e.reason;
   return (e as NodeJS.ErrnoException).code ?? (e as Error).message ?? String(e);
 }

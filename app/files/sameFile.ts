@@ -1,5 +1,6 @@
-import { lstat, readlink, realpath, stat } from 'node:fs/promises';
-import { basename, dirname, isAbsolute, join, resolve } from 'node:path';
+import { stat } from 'node:fs/promises';
+import { resolve } from 'node:path';
+import { resolveTarget } from './atomicWrite';
 
 /**
  * A key that is equal for two paths exactly when writing one would change the other: device and
@@ -13,20 +14,7 @@ export async function fileKey(path: string): Promise<string> {
   } catch (e) {
     if ((e as NodeJS.ErrnoException).code !== 'ENOENT') return `path:${resolve(path)}`;
   }
-  return `path:${await wouldCreate(path)}`;
-}
-
-/** The path a write to `path` would create: links followed (up to 40, as the OS does), folders made real. */
-async function wouldCreate(path: string): Promise<string> {
-  let p = resolve(path);
-  for (let i = 0; i < 40; i++) {
-    const info = await lstat(p).catch(() => null);
-    if (!info?.isSymbolicLink()) break;
-    const target = await readlink(p);
-    p = isAbsolute(target) ? target : resolve(dirname(p), target);
-  }
-  const dir = await realpath(dirname(p)).catch(() => dirname(p));
-  return join(dir, basename(p));
+  return `path:${await resolveTarget(path)}`;
 }
 
 /**

@@ -50,7 +50,9 @@ export function parseReviewValue(raw: unknown): ParseResult {
   }
   const obj = raw as Record<string, unknown>;
   if (obj.format !== REVIEW_FORMAT) {
-    return { ok: false, issues: [{ path: 'format', message: `must be "${REVIEW_FORMAT}" (got ${JSON.stringify(obj.format) ?? 'nothing'})` }] };
+    // The file's own value is not echoed: a foreign file's content stays out of every message.
+    const got = obj.format === undefined ? 'it has none' : `it has another ${typeof obj.format === 'string' ? 'format' : 'kind of value'}: not a Flankfilm review`;
+    return { ok: false, issues: [{ path: 'format', message: `must be "${REVIEW_FORMAT}" (${got})` }] };
   }
   const version = obj.version;
   if (typeof version !== 'number' || !Number.isInteger(version) || version < 1) {

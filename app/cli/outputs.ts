@@ -8,7 +8,7 @@ import { atomicWrite, WriteRefused } from '../files/atomicWrite';
 import type { Results } from '../review/results';
 import type { Review } from '../review/schema';
 import { resultsToCsv } from '../report/csv';
-import { renderRecord, signaturePlaceholderFor, type Paper } from '../report/record';
+import { RecordTextError, renderRecord, signaturePlaceholderFor, type Paper } from '../report/record';
 import { operatingMaps } from '../review/operatingMaps';
 import { signRecordPdf, SigningError } from '../report/pdfSign';
 import { EXIT, type CliIo } from './io';
@@ -68,6 +68,10 @@ async function writePdf(review: Review, results: Results, path: string, options:
   } catch (e) {
     if (e instanceof SigningError) {
       io.err(`${options.p12}: ${e.message}\n`);
+      return EXIT.invalid;
+    }
+    if (e instanceof RecordTextError) {
+      io.err(`${path}: no record made:\n${e.message}\n`);
       return EXIT.invalid;
     }
     throw e;

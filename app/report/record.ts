@@ -16,6 +16,7 @@ import type { Review } from '../review/schema';
 import { status as reviewStatus } from '../review/status';
 import type { RecordContext } from './context';
 import { loadRecordFonts, type RecordFonts } from './fonts';
+import { fontCoverage, undrawableMessage, undrawableText } from './glyphCoverage';
 import { FONT_BOLD, FONT_REGULAR, Layout } from './layout';
 import { unitsFor } from './units';
 import { GREY, STATUS_LABELS } from './words';
@@ -85,8 +86,13 @@ export function attachmentName(review: Review): string {
   return `${id}.flankfilm.json`;
 }
 
+/** The review holds text the record's font cannot draw (it would print as boxes); the message names each field. */
+export class RecordTextError extends Error {}
+
 export async function renderRecord(review: Review, results: Results, options: RecordOptions = {}): Promise<Buffer> {
   const fonts = options.fonts ?? loadRecordFonts();
+  const undrawable = undrawableText(review, [fontCoverage(fonts.regular), fontCoverage(fonts.bold)]);
+  if (undrawable.length > 0) throw new RecordTextError(undrawableMessage(undrawable));
   const parts = fingerprintParts(review, results);
   const state = reviewStatus(review, results);
   const created = recordDate(review);

@@ -3,6 +3,7 @@ import { atomicWrite } from '../../app/files/atomicWrite';
 import { pathClash } from '../../app/files/sameFile';
 import type { Documents } from './documents';
 import { signReview as signOff } from '../../app/review/signoff';
+import { RecordTextError } from '../../app/report/record';
 import { explainFsError, UserError } from './errors';
 import { slugOf } from './paths';
 import { resultsOf } from './compute';
@@ -31,7 +32,10 @@ async function writeExport(deps: ExportDeps, handle: string | null | undefined, 
 export async function exportRecord(deps: ExportDeps, args: ServiceArgs<'exportRecord'>): ReturnType<Services['exportRecord']> {
   const { review } = reviewOf(args.text, 'no record made');
   const results = resultsOf(review, 'no record made');
-  const pdf = await deps.report.renderRecord(review, results, { paper: args.paper });
+  const pdf = await deps.report.renderRecord(review, results, { paper: args.paper }).catch((e: unknown) => {
+    if (e instanceof RecordTextError) throw new UserError(`no record made:\n${e.message}`);
+    throw e;
+  });
   const path = await writeExport(deps, args.handle, 'record', `${slugOf(review.title)}.pdf`, pdf);
   return path === null ? { canceled: true } : { canceled: false, name: basename(path), bytes: pdf.byteLength };
 }

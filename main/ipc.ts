@@ -3,7 +3,7 @@ import type { CallName, CallResult } from '../app/bridge/contract';
 import { ArgsRejected, invokeCall, type CallImpl } from './services/dispatch';
 import { UserError } from './services/errors';
 import { APP_ORIGIN, originOf } from './origin';
-import { channelOf } from './channels';
+import { channelOf, DROP_CHANNEL } from './channels';
 
 export { channelOf, MENU_CHANNEL } from './channels';
 
@@ -47,4 +47,17 @@ export function makeHandler<K extends CallName>(name: K, impl: CallImpl<K>, appO
 /** The one way main registers a contract call. */
 export function handle<K extends CallName>(name: K, impl: CallImpl<K>, appOrigin: string = APP_ORIGIN): void {
   ipcMain.handle(channelOf(name), makeHandler(name, impl, appOrigin));
+}
+
+/** The preload's drop channel: the sender checked like any call, the path a string of sane length, a handle back. */
+export function makeDropHandler(register: (path: string) => string, appOrigin: string = APP_ORIGIN) {
+  return async (event: SenderEvent, path: unknown): Promise<string | null> => {
+    checkSender(event, appOrigin);
+    if (typeof path !== 'string' || path.length === 0 || path.length > 4096 || path.includes('\0')) return null;
+    return register(path);
+  };
+}
+
+export function handleDrop(register: (path: string) => string, appOrigin: string = APP_ORIGIN): void {
+  ipcMain.handle(DROP_CHANNEL, makeDropHandler(register, appOrigin));
 }

@@ -10,7 +10,7 @@ import { reviewPathFromArgv } from './argv';
 import { MENU_CHANNEL } from './channels';
 import { createCloseGuard } from './closeGuard';
 import { electronDialogs } from './dialogs';
-import { handle } from './ipc';
+import { handle, handleDrop } from './ipc';
 import { menuTemplate, type MenuEvent } from './menu';
 import { APP_URL } from './origin';
 import { registerAppScheme, serveAppScheme } from './protocol';
@@ -61,8 +61,10 @@ if (!app.requestSingleInstanceLock()) {
   });
 }
 
+/** A menu command to the page; a path (recent list, command line, OS) goes as a document handle. */
 function send(event: MenuEvent): void {
-  win?.webContents.send(MENU_CHANNEL, event);
+  const { path, ...rest } = event;
+  win?.webContents.send(MENU_CHANNEL, path === undefined ? rest : { ...rest, handle: services.documents.register(path) });
 }
 
 const dialogs = electronDialogs(
@@ -92,14 +94,14 @@ function rebuildMenu(recent: readonly string[]): void {
 }
 
 /** The services as main serves them: saves report back to the close prompt; the title follows the document. */
-function mainImpls(s: Services): Services {
+function mainImpls(s: Services & { readonly documents: ReturnType<typeof createServices>['documents'] }): Services {
   return {
     ...s,
     async saveReview(args) {
       try {
         const r = await s.saveReview(args);
         guard.saveFinished(!r.canceled);
-        if (!r.canceled) app.addRecentDocument(r.path);
+        if (!r.canceled) app.addRecentDocument(s.documents.path(r.handle));
         return r;
       } catch (e) {
         guard.saveFinished(false);
@@ -133,6 +135,8 @@ async function start(): Promise<void> {
   });
   const impls = mainImpls(services);
   for (const name of CALL_NAMES) register(impls, name);
+  // A dropped file: the preload sends its path (webUtils), main keeps it and answers with a handle.
+  handleDrop((path) => services.documents.register(path));
   rebuildMenu(await services.recent.list());
   createWindow();
   app.on('activate', () => {

@@ -1,15 +1,15 @@
 /**
  * The sandboxed preload: `window.flankfilm` with one function per contract call, onMenu, and
- * pathForFile for drag and drop. Never ipcRenderer itself, never an IPC event object (its
+ * handleForFile for drag and drop (the dropped file's path goes to main, a handle comes back). Never ipcRenderer itself, never an IPC event object (its
  * `sender` is ipcRenderer). Bundled into one file by scripts/build.mjs: a sandboxed preload
  * cannot require anything but 'electron'.
  */
 import { contextBridge, ipcRenderer, webUtils } from 'electron';
 import { CALL_NAMES, menuEvent, type Bridge, type MenuCommand } from '../app/bridge/contract';
-import { channelOf, MENU_CHANNEL } from './channels';
+import { channelOf, DROP_CHANNEL, MENU_CHANNEL } from './channels';
 
 
-type MenuListener = (e: { command: MenuCommand; path?: string }) => void;
+type MenuListener = (e: { command: MenuCommand; handle?: string }) => void;
 
 /** "Error invoking remote method 'flankfilm:x': UserError: the file …" → "the file …". */
 export function cleanIpcError(e: unknown): Error {
@@ -25,7 +25,7 @@ export function buildBridge(ipc: Pick<typeof ipcRenderer, 'invoke' | 'on'>, path
   ipc.on(MENU_CHANNEL, (_event, payload: unknown) => {
     const parsed = menuEvent.safeParse(payload);
     if (!parsed.success) return;
-    const e = { command: parsed.data.command, ...(parsed.data.path !== undefined ? { path: parsed.data.path } : {}) };
+    const e = { command: parsed.data.command, ...(parsed.data.handle !== undefined ? { handle: parsed.data.handle } : {}) };
     if (listeners.size === 0) early.push(e);
     else listeners.forEach((l) => l(e));
   });
@@ -33,7 +33,7 @@ export function buildBridge(ipc: Pick<typeof ipcRenderer, 'invoke' | 'on'>, path
     CALL_NAMES.map((name) => [name, (args: unknown) => ipc.invoke(channelOf(name), args ?? {}).catch((e: unknown) => Promise.reject(cleanIpcError(e)))]),
   );
   return {
-    ...(calls as Omit<Bridge, 'onMenu' | 'pathForFile'>),
+    ...(calls as Omit<Bridge, 'onMenu' | 'handleForFile'>),
     onMenu(listener: MenuListener) {
       listeners.add(listener);
       early.splice(0).forEach((e) => listener(e));
@@ -41,7 +41,12 @@ export function buildBridge(ipc: Pick<typeof ipcRenderer, 'invoke' | 'on'>, path
         listeners.delete(listener);
       };
     },
-    pathForFile,
+    async handleForFile(file: unknown) {
+      const path = pathForFile(file);
+      if (!path) return null;
+      const handle: unknown = await ipc.invoke(DROP_CHANNEL, path);
+      return typeof handle === 'string' ? handle : null;
+    },
   };
 }
 

@@ -29,7 +29,7 @@ import { basisTag, METHODS, type MethodEntry } from '../app/review/methods';
 /** One method as a line of the Help dialog: what, the formula, the source and how firmly it is held. */
 const methodLine = (m: MethodEntry): string => `${m.topic} — ${m.quantity}: ${m.formula} (${m.source}${basisTag(m.basis) ? `; ${basisTag(m.basis)}` : ''})`;
 
-type Recovery = { text: string; path: string | null; savedAt: string };
+type Recovery = { text: string; handle: string | null; name: string | null; savedAt: string };
 
 /** The sheet: inputs on the left, findings on the right; state in a reducer, physics in a worker. */
 export function App({ bridge }: { readonly bridge: Bridge }) {
@@ -55,7 +55,7 @@ export function App({ bridge }: { readonly bridge: Bridge }) {
 
   const { open: openReview, guard, load } = actions;
   useFileDrop({
-    openPath: useCallback((path: string) => void openReview(path), [openReview]),
+    openHandle: useCallback((handle: string) => void openReview(handle), [openReview]),
     openText: useCallback((text: string) => void guard('open', async () => load(text, null, true, 'Opened the dropped review (not yet saved).')), [guard, load]),
   });
 
@@ -71,11 +71,11 @@ export function App({ bridge }: { readonly bridge: Bridge }) {
     [review?.policy.boundaryBelowLambda, review?.policy.fullFilmFromLambda],
   );
 
-  const onMenu = useRef<(c: MenuCommand, path?: string) => void>(() => undefined);
-  onMenu.current = (command, path) => {
+  const onMenu = useRef<(c: MenuCommand, handle?: string) => void>(() => undefined);
+  onMenu.current = (command, handle) => {
     const table: Record<MenuCommand, () => void> = {
-      new: () => dispatch({ type: 'load', draft: newReviewDraft(), path: null, dirty: true }),
-      open: () => void actions.open(path),
+      new: () => dispatch({ type: 'load', draft: newReviewDraft(), handle: null, dirty: true }),
+      open: () => void actions.open(handle),
       save: () => void actions.save(false),
       'save-as': () => void actions.save(true),
       'export-record': () => void actions.exportRecord(units === 'us' ? 'letter' : 'a4'),
@@ -89,12 +89,12 @@ export function App({ bridge }: { readonly bridge: Bridge }) {
     };
     table[command]();
   };
-  useEffect(() => bridge.onMenu((e) => onMenu.current(e.command, e.path)), [bridge]);
+  useEffect(() => bridge.onMenu((e) => onMenu.current(e.command, e.handle)), [bridge]);
 
   const recover = useCallback(
     (r: Recovery) => {
       setRecovery(null);
-      void actions.guard('open', async () => actions.load(r.text, r.path, true, 'Recovered the unsaved edits.'));
+      void actions.guard('open', async () => actions.load(r.text, r, true, 'Recovered the unsaved edits.'));
     },
     [actions],
   );
@@ -124,7 +124,7 @@ export function App({ bridge }: { readonly bridge: Bridge }) {
         onCsv={() => void actions.exportCsv()}
         onSign={() => setSigning(true)}
       />
-      {recovery ? <RecoveryPrompt savedAt={recovery.savedAt} path={recovery.path} onRecover={() => recover(recovery)} onDiscard={discard} /> : null}
+      {recovery ? <RecoveryPrompt savedAt={recovery.savedAt} name={recovery.name} onRecover={() => recover(recovery)} onDiscard={discard} /> : null}
       {info ? <InfoDialog title={info.title} lines={info.lines} onClose={() => setInfo(null)} /> : null}
       {sheet ? (
         <Sheet.Provider value={sheet}>

@@ -7,27 +7,35 @@ import { DECISIONS } from '../review/schema';
  * same contract is served over HTTP by the test harness (tests/harness), with the same services.
  */
 const canceled = z.object({ canceled: z.literal(true) });
-const opened = z.object({ canceled: z.literal(false), path: z.string().nullable(), text: z.string(), migratedFrom: z.number().int().nullable().optional() });
+/**
+ * An opaque document handle. Main alone holds file paths: it chooses them (its dialogs, the
+ * recent-files list, the command line, a drop through the preload) and gives the renderer a
+ * handle for each; the renderer passes handles back and shows only the file's name.
+ */
+export const documentHandle = z.string().regex(/^doc-[0-9a-f-]{36}$/, 'not a document handle');
+const fileName = z.string().max(255);
+const opened = z.object({ canceled: z.literal(false), handle: documentHandle.nullable(), name: fileName.nullable(), text: z.string(), migratedFrom: z.number().int().nullable().optional() });
 
+/** The calls that name files take strict objects: a `path` key from a renderer is refused, not ignored. */
 export const contract = {
-  /** Open a review: with a path (recent list, OS, drag and drop) or by the open dialog. */
-  openReview: { args: z.object({ path: z.string().max(4096).optional() }), result: z.union([opened, canceled]) },
+  /** Open a review: by a handle main gave (recent list, command line, drop) or by the open dialog. */
+  openReview: { args: z.strictObject({ handle: documentHandle.optional() }), result: z.union([opened, canceled]) },
   /** The invented demo review that `npm start` opens. */
   openDemo: { args: z.object({}), result: opened },
   /** Save atomically (temp file, fsync, rename, previous kept as .bak); a dialog if no path or saveAs. */
   saveReview: {
-    args: z.object({ path: z.string().max(4096).nullable(), text: z.string().max(2_000_000), saveAs: z.boolean() }),
-    result: z.union([z.object({ canceled: z.literal(false), path: z.string() }), canceled]),
+    args: z.strictObject({ handle: documentHandle.nullable(), text: z.string().max(2_000_000), saveAs: z.boolean() }),
+    result: z.union([z.object({ canceled: z.literal(false), handle: documentHandle, name: fileName }), canceled]),
   },
-  /** Render the record (PDF) of the review in main and save it by a dialog. */
+  /** Render the record (PDF) of the review in main and save it by a dialog (never over the document `handle` names). */
   exportRecord: {
-    args: z.object({ text: z.string().max(2_000_000), paper: z.enum(['a4', 'letter']) }),
-    result: z.union([z.object({ canceled: z.literal(false), path: z.string(), bytes: z.number().int() }), canceled]),
+    args: z.strictObject({ text: z.string().max(2_000_000), paper: z.enum(['a4', 'letter']), handle: documentHandle.nullable().optional() }),
+    result: z.union([z.object({ canceled: z.literal(false), name: fileName, bytes: z.number().int() }), canceled]),
   },
   /** Write the along-path CSV of every case. */
   exportCsv: {
-    args: z.object({ text: z.string().max(2_000_000) }),
-    result: z.union([z.object({ canceled: z.literal(false), path: z.string() }), canceled]),
+    args: z.strictObject({ text: z.string().max(2_000_000), handle: documentHandle.nullable().optional() }),
+    result: z.union([z.object({ canceled: z.literal(false), name: fileName }), canceled]),
   },
   /** Stamp a sign-off (signedAt from main's clock, fingerprint of inputs + results + engine version). */
   signReview: {
@@ -42,10 +50,10 @@ export const contract = {
     result: z.object({ text: z.string() }),
   },
   /** Keep unsaved edits in userData; recover them after a crash. */
-  autosave: { args: z.object({ text: z.string().max(2_000_000), path: z.string().nullable() }), result: z.object({ ok: z.literal(true) }) },
-  recoverAutosave: { args: z.object({}), result: z.object({ text: z.string(), path: z.string().nullable(), savedAt: z.string() }).nullable() },
+  autosave: { args: z.strictObject({ text: z.string().max(2_000_000), handle: documentHandle.nullable() }), result: z.object({ ok: z.literal(true) }) },
+  recoverAutosave: { args: z.object({}), result: z.object({ text: z.string(), handle: documentHandle.nullable(), name: fileName.nullable(), savedAt: z.string() }).nullable() },
   discardAutosave: { args: z.object({}), result: z.object({ ok: z.literal(true) }) },
-  recentFiles: { args: z.object({}), result: z.array(z.string()) },
+  recentFiles: { args: z.object({}), result: z.array(z.object({ handle: documentHandle, name: fileName })) },
   /** The window's title and "unsaved" mark, so close can prompt. */
   setDocumentState: { args: z.object({ title: z.string().max(300), dirty: z.boolean() }), result: z.object({ ok: z.literal(true) }) },
   appInfo: { args: z.object({}), result: z.object({ version: z.string(), engineVersion: z.string(), platform: z.string() }) },
@@ -59,17 +67,18 @@ export type CallResult<K extends CallName> = z.output<Contract[K]['result']>;
 /** Menu commands main sends to the renderer (one-way events). */
 export const MENU_COMMANDS = ['new', 'open', 'save', 'save-as', 'export-record', 'export-csv', 'sign', 'methods', 'about', 'units-si', 'units-us'] as const;
 export type MenuCommand = (typeof MENU_COMMANDS)[number];
-export const menuEvent = z.object({ command: z.enum(MENU_COMMANDS), path: z.string().optional() });
+export const menuEvent = z.object({ command: z.enum(MENU_COMMANDS), handle: documentHandle.optional() });
 
 /** The bridge object the preload exposes as `window.flankfilm`: one function per call, plus the menu event. */
 export type Bridge = { [K in CallName]: (args: CallArgs<K>) => Promise<CallResult<K>> } & {
   onMenu(listener: (e: z.output<typeof menuEvent>) => void): () => void;
   /**
-   * The file-system path of a file dropped on the window, for openReview({ path }); '' if it has
-   * none. Electron's preload only (webUtils.getPathForFile; File.path is gone since Electron 32);
-   * other transports leave it out.
+   * A handle for a file dropped on the window, for openReview({ handle }); null if it has no
+   * path. Electron's preload only: it reads the path (webUtils.getPathForFile) and hands it to
+   * main, which keeps it and answers with a handle; the page never sees the path. Other
+   * transports leave it out.
    */
-  pathForFile?(file: unknown): string;
+  handleForFile?(file: unknown): Promise<string | null>;
 };
 
 export const CALL_NAMES = Object.keys(contract) as CallName[];

@@ -3,7 +3,8 @@ export interface CliIo {
   err(text: string): void;
 }
 
-export const EXIT = { ok: 0, invalid: 1, usage: 2, mismatch: 3 } as const;
+/** 4 (`verify`): a record made by another engine version; what could be checked agrees, the pages were not checked. */
+export const EXIT = { ok: 0, invalid: 1, usage: 2, mismatch: 3, partial: 4 } as const;
 
 export class UsageError extends Error {}
 

@@ -4,11 +4,11 @@
  * file as it was. The PKCS#12 passphrase comes from FLANKFILM_P12_PASSPHRASE, never from argv.
  */
 import { readFile } from 'node:fs/promises';
-import { atomicWrite } from '../files/atomicWrite';
+import { atomicWrite, WriteRefused } from '../files/atomicWrite';
 import type { Results } from '../review/results';
 import type { Review } from '../review/schema';
 import { resultsToCsv } from '../report/csv';
-import { renderRecord, type Paper } from '../report/record';
+import { RecordTextError, renderRecord, signaturePlaceholderFor, type Paper } from '../report/record';
 import { operatingMaps } from '../review/operatingMaps';
 import { signRecordPdf, SigningError } from '../report/pdfSign';
 import { EXIT, type CliIo } from './io';
@@ -62,22 +62,16 @@ async function writePdf(review: Review, results: Results, path: string, options:
     pdf = await renderRecord(review, results, {
       paper: options.paper,
       maps: operatingMaps(review) ?? [],
-      ...(p12
-        ? {
-            signature: {
-              name: review.signoff?.reviewer ?? 'Flankfilm',
-              reason: review.signoff ? `Flankfilm record, ${review.signoff.decision}` : 'Flankfilm record (draft)',
-              contactInfo: review.signoff?.organisation ?? '',
-              location: '',
-              signingTime,
-            },
-          }
-        : {}),
+      ...(p12 ? { signature: signaturePlaceholderFor(review, signingTime) } : {}),
     });
     if (p12) pdf = await signRecordPdf(pdf, p12, process.env[P12_PASSPHRASE_ENV] ?? '', signingTime);
   } catch (e) {
     if (e instanceof SigningError) {
       io.err(`${options.p12}: ${e.message}\n`);
+      return EXIT.invalid;
+    }
+    if (e instanceof RecordTextError) {
+      io.err(`${path}: no record made:\n${e.message}\n`);
       return EXIT.invalid;
     }
     throw e;
@@ -93,5 +87,6 @@ async function writePdf(review: Review, results: Results, path: string, options:
 }
 
 function errCode(e: unknown): string {
+  if (e instanceof WriteRefused) return e.reason;
   return (e as NodeJS.ErrnoException).code ?? (e as Error).message ?? String(e);
 }

@@ -30,9 +30,10 @@ export async function runCli(argv: string[], io: CliIo): Promise<number> {
     io.out(`${ENGINE_VERSION}\n`);
     return EXIT.ok;
   }
-  const command = COMMANDS[name];
+  // Own keys only: `constructor`, `__proto__`, `toString` … are unknown commands, not Object's methods.
+  const command = Object.hasOwn(COMMANDS, name) ? COMMANDS[name] : undefined;
   if (!command) {
-    io.err(`flankfilm: unknown command "${name}"\n${USAGE}`);
+    io.err(`flankfilm: unknown command ${JSON.stringify(name.slice(0, 40))}\n${USAGE}`); // JSON quoting: no control character reaches the terminal
     return EXIT.usage;
   }
   try {

@@ -6,6 +6,7 @@
  */
 import type { PointResult, Results } from '../review/results';
 import { unitsFor, type Quantity, type UnitSystem } from './units';
+import { textCell } from '../review/csvCell';
 
 interface CsvColumn {
   name: string;
@@ -53,11 +54,11 @@ export function resultsToCsv(results: Results, system: UnitSystem = 'si'): strin
   const lines = [header.map(quote).join(',')];
   for (const c of results.cases) {
     c.path.forEach((p, i) => {
-      const cells = [c.loadCase, c.oil ?? '', String(i)];
+      const cells = [textCell(c.loadCase), textCell(c.oil ?? ''), String(i)];
       for (const col of COLUMNS) {
         const v = col.get(p);
         if (v === null) cells.push('');
-        else if (typeof v === 'string') cells.push(v);
+        else if (typeof v === 'string') cells.push(textCell(v));
         else cells.push(csvNumber(col.quantity ? u.value(v, col.quantity) : v));
       }
       lines.push(cells.map(quote).join(','));

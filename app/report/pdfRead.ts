@@ -5,20 +5,21 @@
  * file that is not such a PDF.
  */
 import { inflateSync } from 'node:zlib';
+import { MAX_REVIEW_BYTES } from '../review/parse';
 
 export class RecordReadError extends Error {}
 
-type PdfValue = null | boolean | number | string | Uint8Array | PdfName | PdfRef | PdfValue[] | PdfDict;
-class PdfName {
+export type PdfValue = null | boolean | number | string | Uint8Array | PdfName | PdfRef | PdfValue[] | PdfDict;
+export class PdfName {
   constructor(readonly name: string) {}
 }
-class PdfRef {
+export class PdfRef {
   constructor(
     readonly num: number,
     readonly gen: number,
   ) {}
 }
-type PdfDict = Map<string, PdfValue>;
+export type PdfDict = Map<string, PdfValue>;
 
 const WS = new Set([0x00, 0x09, 0x0a, 0x0c, 0x0d, 0x20]);
 const DELIM = new Set([0x28, 0x29, 0x3c, 0x3e, 0x5b, 0x5d, 0x7b, 0x7d, 0x2f, 0x25]);
@@ -143,10 +144,8 @@ class Parser {
   }
 }
 
-function latin1(b: Uint8Array): string {
-  let s = '';
-  for (let i = 0; i < b.length; i++) s += String.fromCharCode(b[i]!);
-  return s;
+export function latin1(b: Uint8Array): string {
+  return Buffer.from(b.buffer, b.byteOffset, b.byteLength).toString('latin1');
 }
 
 /** A PDF text string: UTF-16BE with a byte-order mark, else PDFDocEncoding (taken as Latin-1). */
@@ -164,44 +163,61 @@ interface PdfObject {
   stream: Uint8Array | null;
 }
 
-class PdfFile {
-  private readonly offsets = new Map<number, number>();
+export class PdfFile {
+  readonly offsets = new Map<number, number>();
+  /** Nesting of object() → resolve(/Length) → object(): a stream whose length refers back to itself stops here. */
+  private depth = 0;
   trailer: PdfDict = new Map();
   constructor(readonly b: Uint8Array) {
     if (latin1(b.subarray(0, 5)) !== '%PDF-') throw new RecordReadError('not a PDF (no %PDF- header)');
     if (!this.readXref()) this.scan();
   }
 
+  /** The classic xref table at startxref and, through /Prev, those of earlier revisions (the newest entry wins). */
   private readXref(): boolean {
     try {
       const tail = latin1(this.b.subarray(Math.max(0, this.b.length - 1024)));
       const m = /startxref\s+(\d+)\s+%%EOF\s*$/.exec(tail);
       if (!m) return false;
-      const p = new Parser(this.b, Number(m[1]));
-      if (p.token() !== 'xref') return false;
-      for (;;) {
-        const save = p.pos;
-        const first = p.token();
-        if (first === 'trailer') break;
-        const count = Number(p.token());
-        if (!/^\d+$/.test(first) || !Number.isInteger(count)) {
-          p.pos = save;
-          return false;
-        }
-        for (let i = 0; i < count; i++) {
-          const off = Number(p.token());
-          p.token();
-          const kind = p.token();
-          if (kind === 'n') this.offsets.set(Number(first) + i, off);
-        }
+      const seen = new Set<number>();
+      for (let at: number | null = Number(m[1]); at !== null; ) {
+        if (seen.has(at) || seen.size >= 32) throw new RecordReadError('the cross-reference sections form a loop');
+        seen.add(at);
+        const t = this.readSection(at);
+        if (!t) return false;
+        if (seen.size === 1) this.trailer = t;
+        const prev = t.get('Prev');
+        at = typeof prev === 'number' && Number.isInteger(prev) && prev >= 0 && prev < this.b.length ? prev : null;
       }
-      const t = p.value();
-      if (!(t instanceof Map)) return false;
-      this.trailer = t;
       return true;
-    } catch {
+    } catch (e) {
+      if (e instanceof RecordReadError) throw e;
       return false;
     }
+  }
+
+  private readSection(at: number): PdfDict | null {
+    const p = new Parser(this.b, at);
+    if (p.token() !== 'xref') return null;
+    for (;;) {
+      const save = p.pos;
+      const first = p.token();
+      if (first === 'trailer') break;
+      const count = Number(p.token());
+      if (!/^\d+$/.test(first) || !Number.isInteger(count) || count > this.b.length / 18) {
+        p.pos = save;
+        return null;
+      }
+      for (let i = 0; i < count; i++) {
+        const off = Number(p.token());
+        p.token();
+        const kind = p.token();
+        const num = Number(first) + i;
+        if (kind === 'n' && !this.offsets.has(num)) this.offsets.set(num, off);
+      }
+    }
+    const t = p.value();
+    return t instanceof Map ? t : null;
   }
 
   private scan(): void {
@@ -218,6 +234,24 @@ class PdfFile {
   object(num: number): PdfObject | null {
     const off = this.offsets.get(num);
     if (off === undefined) return null;
+    if (this.depth > 32) throw new RecordReadError(`object ${num}: references nest too deep (a loop)`);
+    this.depth++;
+    try {
+      return this.parseObject(num, off);
+    } finally {
+      this.depth--;
+    }
+  }
+
+  /** Bytes of object `num` from "N G obj" to the end of "endobj" (null if absent or malformed). */
+  span(num: number): Uint8Array | null {
+    const off = this.offsets.get(num);
+    if (off === undefined) return null;
+    const end = Buffer.from(this.b.buffer, this.b.byteOffset, this.b.byteLength).indexOf('endobj', off, 'latin1');
+    return end < 0 ? null : this.b.subarray(off, end + 6);
+  }
+
+  private parseObject(num: number, off: number): PdfObject | null {
     const p = new Parser(this.b, off);
     if (Number(p.token()) !== num) return null;
     p.token();
@@ -253,6 +287,9 @@ export interface RecordContents {
   readonly attachments: ReadonlyArray<{ name: string; data: Uint8Array }>;
 }
 
+/** More attachments than a record carries (it carries one): the file is not a record. */
+const MAX_ATTACHMENTS = 16;
+
 /** Document information and attached files of a PDF made by Flankfilm. */
 export function readRecord(bytes: Uint8Array): RecordContents {
   const pdf = new PdfFile(bytes);
@@ -270,11 +307,17 @@ export function readRecord(bytes: Uint8Array): RecordContents {
   const root = pdf.dict(pdf.trailer.get('Root') ?? null);
   const names = pdf.dict(root?.get('Names') ?? null);
   const tree = pdf.dict(names?.get('EmbeddedFiles') ?? null);
+  // A name tree is a tree: a node seen twice (a Kids entry pointing back up) is refused at once,
+  // as are trees deeper or wider than any record has, so a crafted file cannot loop or stall.
+  const seen = new Set<number>();
+  let entries = 0;
   const visit = (node: PdfDict | null, depth: number): void => {
-    if (!node || depth > 16) return;
+    if (!node) return;
+    if (depth > 16) throw new RecordReadError('the attachment name tree is nested more than 16 levels deep');
     const arr = pdf.resolve(node.get('Names') ?? null);
     if (Array.isArray(arr)) {
       for (let i = 0; i + 1 < arr.length; i += 2) {
+        if (++entries > MAX_ATTACHMENTS) throw new RecordReadError(`the record lists more than ${MAX_ATTACHMENTS} attachments`);
         const spec = pdf.dict(arr[i + 1] ?? null);
         const fallback = pdf.resolve(arr[i] ?? null);
         if (spec) {
@@ -284,8 +327,18 @@ export function readRecord(bytes: Uint8Array): RecordContents {
       }
     }
     const kids = pdf.resolve(node.get('Kids') ?? null);
-    if (Array.isArray(kids)) for (const k of kids) visit(pdf.dict(k), depth + 1);
+    if (Array.isArray(kids)) {
+      for (const k of kids) {
+        if (k instanceof PdfRef) {
+          if (seen.has(k.num)) throw new RecordReadError(`the attachment name tree refers to itself (object ${k.num})`);
+          seen.add(k.num);
+        }
+        visit(pdf.dict(k), depth + 1);
+      }
+    }
   };
+  const treeRef = names?.get('EmbeddedFiles');
+  if (treeRef instanceof PdfRef) seen.add(treeRef.num);
   visit(tree, 0);
   return { info, attachments };
 }
@@ -304,10 +357,15 @@ function fileOf(pdf: PdfFile, spec: PdfDict, fallbackName: string): { name: stri
   for (const f of filters) {
     if (f instanceof PdfName && f.name === 'FlateDecode') {
       try {
-        data = inflateSync(data);
+        // Bounded: a small stream that inflates past a review's size limit fails at once.
+        data = inflateSync(data, { maxOutputLength: MAX_REVIEW_BYTES + 1 });
       } catch (e) {
+        if ((e as NodeJS.ErrnoException).code === 'ERR_BUFFER_TOO_LARGE' || e instanceof RangeError) {
+          throw new RecordReadError(`attachment ${name}: it inflates past ${MAX_REVIEW_BYTES / 1e6} MB, the size limit of a review`);
+        }
         throw new RecordReadError(`attachment ${name}: the compressed stream is damaged (${(e as Error).message})`);
       }
+      if (data.length > MAX_REVIEW_BYTES) throw new RecordReadError(`attachment ${name}: it inflates past ${MAX_REVIEW_BYTES / 1e6} MB, the size limit of a review`);
     } else throw new RecordReadError(`attachment ${name}: unsupported filter ${f instanceof PdfName ? f.name : String(f)}`);
   }
   return { name, data };

@@ -16,6 +16,7 @@ import type { Review } from '../review/schema';
 import { status as reviewStatus } from '../review/status';
 import type { RecordContext } from './context';
 import { loadRecordFonts, type RecordFonts } from './fonts';
+import { fontCoverage, undrawableMessage, undrawableText } from './glyphCoverage';
 import { FONT_BOLD, FONT_REGULAR, Layout } from './layout';
 import { unitsFor } from './units';
 import { GREY, STATUS_LABELS } from './words';
@@ -58,6 +59,20 @@ export interface RecordOptions {
   maps?: readonly OperatingMapResult[];
 }
 
+/**
+ * The signature placeholder of a record of `review` signed at `signingTime`: what `flankfilm
+ * review --p12` writes, and what verify rebuilds a signed record with.
+ */
+export function signaturePlaceholderFor(review: Review, signingTime: Date): SignaturePlaceholder {
+  return {
+    name: review.signoff?.reviewer ?? 'Flankfilm',
+    reason: review.signoff ? `Flankfilm record, ${review.signoff.decision}` : 'Flankfilm record (draft)',
+    contactInfo: review.signoff?.organisation ?? '',
+    location: '',
+    signingTime,
+  };
+}
+
 /** Creation date of the record: sign-off time, else review date, else the Unix epoch. */
 export function recordDate(review: Review): Date {
   const iso = review.signoff?.signedAt ?? (review.date ? `${review.date}T00:00:00Z` : '1970-01-01T00:00:00Z');
@@ -71,8 +86,13 @@ export function attachmentName(review: Review): string {
   return `${id}.flankfilm.json`;
 }
 
+/** The review holds text the record's font cannot draw (it would print as boxes); the message names each field. */
+export class RecordTextError extends Error {}
+
 export async function renderRecord(review: Review, results: Results, options: RecordOptions = {}): Promise<Buffer> {
   const fonts = options.fonts ?? loadRecordFonts();
+  const undrawable = undrawableText(review, [fontCoverage(fonts.regular), fontCoverage(fonts.bold)]);
+  if (undrawable.length > 0) throw new RecordTextError(undrawableMessage(undrawable));
   const parts = fingerprintParts(review, results);
   const state = reviewStatus(review, results);
   const created = recordDate(review);

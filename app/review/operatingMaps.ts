@@ -1,4 +1,5 @@
 import { gearPairGeometry } from '../engine/geometry/gearPair';
+import { textCell } from './csvCell';
 import { mapAxes, operatingMap, VERDICT_CODES } from '../engine/sweep/operatingMap';
 import { micrometres } from '../engine/units';
 import { engineDutyOf, enginePolicyOf } from './engineInputs';
@@ -78,7 +79,7 @@ export function operatingMapsCsv(maps: readonly OperatingMapResult[]): string {
   for (const m of maps) {
     m.temperatures_C.forEach((t, r) => {
       m.loadPercent.forEach((l, c) => {
-        lines.push([q(m.loadCase), q(m.oil), num(t), num(l), num(m.lambdaMin[r]?.[c] ?? null), num(m.scuffingSafety[r]?.[c] ?? null), num(m.integralSafety[r]?.[c] ?? null), m.verdict[r]?.[c] ?? ''].join(','));
+        lines.push([q(textCell(m.loadCase)), q(textCell(m.oil)), num(t), num(l), num(m.lambdaMin[r]?.[c] ?? null), num(m.scuffingSafety[r]?.[c] ?? null), num(m.integralSafety[r]?.[c] ?? null), m.verdict[r]?.[c] ?? ''].join(','));
       });
     });
   }

@@ -1,6 +1,10 @@
 import type { z } from 'zod';
 import { REVIEW_FORMAT, REVIEW_VERSION, reviewSchema, type Review } from './schema';
 import { migrate } from './migrate';
+import { formatPath } from './fieldPath';
+
+export { formatPath };
+import { firstDuplicateKey } from './duplicateKeys';
 
 /** One problem with a review file, with the path of the field and what is allowed. */
 export interface ReviewIssue {
@@ -16,15 +20,6 @@ export type ParseResult =
 /** A review is a few kB; anything near this is not a review (and would stall the app). */
 export const MAX_REVIEW_BYTES = 1_000_000;
 
-export function formatPath(path: ReadonlyArray<PropertyKey>): string {
-  let out = '';
-  for (const p of path) {
-    if (typeof p === 'number') out += `[${p}]`;
-    else out += out ? `.${String(p)}` : String(p);
-  }
-  return out || '(file)';
-}
-
 export function zodIssues(error: z.ZodError): ReviewIssue[] {
   return error.issues.map((i) => ({ path: formatPath(i.path), message: i.message }));
 }
@@ -38,8 +33,18 @@ export function parseReviewText(text: string): ParseResult {
   try {
     raw = JSON.parse(text);
   } catch (e) {
-    return { ok: false, issues: [{ path: '(file)', message: `not valid JSON: ${(e as Error).message}` }] };
+    // Where, not what: V8's message quotes the text, and a foreign file's content stays out of every message.
+    const at = /position (\d+)/.exec((e as Error).message);
+    let where = '';
+    if (at) {
+      const before = text.slice(0, Number(at[1]));
+      const line = before.split('\n').length;
+      where = ` (line ${line}, column ${Number(at[1]) - before.lastIndexOf('\n')})`;
+    } else if (/end of JSON input/.test((e as Error).message)) where = ' (it ends too early)';
+    return { ok: false, issues: [{ path: '(file)', message: `not valid JSON${where}` }] };
   }
+  const duplicate = firstDuplicateKey(text);
+  if (duplicate !== null) return { ok: false, issues: [{ path: duplicate, message: 'this key appears twice in the same object; a review names each key once' }] };
   return parseReviewValue(raw);
 }
 
@@ -50,7 +55,9 @@ export function parseReviewValue(raw: unknown): ParseResult {
   }
   const obj = raw as Record<string, unknown>;
   if (obj.format !== REVIEW_FORMAT) {
-    return { ok: false, issues: [{ path: 'format', message: `must be "${REVIEW_FORMAT}" (got ${JSON.stringify(obj.format) ?? 'nothing'})` }] };
+    // The file's own value is not echoed: a foreign file's content stays out of every message.
+    const got = obj.format === undefined ? 'it has none' : `it has another ${typeof obj.format === 'string' ? 'format' : 'kind of value'}: not a Flankfilm review`;
+    return { ok: false, issues: [{ path: 'format', message: `must be "${REVIEW_FORMAT}" (${got})` }] };
   }
   const version = obj.version;
   if (typeof version !== 'number' || !Number.isInteger(version) || version < 1) {

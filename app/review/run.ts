@@ -1,3 +1,4 @@
+import { EngineInputError } from '../engine/diagnostics';
 import { gearPairGeometry } from '../engine/geometry/gearPair';
 import type { GearPairGeometry } from '../engine/geometry/types';
 import { analyseCase } from '../engine/mesh/analyseCase';
@@ -33,7 +34,7 @@ export function run(review: Review): Results {
     const duty = engineDutyOf(review, li);
     const oilList = oils.length > 0 ? oils : [null];
     for (const oil of oilList) {
-      const a = analyseCase({ geometry, pinion, wheel, roughnessRa1, roughnessRa2, duty, oil, policy, caseField: `loadCases[${li}]` });
+      const a = inReviewTerms(li, () => analyseCase({ geometry, pinion, wheel, roughnessRa1, roughnessRa2, duty, oil, policy, caseField: `loadCases[${li}]` }));
       cases.push(caseToResult(review, lc, oil, oils, a));
     }
   });
@@ -52,6 +53,31 @@ export function run(review: Review): Results {
     assumptions: assumptionsOf(review),
   };
 }
+
+/** A field path of the review file (what an error must name), as opposed to an engine symbol. */
+const REVIEW_FIELD = /^(gearPair|loadCases\[\d+\]|oils\[\d+\]|policy)(\.|$)/;
+
+/**
+ * An engine error about a derived quantity (a tooth load, a contact width: engine symbols)
+ * becomes one that names the review fields it comes from and their limits; errors that already
+ * name a review field pass unchanged.
+ */
+function inReviewTerms<T>(li: number, f: () => T): T {
+  try {
+    return f();
+  } catch (e) {
+    if (!(e instanceof EngineInputError) || REVIEW_FIELD.test(e.field)) throw e;
+    const c = `loadCases[${li}]`;
+    throw new EngineInputError(
+      e.code,
+      c,
+      `${LOAD_CASE_LIMITS}`,
+      `the speed, torque or power of this load case with the face width gives a tooth load the methods cannot use; ${LOAD_CASE_LIMITS} (${c}.pinionSpeed_rpm, ${c}.pinionTorque_Nm or ${c}.power_kW, gearPair.faceWidth_mm)`,
+    );
+  }
+}
+
+const LOAD_CASE_LIMITS = 'keep the speed from 0.1 to 100000 rpm, the torque from 0.001 to 1e8 N·m (or the power from 0.001 to 1e6 kW) and the face width from 0.5 to 5000 mm';
 
 function gearResult(g: GearPairGeometry): GearResult {
   const mm = toMillimetres;

@@ -14,6 +14,19 @@ export const REVIEW_VERSION = 1;
 const finite = () => z.number().refine(Number.isFinite, { message: 'must be a finite number' });
 const positive = (max: number, unit: string) =>
   finite().gt(0, { message: `must be greater than 0 ${unit}` }).lte(max, { message: `must be at most ${max} ${unit}` });
+/**
+ * Text a person reads on screen, in the CLI, the CSV and the PDF: no control characters (ESC,
+ * BEL, NUL … would reach the terminal and the PDF metadata) and no bidirectional overrides
+ * (which reorder what is shown). `line` is one line; `prose` allows tabs and line breaks.
+ */
+const CONTROL = /[\u0000-\u001f\u007f-\u009f\u2028\u2029\u202a-\u202e\u2066-\u2069]/;
+const CONTROL_IN_PROSE = /[\u0000-\u0008\u000b\u000c\u000e-\u001f\u007f-\u009f\u202a-\u202e\u2066-\u2069]/;
+const NO_CONTROL = { message: 'must not hold control characters (such as ESC, BEL or NUL) or direction overrides' };
+const line = (max: number) => z.string().max(max).refine((t) => !CONTROL.test(t), NO_CONTROL);
+const prose = (max: number) => z.string().max(max).refine((t) => !CONTROL_IN_PROSE.test(t), NO_CONTROL);
+
+/** A positive size with a least meaningful value: a 1e-320 would pass > 0 and underflow in the physics. */
+const atLeast = (min: number, max: number, unit: string) => positive(max, unit).gte(min, { message: `must be at least ${min} ${unit}` });
 
 export const materialSchema = z.union([
   z.enum(MATERIAL_PRESETS),
@@ -41,7 +54,7 @@ export const gearPairSchema = z.strictObject({
   normalModule_mm: positive(100, 'mm').gte(0.1, { message: 'must be at least 0.1 mm' }),
   normalPressureAngle_deg: finite().gte(10).lte(35).default(20),
   helixAngle_deg: finite().gte(0).lte(45).default(0),
-  faceWidth_mm: positive(5000, 'mm'),
+  faceWidth_mm: atLeast(0.5, 5000, 'mm'),
   centerDistance_mm: positive(50000, 'mm').optional(),
   pinion: gearSchema,
   wheel: gearSchema,
@@ -57,10 +70,10 @@ export const gearPairSchema = z.strictObject({
 
 export const loadCaseSchema = z
   .strictObject({
-    name: z.string().min(1).max(120),
-    pinionSpeed_rpm: positive(100000, 'rpm'),
-    pinionTorque_Nm: positive(1e8, 'N·m').optional(),
-    power_kW: positive(1e6, 'kW').optional(),
+    name: line(120).min(1),
+    pinionSpeed_rpm: atLeast(0.1, 100000, 'rpm'),
+    pinionTorque_Nm: atLeast(0.001, 1e8, 'N·m').optional(),
+    power_kW: atLeast(0.001, 1e6, 'kW').optional(),
     applicationFactor: finite().gte(1, { message: 'must be at least 1 (ISO 6336-1)' }).lte(4).default(1),
     oilTemperature_C: finite().gte(-40, { message: 'must be at least −40 °C' }).lte(200, { message: 'must be at most 200 °C' }),
     lubrication: z.enum(['dip', 'spray']),
@@ -78,7 +91,7 @@ export const fzgStageSchema = z.union([z.number().int().gte(1).lte(12), z.litera
 
 export const oilSchema = z
   .strictObject({
-    name: z.string().min(1).max(120),
+    name: line(120).min(1),
     role: z.enum(['in-service', 'proposed', 'candidate']).default('candidate'),
     kv40_mm2s: positive(100000, 'mm²/s'),
     kv100_mm2s: positive(10000, 'mm²/s').gte(2, { message: 'must be at least 2 mm²/s (ASTM D2270 range)' }),
@@ -128,25 +141,25 @@ export const policySchema = z
 export const DECISIONS = ['approved', 'approved-with-conditions', 'not-approved'] as const;
 
 export const signoffSchema = z.strictObject({
-  reviewer: z.string().min(1).max(200),
-  role: z.string().min(1).max(200),
-  organisation: z.string().max(200).optional(),
+  reviewer: line(200).min(1),
+  role: line(200).min(1),
+  organisation: line(200).optional(),
   decision: z.enum(DECISIONS),
-  conditions: z.string().max(4000).optional(),
+  conditions: prose(4000).optional(),
   signedAt: z.iso.datetime({ offset: true }),
-  engineVersion: z.string().min(1).max(50),
+  engineVersion: line(50).min(1),
   fingerprint: z.string().regex(/^[0-9a-f]{64}$/, { message: 'must be a SHA-256 hex digest' }),
 });
 
 export const reviewSchema = z.strictObject({
   format: z.literal(REVIEW_FORMAT),
   version: z.literal(REVIEW_VERSION),
-  title: z.string().min(1).max(200),
-  id: z.string().max(100).optional(),
+  title: line(200).min(1),
+  id: line(100).optional(),
   revision: z.number().int().gte(0).lte(100000).default(0),
   /** Date the review was prepared (ISO 8601); the record uses it as its creation date. */
   date: z.iso.date().optional(),
-  notes: z.string().max(10000).optional(),
+  notes: prose(10000).optional(),
   displayUnits: z.enum(['si', 'us']).default('si'),
   gearPair: gearPairSchema,
   loadCases: z.array(loadCaseSchema).min(1).max(20),

@@ -1,16 +1,25 @@
+import { basename } from 'node:path';
 import { atomicWrite } from '../../app/files/atomicWrite';
+import { pathClash } from '../../app/files/sameFile';
+import type { Documents } from './documents';
 import { signReview as signOff } from '../../app/review/signoff';
+import { RecordTextError } from '../../app/report/record';
 import { explainFsError, UserError } from './errors';
 import { slugOf } from './paths';
 import { resultsOf } from './compute';
 import { listIssues, reviewJson, reviewOf } from './reviewText';
 import type { Dialogs, ReportPort, SaveKind, ServiceArgs, Services } from './types';
 
-type ExportDeps = { dialogs: Dialogs; report: ReportPort };
+type ExportDeps = { dialogs: Dialogs; report: ReportPort; documents: Documents };
 
-async function writeExport(dialogs: Dialogs, kind: SaveKind, name: string, data: string | Uint8Array): Promise<string | null> {
-  const path = await dialogs.savePath(kind, name);
+/** Ask where to write an export; never over the document itself (through links, symbolic or hard). */
+async function writeExport(deps: ExportDeps, handle: string | null | undefined, kind: SaveKind, name: string, data: string | Uint8Array): Promise<string | null> {
+  const path = await deps.dialogs.savePath(kind, name);
   if (path === null) return null;
+  const doc = deps.documents.pathOrNull(handle);
+  if (doc && (await pathClash([['the review', doc]], [['the export', path]]))) {
+    throw new UserError(`${basename(path)} is the review itself: an export never overwrites the review. Choose another file.`);
+  }
   try {
     await atomicWrite(path, data);
   } catch (e) {
@@ -23,17 +32,20 @@ async function writeExport(dialogs: Dialogs, kind: SaveKind, name: string, data:
 export async function exportRecord(deps: ExportDeps, args: ServiceArgs<'exportRecord'>): ReturnType<Services['exportRecord']> {
   const { review } = reviewOf(args.text, 'no record made');
   const results = resultsOf(review, 'no record made');
-  const pdf = await deps.report.renderRecord(review, results, { paper: args.paper });
-  const path = await writeExport(deps.dialogs, 'record', `${slugOf(review.title)}.pdf`, pdf);
-  return path === null ? { canceled: true } : { canceled: false, path, bytes: pdf.byteLength };
+  const pdf = await deps.report.renderRecord(review, results, { paper: args.paper }).catch((e: unknown) => {
+    if (e instanceof RecordTextError) throw new UserError(`no record made:\n${e.message}`);
+    throw e;
+  });
+  const path = await writeExport(deps, args.handle, 'record', `${slugOf(review.title)}.pdf`, pdf);
+  return path === null ? { canceled: true } : { canceled: false, name: basename(path), bytes: pdf.byteLength };
 }
 
 /** The along-path CSV of every case. */
 export async function exportCsv(deps: ExportDeps, args: ServiceArgs<'exportCsv'>): ReturnType<Services['exportCsv']> {
   const { review } = reviewOf(args.text, 'no CSV written');
   const csv = deps.report.casesCsv(resultsOf(review, 'no CSV written'), review.displayUnits);
-  const path = await writeExport(deps.dialogs, 'csv', `${slugOf(review.title)}-cases.csv`, csv);
-  return path === null ? { canceled: true } : { canceled: false, path };
+  const path = await writeExport(deps, args.handle, 'csv', `${slugOf(review.title)}-cases.csv`, csv);
+  return path === null ? { canceled: true } : { canceled: false, name: basename(path) };
 }
 
 /** Stamp a sign-off; the time comes from main's clock, never from the renderer. */

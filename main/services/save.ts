@@ -4,9 +4,11 @@ import { explainFsError, UserError } from './errors';
 import { suggestedReviewName, withReviewExtension } from './paths';
 import type { RecentFiles } from './recent';
 import { reviewOf } from './reviewText';
+import type { Documents } from './documents';
 import type { Dialogs, ServiceArgs, Services } from './types';
+import { basename } from 'node:path';
 
-type SaveDeps = { dialogs: Dialogs; recent: RecentFiles; autosave: Autosave };
+type SaveDeps = { dialogs: Dialogs; recent: RecentFiles; autosave: Autosave; documents: Documents };
 
 /**
  * Save a review atomically (temp file, fsync, rename; the previous file kept as .bak). A review
@@ -15,7 +17,9 @@ type SaveDeps = { dialogs: Dialogs; recent: RecentFiles; autosave: Autosave };
  */
 export async function saveReview(deps: SaveDeps, args: ServiceArgs<'saveReview'>): ReturnType<Services['saveReview']> {
   const { review } = reviewOf(args.text, 'not saved');
-  const chosen = args.path && !args.saveAs ? args.path : await deps.dialogs.savePath('review', suggestedReviewName(args.path, review.title));
+  // The path comes from main: the handle's (a file main opened or saved before), else the dialog's.
+  const current = args.handle ? deps.documents.path(args.handle) : null;
+  const chosen = current && !args.saveAs ? current : await deps.dialogs.savePath('review', suggestedReviewName(current, review.title));
   if (chosen === null) return { canceled: true };
   const path = withReviewExtension(chosen);
   try {
@@ -26,5 +30,5 @@ export async function saveReview(deps: SaveDeps, args: ServiceArgs<'saveReview'>
   await deps.recent.add(path);
   const pending = await deps.autosave.recover();
   if (pending?.text === args.text) await deps.autosave.discard();
-  return { canceled: false, path };
+  return { canceled: false, handle: deps.documents.register(path), name: basename(path) };
 }

@@ -5,9 +5,10 @@ import { CALL_NAMES, menuEvent, type Bridge, type CallName } from '../../app/bri
  * it; menu commands arrive as server-sent events on GET /api/events. Results are validated by
  * the contract's schemas (selectBridge.ts), as the preload's are.
  */
-export function httpBridge(base = '/api/'): Bridge {
+export function httpBridge(base = '/api/', token = new URLSearchParams(location.search).get('token') ?? ''): Bridge {
+  // The harness's per-run token, from the page's own URL; sent with every call.
   const call = async (name: CallName, args: unknown): Promise<unknown> => {
-    const res = await fetch(`${base}${name}`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify(args ?? {}) });
+    const res = await fetch(`${base}${name}`, { method: 'POST', headers: { 'content-type': 'application/json', 'x-flankfilm-token': token }, body: JSON.stringify(args ?? {}) });
     const body: unknown = await res.json().catch(() => null);
     if (!res.ok) {
       const message = body && typeof body === 'object' && 'error' in body ? String((body as { error: unknown }).error) : `HTTP ${res.status}`;
@@ -19,7 +20,7 @@ export function httpBridge(base = '/api/'): Bridge {
   return {
     ...(calls as unknown as Omit<Bridge, 'onMenu'>),
     onMenu(listener) {
-      const source = new EventSource(`${base}events`);
+      const source = new EventSource(`${base}events?token=${encodeURIComponent(token)}`);
       source.onmessage = (e: MessageEvent<string>) => {
         let data: unknown;
         try {

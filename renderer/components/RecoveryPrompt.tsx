@@ -3,13 +3,14 @@ import { trapTab } from './focusTrap';
 
 interface Props {
   readonly savedAt: string;
-  readonly path: string | null;
+  /** The file's name (main keeps its path). */
+  readonly name: string | null;
   readonly onRecover: () => void;
   readonly onDiscard: () => void;
 }
 
 /** Offered at start when main kept unsaved edits (after a crash or a forced close). */
-export function RecoveryPrompt({ savedAt, path, onRecover, onDiscard }: Props) {
+export function RecoveryPrompt({ savedAt, name, onRecover, onDiscard }: Props) {
   const ref = useRef<HTMLDialogElement>(null);
   const recover = useRef<HTMLButtonElement>(null);
   useEffect(() => {
@@ -22,7 +23,7 @@ export function RecoveryPrompt({ savedAt, path, onRecover, onDiscard }: Props) {
       <h2 id="recover-title">Recover unsaved edits?</h2>
       <p>
         Edits that were not saved were kept on {new Date(savedAt).toLocaleString()}
-        {path ? ` for ${path}` : ''}.
+        {name ? ` for ${name}` : ''}.
       </p>
       <div className="dialog__buttons">
         <button type="button" onClick={onDiscard}>Discard them and open the demo</button>

@@ -54,10 +54,10 @@ export function useDocumentActions({ bridge, doc, review, dispatch, setUnits }: 
   );
 
   const load = useCallback(
-    (text: string, path: string | null, dirty: boolean, note?: string): string | null => {
+    (text: string, file: { handle: string | null; name: string | null } | null, dirty: boolean, note?: string): string | null => {
       const { draft, problem, units } = draftOf(text);
       if (!draft) throw new Error(`Could not open the review: ${problem ?? 'unreadable'}`);
-      dispatch({ type: 'load', draft, path, dirty });
+      dispatch({ type: 'load', draft, handle: file?.handle ?? null, name: file?.name ?? null, dirty });
       setUnits(units);
       return problem ?? note ?? null;
     },
@@ -67,11 +67,11 @@ export function useDocumentActions({ bridge, doc, review, dispatch, setUnits }: 
   const openDemo = useCallback(() => guard('open', async () => load((await bridge.openDemo({})).text, null, false, 'Opened the invented demo review.')), [bridge, guard, load]);
 
   const open = useCallback(
-    (path?: string) =>
+    (handle?: string) =>
       guard('open', async () => {
-        const r = await bridge.openReview(path ? { path } : {});
+        const r = await bridge.openReview(handle ? { handle } : {});
         if (r.canceled) return null;
-        return load(r.text, r.path, false, r.migratedFrom ? `Opened; converted from file version ${r.migratedFrom}.` : `Opened ${r.path ?? ''}`);
+        return load(r.text, r, false, r.migratedFrom ? `Opened; converted from file version ${r.migratedFrom}.` : `Opened ${r.name ?? 'the review'}`);
       }),
     [bridge, guard, load],
   );
@@ -80,33 +80,33 @@ export function useDocumentActions({ bridge, doc, review, dispatch, setUnits }: 
     (saveAs: boolean) =>
       guard('save', async () => {
         if (!doc.draft) return null;
-        const r = await bridge.saveReview({ path: doc.path, text: draftText(doc.draft), saveAs });
+        const r = await bridge.saveReview({ handle: doc.handle, text: draftText(doc.draft), saveAs });
         if (r.canceled) return null;
-        dispatch({ type: 'saved', path: r.path });
+        dispatch({ type: 'saved', handle: r.handle, name: r.name });
         await bridge.discardAutosave({}).catch(() => undefined);
-        return `Saved to ${r.path}`;
+        return `Saved to ${r.name}`;
       }),
-    [bridge, doc.draft, doc.path, dispatch, guard],
+    [bridge, doc.draft, doc.handle, dispatch, guard],
   );
 
   const exportRecord = useCallback(
     (paper: 'a4' | 'letter') =>
       guard('record', async () => {
         if (!doc.draft || !review) throw new Error('Correct the marked inputs before exporting the record.');
-        const r = await bridge.exportRecord({ text: draftText(doc.draft), paper });
-        return r.canceled ? null : `Record saved to ${r.path} (${Math.round(r.bytes / 1024)} kB)`;
+        const r = await bridge.exportRecord({ text: draftText(doc.draft), paper, handle: doc.handle });
+        return r.canceled ? null : `Record saved to ${r.name} (${Math.round(r.bytes / 1024)} kB)`;
       }),
-    [bridge, doc.draft, review, guard],
+    [bridge, doc.draft, doc.handle, review, guard],
   );
 
   const exportCsv = useCallback(
     () =>
       guard('csv', async () => {
         if (!doc.draft || !review) throw new Error('Correct the marked inputs before exporting the CSV.');
-        const r = await bridge.exportCsv({ text: draftText(doc.draft) });
-        return r.canceled ? null : `CSV saved to ${r.path}`;
+        const r = await bridge.exportCsv({ text: draftText(doc.draft), handle: doc.handle });
+        return r.canceled ? null : `CSV saved to ${r.name}`;
       }),
-    [bridge, doc.draft, review, guard],
+    [bridge, doc.draft, doc.handle, review, guard],
   );
 
   /** Rejects with the reason, for the dialog to show. */
@@ -125,13 +125,13 @@ export function useDocumentActions({ bridge, doc, review, dispatch, setUnits }: 
         });
         const { draft } = draftOf(r.text);
         if (!draft) throw new Error('The signed review came back unreadable.');
-        dispatch({ type: 'load', draft, path: doc.path, dirty: true });
+        dispatch({ type: 'load', draft, handle: doc.handle, name: doc.name, dirty: true });
         setNotice({ kind: 'info', text: `Signed by ${form.reviewer.trim()}. Save the review to keep the sign-off.` });
       } finally {
         setBusy(null);
       }
     },
-    [bridge, doc.draft, doc.path, review, dispatch],
+    [bridge, doc.draft, doc.handle, doc.name, review, dispatch],
   );
 
   return { busy, notice, setNotice, load, openDemo, open, save, exportRecord, exportCsv, sign, guard };

@@ -1,17 +1,17 @@
 import { useEffect } from 'react';
 
 interface DropActions {
-  /** Open a review by its path (Electron gives dropped files a path). */
-  readonly openPath: (path: string) => void;
+  /** Open a review by the handle main gave for the dropped file (Electron only). */
+  readonly openHandle: (handle: string) => void;
   /** Open a review from its text (a plain browser has no path). */
   readonly openText: (text: string) => void;
 }
 
 /** The preload adds this to the bridge for drag and drop; the HTTP bridge has none. */
-type WithPathForFile = { pathForFile?: (file: File) => string };
+type WithHandleForFile = { handleForFile?: (file: File) => Promise<string | null> };
 
 /** Drop a *.flankfilm.json on the window to open it. */
-export function useFileDrop({ openPath, openText }: DropActions): void {
+export function useFileDrop({ openHandle, openText }: DropActions): void {
   useEffect(() => {
     const over = (e: DragEvent) => {
       if (e.dataTransfer?.types.includes('Files')) e.preventDefault();
@@ -20,9 +20,8 @@ export function useFileDrop({ openPath, openText }: DropActions): void {
       const file = e.dataTransfer?.files[0];
       if (!file) return;
       e.preventDefault();
-      const path = (window.flankfilm as WithPathForFile | undefined)?.pathForFile?.(file) ?? '';
-      if (path) openPath(path);
-      else void file.text().then(openText);
+      const ask = (window.flankfilm as WithHandleForFile | undefined)?.handleForFile;
+      void (ask ? ask(file) : Promise.resolve(null)).then((handle) => (handle ? openHandle(handle) : file.text().then(openText)));
     };
     window.addEventListener('dragover', over);
     window.addEventListener('drop', drop);
@@ -30,5 +29,5 @@ export function useFileDrop({ openPath, openText }: DropActions): void {
       window.removeEventListener('dragover', over);
       window.removeEventListener('drop', drop);
     };
-  }, [openPath, openText]);
+  }, [openHandle, openText]);
 }

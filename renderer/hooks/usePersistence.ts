@@ -17,8 +17,8 @@ export function usePersistence(bridge: Bridge, doc: DocState): void {
     if (!doc.draft || !doc.dirty) return;
     const draft = doc.draft;
     const timer = setTimeout(() => {
-      bridge.autosave({ text: draftText(draft), path: doc.path }).catch(() => undefined);
+      bridge.autosave({ text: draftText(draft), handle: doc.handle }).catch(() => undefined);
     }, AUTOSAVE_DELAY_MS);
     return () => clearTimeout(timer);
-  }, [bridge, doc.draft, doc.dirty, doc.path]);
+  }, [bridge, doc.draft, doc.dirty, doc.handle]);
 }

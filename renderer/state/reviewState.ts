@@ -6,30 +6,32 @@ export type Draft = Record<string, unknown>;
 
 export interface DocState {
   readonly draft: Draft | null;
-  /** Where the review lives on disk; null for the demo or a new review. */
-  readonly path: string | null;
+  /** Main's opaque handle for the file the review lives in (main alone holds paths); null for the demo or a new review. */
+  readonly handle: string | null;
+  /** The file's name, for the window and the notices; null without a file. */
+  readonly name: string | null;
   readonly dirty: boolean;
   /** Bumped by every edit: the recompute of an older edition is dropped (latest wins). */
   readonly edition: number;
 }
 
-export const initialDocState: DocState = { draft: null, path: null, dirty: false, edition: 0 };
+export const initialDocState: DocState = { draft: null, handle: null, name: null, dirty: false, edition: 0 };
 
 export type DocAction =
-  | { type: 'load'; draft: Draft; path: string | null; dirty?: boolean }
+  | { type: 'load'; draft: Draft; handle: string | null; name?: string | null; dirty?: boolean }
   | { type: 'set'; path: FieldPath; value: unknown }
   | { type: 'setDrive'; index: number; given: 'torque' | 'power'; value: unknown }
   | { type: 'addItem'; list: 'loadCases' | 'oils'; item: Record<string, unknown> }
   | { type: 'removeItem'; list: 'loadCases' | 'oils'; index: number }
   | { type: 'toggleComponent'; component: string; on: boolean }
-  | { type: 'saved'; path: string };
+  | { type: 'saved'; handle: string; name: string };
 
 export function docReducer(state: DocState, action: DocAction): DocState {
   switch (action.type) {
     case 'load':
-      return { draft: action.draft, path: action.path, dirty: action.dirty ?? false, edition: state.edition + 1 };
+      return { draft: action.draft, handle: action.handle, name: action.name ?? null, dirty: action.dirty ?? false, edition: state.edition + 1 };
     case 'saved':
-      return { ...state, path: action.path, dirty: false };
+      return { ...state, handle: action.handle, name: action.name, dirty: false };
     default: {
       if (!state.draft) return state;
       const draft = edit(state.draft, action);

@@ -4,6 +4,7 @@ import { readFileSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import PDFDocument from 'pdfkit';
 import { renderRecord } from '../../app/report/record';
+import { operatingMaps } from '../../app/review/operatingMaps';
 import { fingerprintParts } from '../../app/review/fingerprint';
 import { run } from '../../app/review/run';
 import { signReview } from '../../app/review/signoff';
@@ -23,7 +24,7 @@ beforeAll(async () => {
   if (!s.ok) throw new Error('sign failed');
   review = s.review;
   pdf = join(dir, 'record.pdf');
-  writeFileSync(pdf, await renderRecord(review, run(review)));
+  writeFileSync(pdf, await renderRecord(review, run(review), { maps: operatingMaps(review) ?? [] })); // as `review --pdf` makes it
 }, T);
 
 function writeReview(r: Review, name: string): string {

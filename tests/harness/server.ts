@@ -10,8 +10,13 @@
  *                                         | 500 {error}          a bug
  *   GET  /api/events      server-sent events: one `data: {"command": …, "path"?: …}` per menu command
  *   GET  /…               the built renderer (staticDir), with the app's security headers
+ *
+ * Every /api/ request must carry this run's token (a random 32-byte hex string made at start):
+ * the header `x-flankfilm-token`, or `?token=` for the event stream (EventSource sends no
+ * headers). Without it: 401. The page learns the token from its own URL (`url` has it).
  */
 import { existsSync } from 'node:fs';
+import { randomBytes, timingSafeEqual } from 'node:crypto';
 import { mkdtemp, rm } from 'node:fs/promises';
 import { createServer, type IncomingMessage, type ServerResponse } from 'node:http';
 import type { AddressInfo } from 'node:net';
@@ -38,11 +43,15 @@ export interface HarnessOptions {
 }
 
 export interface Harness {
-  /** http://127.0.0.1:PORT/ */
+  /** The page: http://127.0.0.1:PORT/?token=… */
   readonly url: string;
+  /** http://127.0.0.1:PORT/ */
+  readonly origin: string;
+  /** This run's token; every /api/ request needs it. */
+  readonly token: string;
   readonly workDir: string;
   close(): Promise<void>;
-  /** Push a menu command to the page (as the native menu would). */
+  /** Push a menu command to the page (as the native menu would); a path goes as a document handle. */
   sendMenu(event: MenuEvent): void;
   /** The last setDocumentState the page sent, or null. */
   documentState(): DocumentState | null;
@@ -92,6 +101,8 @@ export async function startHarness(options: HarnessOptions = {}): Promise<Harnes
   });
   const listeners = new Set<ServerResponse>();
   let origin = '';
+  const token = randomBytes(32).toString('hex');
+  const tokenOk = (given: string | null | undefined): boolean => typeof given === 'string' && given.length === token.length && timingSafeEqual(Buffer.from(given), Buffer.from(token));
 
   const server = createServer((req, res) => {
     route(req, res).catch((e: unknown) => json(res, 500, { error: (e as Error)?.message ?? String(e) }));
@@ -102,6 +113,10 @@ export async function startHarness(options: HarnessOptions = {}): Promise<Harnes
     if (`http://${req.headers.host ?? ''}` !== origin) return json(res, 403, { error: 'wrong Host' });
     if (req.headers.origin !== undefined && req.headers.origin !== origin) return json(res, 403, { error: `origin ${req.headers.origin} may not call the harness` });
     const url = new URL(req.url ?? '/', origin);
+    if (url.pathname.startsWith('/api/')) {
+      const header = req.headers['x-flankfilm-token'];
+      if (!tokenOk(typeof header === 'string' ? header : url.searchParams.get('token'))) return json(res, 401, { error: 'this harness needs its run token' });
+    }
     if (url.pathname === '/api/events' && req.method === 'GET') return events(res);
     if (url.pathname.startsWith('/api/')) {
       if (req.method !== 'POST') return json(res, 405, { error: 'POST only' });
@@ -146,7 +161,9 @@ export async function startHarness(options: HarnessOptions = {}): Promise<Harnes
   origin = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
 
   return {
-    url: `${origin}/`,
+    url: `${origin}/?token=${token}`,
+    origin: `${origin}/`,
+    token,
     workDir,
     async close() {
       listeners.forEach((r) => r.end());
@@ -155,7 +172,8 @@ export async function startHarness(options: HarnessOptions = {}): Promise<Harnes
       if (ownWorkDir) await rm(workDir, { recursive: true, force: true });
     },
     sendMenu(event) {
-      const data = `data: ${JSON.stringify(event)}\n\n`;
+      const { path, ...rest } = event;
+      const data = `data: ${JSON.stringify(path === undefined ? rest : { ...rest, handle: services.documents.register(path) })}\n\n`;
       listeners.forEach((r) => r.write(data));
     },
     documentState: () => docState,

@@ -23,13 +23,15 @@ afterAll(async () => {
 });
 
 async function post(name: string, body: unknown, headers: Record<string, string> = {}) {
-  const res = await fetch(`${harness.url}api/${name}`, { method: 'POST', headers: { 'Content-Type': 'application/json', ...headers }, body: typeof body === 'string' ? body : JSON.stringify(body) });
+  const res = await fetch(`${harness.origin}api/${name}`, { method: 'POST', headers: { 'Content-Type': 'application/json', 'x-flankfilm-token': harness.token, ...headers }, body: typeof body === 'string' ? body : JSON.stringify(body) });
   return { status: res.status, body: (await res.json()) as Record<string, unknown> };
 }
 
 describe('the HTTP harness', () => {
   it('listens on loopback and serves the renderer with the CSP', async () => {
-    expect(harness.url).toMatch(/^http:\/\/127\.0\.0\.1:\d+\/$/);
+    expect(harness.origin).toMatch(/^http:\/\/127\.0\.0\.1:\d+\/$/);
+    expect(harness.url).toBe(`${harness.origin}?token=${harness.token}`);
+    expect(harness.token).toMatch(/^[0-9a-f]{64}$/);
     const res = await fetch(harness.url);
     expect(res.status).toBe(200);
     expect(res.headers.get('content-security-policy')).toBe(CSP);
@@ -40,19 +42,20 @@ describe('the HTTP harness', () => {
     expect(await post('appInfo', {})).toMatchObject({ status: 200, body: { version: 'harness' } });
     const demo = await post('openDemo', {});
     expect(demo.status).toBe(200);
-    expect(demo.body).toMatchObject({ canceled: false, path: null });
-    const saved = await post('saveReview', { path: null, text: demo.body.text, saveAs: false });
+    expect(demo.body).toMatchObject({ canceled: false, handle: null });
+    const saved = await post('saveReview', { handle: null, text: demo.body.text, saveAs: false });
     expect(saved.status).toBe(200);
-    expect(saved.body.path).toBe(join(harness.workDir, 'harrow-creek-aggregate-plant-primary-crusher-drive-reducer.flankfilm.json'));
-    expect(await readFile(saved.body.path as string, 'utf8')).toBe(demo.body.text);
-    expect(await post('autosave', { text: DEMO_TEXT, path: null })).toEqual({ status: 200, body: { ok: true } });
-    expect((await post('recoverAutosave', {})).body).toEqual({ text: DEMO_TEXT, path: null, savedAt: '2026-12-01T09:30:00.000Z' });
+    expect(saved.body.name).toBe('harrow-creek-aggregate-plant-primary-crusher-drive-reducer.flankfilm.json');
+    expect(JSON.stringify(saved.body)).not.toContain(harness.workDir); // the page gets a handle and a name, never a path
+    expect(await readFile(join(harness.workDir, saved.body.name as string), 'utf8')).toBe(demo.body.text);
+    expect(await post('autosave', { text: DEMO_TEXT, handle: saved.body.handle })).toEqual({ status: 200, body: { ok: true } });
+    expect((await post('recoverAutosave', {})).body).toEqual({ text: DEMO_TEXT, handle: saved.body.handle, name: saved.body.name, savedAt: '2026-12-01T09:30:00.000Z' });
     const record = await post('exportRecord', { text: DEMO_TEXT, paper: 'a4' });
-    expect(record.body).toEqual({ canceled: false, path: join(harness.workDir, 'record.pdf'), bytes: 9 });
+    expect(record.body).toEqual({ canceled: false, name: 'record.pdf', bytes: 9 });
   });
 
   it('answers 400 with the issues when the zod schema refuses the arguments', async () => {
-    const r = await post('saveReview', { path: null, text: 42, saveAs: 'no' });
+    const r = await post('saveReview', { handle: null, text: 42, saveAs: 'no' });
     expect(r.status).toBe(400);
     expect(r.body.error).toMatch(/^saveReview: arguments refused by the contract/);
     expect(r.body.issues).toEqual(expect.arrayContaining([expect.objectContaining({ path: 'text' }), expect.objectContaining({ path: 'saveAs' })]));
@@ -62,9 +65,9 @@ describe('the HTTP harness', () => {
   it('answers 422 with the message for a refusal meant for the user', async () => {
     const dir = join(harness.workDir, 'in');
     await mkdir(dir, { recursive: true });
-    const file = join(dir, 'future.flankfilm.json');
+    const file = join(harness.workDir, 'open.flankfilm.json'); // what the harness's open dialog chooses
     await writeFile(file, NEWER_TEXT);
-    const r = await post('openReview', { path: file });
+    const r = await post('openReview', {});
     expect(r.status).toBe(422);
     expect(r.body.error).toMatch(/made by a newer Flankfilm/);
     expect(await readFile(file, 'utf8')).toBe(NEWER_TEXT);
@@ -73,12 +76,12 @@ describe('the HTTP harness', () => {
   it('answers 404 for an unknown call, 405 for GET on a call, 403 for another origin', async () => {
     expect((await post('deleteEverything', {})).status).toBe(404);
     expect((await post('toString', {})).status).toBe(404);
-    expect((await fetch(`${harness.url}api/appInfo`)).status).toBe(405);
+    expect((await fetch(`${harness.origin}api/appInfo`, { headers: { 'x-flankfilm-token': harness.token } })).status).toBe(405);
     expect((await post('appInfo', {}, { Origin: 'http://evil.example' })).status).toBe(403);
   });
 
   it('refuses a request whose Host is not its own (DNS rebinding)', async () => {
-    const { port } = new URL(harness.url);
+    const { port } = new URL(harness.origin);
     const status = await new Promise<number>((ok, fail) => {
       const req = request({ host: '127.0.0.1', port, path: '/', headers: { Host: 'evil.example' } }, (res) => {
         res.resume();
@@ -101,12 +104,31 @@ describe('the HTTP harness', () => {
     await post('setDocumentState', { title: 'HS pair', dirty: true });
     expect(harness.documentState()).toEqual({ title: 'HS pair', dirty: true });
     const controller = new AbortController();
-    const res = await fetch(`${harness.url}api/events`, { signal: controller.signal });
+    const res = await fetch(`${harness.origin}api/events?token=${harness.token}`, { signal: controller.signal });
     const reader = (res.body as ReadableStream<Uint8Array>).getReader();
     await reader.read(); // the opening comment
     harness.sendMenu({ command: 'open', path: '/x/a.flankfilm.json' });
     const chunk = new TextDecoder().decode((await reader.read()).value);
-    expect(chunk).toBe('data: {"command":"open","path":"/x/a.flankfilm.json"}\n\n');
+    expect(chunk).toMatch(/^data: \{"command":"open","handle":"doc-[0-9a-f-]{36}"\}\n\n$/); // a handle, not the path
     controller.abort();
+  });
+
+  it('refuses every /api/ request without this run\'s token (401), and with another token', async () => {
+    const plain = await fetch(`${harness.origin}api/appInfo`, { method: 'POST', headers: { 'Content-Type': 'application/json' }, body: '{}' });
+    expect(plain.status).toBe(401);
+    expect((await post('appInfo', {}, { 'x-flankfilm-token': 'f'.repeat(64) })).status).toBe(401);
+    expect((await fetch(`${harness.origin}api/events`)).status).toBe(401);
+    const other = await startHarness({ staticDir, report: fakeReport });
+    expect(other.token).not.toBe(harness.token); // per run
+    await other.close();
+  });
+
+  it('cannot be made to read or write a file outside what its dialogs choose (the renderer sends no paths)', async () => {
+    const outside = join(await mkdtemp(join(tmpdir(), 'flankfilm-outside-')), 'unrelated.json');
+    await writeFile(outside, '{"format":"not-ours","secret":1}');
+    expect((await post('openReview', { path: outside })).status).toBe(400);
+    expect((await post('saveReview', { path: outside, text: DEMO_TEXT, saveAs: false })).status).toBe(400);
+    expect(await readFile(outside, 'utf8')).toBe('{"format":"not-ours","secret":1}');
+    await expect(readFile(`${outside}.bak`)).rejects.toThrow(/ENOENT/);
   });
 });

@@ -63,7 +63,7 @@ describe('handle(name, impl): the one IPC wrapper', () => {
 
   it('refuses to pass on a result the contract does not allow', async () => {
     const logged = vi.spyOn(console, 'error').mockImplementation(() => undefined);
-    handle('recentFiles', async () => [42] as unknown as string[]);
+    handle('recentFiles', async () => [42] as unknown as Array<{ handle: string; name: string }>);
     const recent = handlers.get(channelOf('recentFiles')) as (e: unknown, a: unknown) => Promise<unknown>;
     await expect(recent(GOOD, {})).rejects.toThrow(/recentFiles: main produced a result the contract refuses/);
     expect(logged).toHaveBeenCalledOnce(); // a bug, so main logs it

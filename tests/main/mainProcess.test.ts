@@ -134,7 +134,7 @@ describe('the main process', () => {
   });
 
   it('registers every contract call, through the checked wrapper', async () => {
-    expect([...fake.handlers.keys()].sort()).toEqual(CALL_NAMES.map((n) => `flankfilm:${n}`).sort());
+    expect([...fake.handlers.keys()].sort()).toEqual([...CALL_NAMES.map((n) => `flankfilm:${n}`), 'flankfilm:drop'].sort());
     const appInfo = fake.handlers.get('flankfilm:appInfo');
     await expect(appInfo?.(appEvent, {})).resolves.toMatchObject({ version: '0.1.0' });
     await expect(appInfo?.({ senderFrame: { url: 'https://example.com/', parent: null } }, {})).rejects.toThrow(/call refused/);
@@ -158,11 +158,21 @@ describe('the main process', () => {
   });
 
   it("hands the --open file to the page once it has loaded, and a second instance's file too", async () => {
+    // The page gets a handle for each path, never the path; openReview with that handle opens it.
+    const handleLike = expect.stringMatching(/^doc-[0-9a-f-]{36}$/) as unknown as string;
     win.webContents.emit('did-finish-load');
-    expect(win.webContents.send).toHaveBeenLastCalledWith('flankfilm:menu', { command: 'open', path: opened });
+    expect(win.webContents.send).toHaveBeenLastCalledWith('flankfilm:menu', { command: 'open', handle: handleLike });
+    const first = (win.webContents.send.mock.calls.at(-1)?.[1] as { handle: string }).handle;
     const { app } = await import('electron');
     app.emit('second-instance', {}, ['Flankfilm', 'b.flankfilm.json'], '/home/u');
-    expect(win.webContents.send).toHaveBeenLastCalledWith('flankfilm:menu', { command: 'open', path: '/home/u/b.flankfilm.json' });
+    expect(win.webContents.send).toHaveBeenLastCalledWith('flankfilm:menu', { command: 'open', handle: handleLike });
+    const second = (win.webContents.send.mock.calls.at(-1)?.[1] as { handle: string }).handle;
+    expect(second).not.toBe(first);
+    expect(JSON.stringify(win.webContents.send.mock.calls)).not.toContain(opened);
+    const drop = fake.handlers.get('flankfilm:drop');
+    await expect(drop?.(appEvent, '/home/u/b.flankfilm.json')).resolves.toBe(second); // one handle per path
+    await expect(drop?.({ senderFrame: { url: 'https://example.com/', parent: null } }, '/etc/passwd')).rejects.toThrow(/call refused/);
+    await expect(drop?.(appEvent, 42)).resolves.toBeNull();
   });
 
   it("shows the document's title and dirty mark, and asks before closing unsaved edits", async () => {

@@ -35,8 +35,9 @@ describe('an older review file', () => {
       platform: 'linux',
       report: { renderRecord: async () => new Uint8Array(), casesCsv: () => '' },
     });
-    const r = await s.openReview({ path: file });
-    expect(r).toMatchObject({ canceled: false, path: file, migratedFrom: 0 });
+    const handle = s.documents.register(file);
+    const r = await s.openReview({ handle });
+    expect(r).toMatchObject({ canceled: false, handle, name: 'old.flankfilm.json', migratedFrom: 0 });
     const text = (r as { text: string }).text;
     expect(JSON.parse(text)).toMatchObject({ format: 'flankfilm.review', version: 1 });
     expect(await readFile(file, 'utf8')).toBe(oldText);

@@ -1,6 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { readFileSync, readdirSync } from 'node:fs';
 import { join } from 'node:path';
+import { z } from 'zod';
+import { contract, menuEvent } from '../../app/bridge/contract';
 
 /**
  * Electron's security checklist (electronjs.org, "Security", the numbered recommendations), item by
@@ -25,10 +27,10 @@ const CHECKLIST: ReadonlyArray<{ item: number; title: string; covered: string }>
   { item: 14, title: 'Disable or limit creation of new windows', covered: 'window.test.ts: setWindowOpenHandler denies' },
   { item: 15, title: 'Do not use shell.openExternal with untrusted content', covered: 'here: main/ never calls shell.openExternal' },
   { item: 16, title: 'Use a current version of Electron', covered: 'here: electron pinned exactly (45.5.0)' },
-  { item: 17, title: 'Validate the sender of all IPC messages', covered: 'ipc.test.ts: foreign origin, subframe and bad payload rejected' },
+  { item: 17, title: 'Validate the sender of all IPC messages', covered: 'ipc.test.ts: foreign origin, subframe and bad payload rejected; mainProcess.test.ts: the drop channel checks its sender too; here: no call takes a file path, only main\'s opaque document handles' },
   { item: 18, title: 'Avoid the file:// protocol, prefer custom protocols', covered: 'here and staticFiles.test.ts: pages come from app://flankfilm/' },
   { item: 19, title: 'Check which fuses you can change', covered: 'here: electron-builder.yml sets the fuses' },
-  { item: 20, title: 'Do not expose Electron APIs to untrusted web content', covered: 'preload.test.ts: only the contract calls, onMenu and pathForFile are exposed' },
+  { item: 20, title: 'Do not expose Electron APIs to untrusted web content', covered: 'preload.test.ts: only the contract calls, onMenu and handleForFile are exposed; a dropped file\'s path goes to main, only a handle comes back' },
 ];
 
 const mainSources = readdirSync('main', { recursive: true, withFileTypes: true })
@@ -40,6 +42,28 @@ describe('Electron security checklist', () => {
   it('every item is either proven somewhere or marked not applicable with its reason', () => {
     expect(CHECKLIST.map((c) => c.item)).toEqual(Array.from({ length: 20 }, (_, i) => i + 1));
     for (const c of CHECKLIST) expect(c.covered.length, c.title).toBeGreaterThan(10);
+  });
+  it('17/20: main alone holds file paths — no call, result or menu event carries one; the calls that name files refuse extra keys', () => {
+    const keysOf = (schema: unknown): string[] => {
+      const s = schema as z.ZodType & { shape?: Record<string, unknown>; options?: unknown[]; unwrap?: () => unknown; element?: unknown };
+      if (s instanceof z.ZodObject) return Object.entries(s.shape).flatMap(([k, v]) => [k, ...keysOf(v)]);
+      if (s instanceof z.ZodUnion) return (s.options as unknown[]).flatMap(keysOf);
+      if (s instanceof z.ZodNullable || s instanceof z.ZodOptional) return keysOf(s.unwrap?.());
+      if (s instanceof z.ZodArray) return keysOf(s.element);
+      return [];
+    };
+    for (const [name, spec] of Object.entries(contract)) {
+      for (const k of [...keysOf(spec.args), ...keysOf(spec.result)]) expect(k, name).not.toMatch(/path|^dir$|folder|file/i);
+    }
+    expect(keysOf(menuEvent)).toEqual(['command', 'handle']);
+    for (const name of ['openReview', 'saveReview', 'exportRecord', 'exportCsv', 'autosave'] as const) {
+      expect(contract[name].args.safeParse({ ...contract[name].args.safeParse({}).data, path: '/etc/passwd' }).success, name).toBe(false);
+    }
+  });
+  it('the HTTP harness refuses calls without its per-run token (harness.test.ts asserts the 401s)', () => {
+    const harness = readFileSync('tests/harness/server.ts', 'utf8');
+    expect(harness).toMatch(/randomBytes\(32\)/);
+    expect(harness).toMatch(/401/);
   });
   it('10: no enableBlinkFeatures; 15: no shell.openExternal', () => {
     expect(mainSources).not.toMatch(/enableBlinkFeatures/);

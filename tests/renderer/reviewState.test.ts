@@ -6,7 +6,7 @@ import { docReducer, draftPower, draftText, draftTorque, initialDocState, type D
 import { newReviewDraft } from '../../renderer/state/templates';
 
 const demo = () => structuredClone(DEMO_REVIEWS['harrow-creek-crusher-hs-pair.flankfilm.json']) as Draft;
-const loaded = () => docReducer(initialDocState, { type: 'load', draft: demo(), path: null });
+const loaded = () => docReducer(initialDocState, { type: 'load', draft: demo(), handle: null });
 
 describe('paths', () => {
   it('setIn copies along the path and shares the rest', () => {
@@ -72,10 +72,11 @@ describe('docReducer', () => {
     s = docReducer(s, { type: 'toggleComponent', component: 'backstop', on: false });
     expect(getIn(s.draft, ['gearPair', 'components'])).toEqual(['clutch']);
   });
-  it('saved clears dirty and keeps the path; load resets', () => {
-    const s = docReducer(docReducer(loaded(), { type: 'set', path: ['title'], value: 'T' }), { type: 'saved', path: '/x.flankfilm.json' });
+  it('saved clears dirty and keeps the handle and name; load resets', () => {
+    const s = docReducer(docReducer(loaded(), { type: 'set', path: ['title'], value: 'T' }), { type: 'saved', handle: 'doc-00000000-0000-4000-8000-000000000000', name: 'x.flankfilm.json' });
     expect(s.dirty).toBe(false);
-    expect(s.path).toBe('/x.flankfilm.json');
+    expect(s.handle).toBe('doc-00000000-0000-4000-8000-000000000000');
+    expect(s.name).toBe('x.flankfilm.json');
   });
   it('the new review and the text written are valid review files', () => {
     expect(parseReviewValue(newReviewDraft()).ok).toBe(true);

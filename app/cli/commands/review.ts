@@ -8,6 +8,7 @@ import { summaryText } from '../summary';
 import { status } from '../../review/status';
 import { operatingMaps, operatingMapsCsv } from '../../review/operatingMaps';
 import { atomicWrite } from '../../files/atomicWrite';
+import { pathClash } from '../../files/sameFile';
 
 /** `flankfilm review FILE [--json] [--pdf OUT] [--csv OUT] [--map OUT.csv] [--p12 ID.p12] [--paper a4|letter]` */
 export async function reviewCommand(args: string[], io: CliIo): Promise<number> {
@@ -28,6 +29,10 @@ export async function reviewCommand(args: string[], io: CliIo): Promise<number> 
   if (paper !== 'a4' && paper !== 'letter') throw new UsageError('--paper is a4 or letter');
   if (values.p12 && !values.pdf) throw new UsageError('--p12 signs the record: give --pdf OUT too');
   const file = positionals[0] as string;
+  // An output that resolves (through links, symbolic or hard) to an input or to another output is refused before anything runs.
+  const outputs = (['pdf', 'csv', 'map'] as const).filter((k) => values[k] !== undefined).map((k) => [`--${k}`, values[k] as string] as const);
+  const clash = await pathClash([['the review', file], ...(values.p12 ? [['--p12', values.p12] as const] : [])], outputs);
+  if (clash) throw new UsageError(clash);
   const loaded = await loadReviewFile(file);
   if (!loaded.ok) {
     io.err(`${loaded.message}\n`);

@@ -1,6 +1,6 @@
 import { parseArgs } from 'node:util';
 import { EngineInputError } from '../../engine/diagnostics';
-import { atomicWrite } from '../../files/atomicWrite';
+import { atomicWrite, WriteRefused } from '../../files/atomicWrite';
 import { formatIssues, parseReviewText } from '../../review/parse';
 import { run } from '../../review/run';
 import { DECISIONS, REVIEW_VERSION, type Decision } from '../../review/schema';
@@ -77,7 +77,8 @@ export async function signCommand(args: string[], io: CliIo): Promise<number> {
   try {
     await atomicWrite(file, text);
   } catch (e) {
-    io.err(`${file}: cannot write (${(e as NodeJS.ErrnoException).code ?? (e as Error).message}); the file was not changed.\n`);
+    const why = e instanceof WriteRefused ? e.reason : ((e as NodeJS.ErrnoException).code ?? (e as Error).message);
+    io.err(`${file}: cannot write (${why}); the file was not changed.\n`);
     return EXIT.invalid;
   }
   if (previous) io.out(`replaced the sign-off by ${previous.reviewer} of ${previous.signedAt}\n`);

@@ -1,16 +1,22 @@
-import { readFile } from 'node:fs/promises';
 import { parseArgs } from 'node:util';
 import { EngineInputError } from '../../engine/diagnostics';
+import { ENGINE_VERSION } from '../../engine/version';
+import { readRegularFile } from '../../files/readRegular';
 import { differingParts, fingerprintParts, type FingerprintPart } from '../../review/fingerprint';
 import { formatIssues, parseReviewText } from '../../review/parse';
 import type { Results } from '../../review/results';
 import { run } from '../../review/run';
 import type { Review } from '../../review/schema';
 import { status } from '../../review/status';
-import { readRecord, RecordReadError } from '../../report/pdfRead';
+import { PdfFile, readRecord, RecordReadError, type RecordContents } from '../../report/pdfRead';
+import { checkSignature, signatureDicts, type SignatureCheck, type SignatureDict } from '../../report/pdfSignature';
+import { compareRecord, paperOf, rebuildRecord, type RecordPart } from '../../report/rebuild';
 import { INFO_KEYS } from '../../report/record';
 import { EXIT, UsageError, type CliIo } from '../io';
 import { loadReviewFile } from '../reviewFile';
+
+/** A record is a few hundred kB; the largest review the schema accepts makes a few MB. */
+export const MAX_RECORD_BYTES = 32_000_000;
 
 const PART_WORDS: Readonly<Record<FingerprintPart, string>> = {
   inputs: 'inputs (the review)',
@@ -18,26 +24,44 @@ const PART_WORDS: Readonly<Record<FingerprintPart, string>> = {
   engine: 'engine version',
 };
 
+const RECORD_WORDS: Readonly<Record<RecordPart, string>> = {
+  pages: 'pages (the rebuilt pages are not these)',
+  attachment: 'attachment (the embedded review file)',
+  'document information': 'document information',
+  signature: 'signature',
+  'document structure': 'document structure (cross-reference, catalogue or trailer)',
+  'appended data': 'appended data (bytes added after the record was made: an incremental update)',
+};
+
 /**
- * `flankfilm verify PDF [--review FILE]`: recompute the review (the one attached to the record,
- * or FILE) and compare its fingerprint with the one the record carries. Exit 0 match, 3 mismatch
- * (naming the part that differs: inputs, results or engine version), 1 unreadable or invalid.
+ * `flankfilm verify PDF [--review FILE]`: check a record as a whole.
+ *  - Rebuild the record from the review it carries (or FILE) with this engine and compare it byte
+ *    for byte; for a PKCS#7-signed record everything but the signature's /Contents.
+ *  - Check the PKCS#7 signature, if present: /ByteRange, message digest, signature against the
+ *    embedded certificate; report the signer.
+ *  - Compare the fingerprint's part hashes with the review, to say which part differs.
+ * Exit 0 match; 3 mismatch (naming what differs); 4 "partial": made by another engine version,
+ * so the pages cannot be rebuilt — the review against the fingerprint and the signature were
+ * checked, the pages were not; 1 not a readable record or an invalid review.
  */
 export async function verifyCommand(args: string[], io: CliIo): Promise<number> {
   const { values, positionals } = parseArgs({ args, allowPositionals: true, options: { review: { type: 'string' } } });
   if (positionals.length !== 1) throw new UsageError('give exactly one record PDF');
   const pdfPath = positionals[0] as string;
 
-  let bytes: Uint8Array;
-  try {
-    bytes = await readFile(pdfPath);
-  } catch (e) {
-    io.err(`${pdfPath}: cannot read the file (${(e as NodeJS.ErrnoException).code ?? 'unreadable'})\n`);
+  const read = await readRegularFile(pdfPath, MAX_RECORD_BYTES);
+  if (!read.ok) {
+    io.err(`${pdfPath}: ${read.reason}\n`);
     return EXIT.invalid;
   }
-  let contents;
+  const bytes = read.bytes;
+  let contents: RecordContents;
+  let pdf: PdfFile;
+  let sigs: SignatureDict[];
   try {
+    pdf = new PdfFile(bytes);
     contents = readRecord(bytes);
+    sigs = signatureDicts(pdf);
   } catch (e) {
     if (e instanceof RecordReadError) {
       io.err(`${pdfPath}: not a readable Flankfilm record: ${e.message}\n`);
@@ -58,31 +82,12 @@ export async function verifyCommand(args: string[], io: CliIo): Promise<number> 
     return EXIT.invalid;
   }
 
-  let review: Review;
-  let source: string;
-  if (values.review) {
-    const loaded = await loadReviewFile(values.review);
-    if (!loaded.ok) {
-      io.err(`${loaded.message}\n`);
-      return EXIT.invalid;
-    }
-    review = loaded.review;
-    source = values.review;
-  } else {
-    const att = contents.attachments.find((a) => a.name.endsWith('.flankfilm.json')) ?? contents.attachments[0];
-    if (!att) {
-      io.err(`${pdfPath}: the record has no attached review; give --review FILE\n`);
-      return EXIT.invalid;
-    }
-    const parsed = parseReviewText(new TextDecoder('utf-8', { fatal: false }).decode(att.data));
-    if (!parsed.ok) {
-      io.err(`${pdfPath}: the attached review (${att.name}) is not valid:\n${formatIssues(parsed.issues)}\n`);
-      return EXIT.invalid;
-    }
-    review = parsed.review;
-    source = `the attached review (${att.name})`;
+  const loaded = await reviewToCheck(pdfPath, contents, values.review);
+  if (!loaded.ok) {
+    io.err(`${loaded.message}\n`);
+    return EXIT.invalid;
   }
-
+  const { review, source } = loaded;
   let results: Results;
   try {
     results = run(review);
@@ -93,17 +98,92 @@ export async function verifyCommand(args: string[], io: CliIo): Promise<number> 
     }
     throw e;
   }
-  const now = fingerprintParts(review, results);
-  const differ = differingParts({ inputs: stored.inputs!, results: stored.results!, engine: stored.engine! }, now);
-  if (differ.length === 0 && now.combined === stored.combined) {
-    io.out(`match: ${pdfPath} agrees with ${source}\nfingerprint ${now.combined}\nstate: ${status(review, results)}\n`);
-    return EXIT.ok;
+
+  const lines: string[] = [];
+  let mismatch = false;
+  const differ = (what: string): void => {
+    mismatch = true;
+    lines.push(`  differs: ${what}`);
+  };
+
+  // The signature (a record carries at most one).
+  let sig: SignatureCheck | null = null;
+  if (sigs.length > 1) differ(`signature (the record carries ${sigs.length} signatures; Flankfilm writes one)`);
+  else if (sigs[0]) {
+    sig = checkSignature(bytes, sigs[0]);
+    for (const p of sig.problems) differ(`signature: ${p}`);
   }
-  const lines = [`mismatch: ${pdfPath} does not agree with ${source}`];
-  for (const p of differ) lines.push(`  differs: ${PART_WORDS[p]}`);
-  if (differ.includes('engine')) lines.push(`  the record was made by Flankfilm ${stored.engineVersion ?? '(unknown)'}; this is Flankfilm ${now.engineVersion}`);
-  if (differ.length === 0) lines.push('  differs: the combined fingerprint (the part hashes agree: the record’s metadata was altered)');
-  lines.push(`  record fingerprint     ${stored.combined}`, `  recomputed fingerprint ${now.combined}`);
-  io.out(`${lines.join('\n')}\n`);
-  return EXIT.mismatch;
+
+  const otherEngine = stored.engineVersion !== undefined && stored.engineVersion !== ENGINE_VERSION;
+  const now = fingerprintParts(review, results, otherEngine ? stored.engineVersion : ENGINE_VERSION);
+  if (otherEngine) {
+    // Another engine's pages cannot be rebuilt here, and its results need not be this engine's:
+    // only the review against the fingerprint's inputs hash (and the signature) can be checked.
+    if (now.inputs !== stored.inputs) differ(PART_WORDS.inputs);
+    if (now.engine !== stored.engine) differ('document information (the engine hash does not belong to the engine version it names)');
+    if (mismatch) return report(io, 'mismatch', pdfPath, source, lines, sig, stored.combined!, now.combined, EXIT.mismatch);
+    lines.push(
+      `  the record was made by Flankfilm ${stored.engineVersion}; this is Flankfilm ${ENGINE_VERSION}, so its pages cannot be rebuilt`,
+      '  checked: the review against the fingerprint’s inputs hash' + (sig ? ', and the PKCS#7 signature' : ''),
+      '  NOT checked: the pages, the results summary; verify with Flankfilm ' + stored.engineVersion + ' to check them',
+    );
+    return report(io, 'partial', pdfPath, source, lines, sig, stored.combined!, null, EXIT.partial);
+  }
+
+  const parts = differingParts({ inputs: stored.inputs!, results: stored.results!, engine: stored.engine! }, now);
+  for (const p of parts) differ(PART_WORDS[p]);
+  if (parts.length === 0 && now.combined !== stored.combined) differ('document information (the combined fingerprint does not belong to its part hashes)');
+
+  let rebuilt;
+  try {
+    rebuilt = await rebuildRecord(review, results, { paper: paperOf(pdf), signature: sigs.length === 1 ? sigs[0]! : null });
+  } catch (e) {
+    if (e instanceof RecordReadError) {
+      io.err(`${pdfPath}: not a readable Flankfilm record: ${e.message}\n`);
+      return EXIT.invalid;
+    }
+    throw e;
+  }
+  const cmp = compareRecord(bytes, rebuilt, sigs.length === 1 ? sigs[0]! : null);
+  for (const p of cmp.differs) {
+    if (p === 'signature' && sig && !sig.ok) continue; // already named, with the reason
+    if (p === 'appended data' && sig?.appended) continue;
+    differ(RECORD_WORDS[p]);
+  }
+  if (mismatch) {
+    if (parts.includes('engine')) lines.push(`  the record names Flankfilm ${stored.engineVersion ?? '(unknown)'}; this is Flankfilm ${now.engineVersion}`);
+    return report(io, 'mismatch', pdfPath, source, lines, sig, stored.combined!, now.combined, EXIT.mismatch);
+  }
+  lines.push(`  pages, attachment and document information: rebuilt byte for byte by Flankfilm ${ENGINE_VERSION}${sig ? ' (all but the signature itself)' : ''}`);
+  lines.push(`fingerprint ${now.combined}`, `state: ${status(review, results)}`);
+  return report(io, 'match', pdfPath, source, lines, sig, stored.combined!, now.combined, EXIT.ok);
+}
+
+function report(io: CliIo, word: 'match' | 'mismatch' | 'partial', pdfPath: string, source: string, lines: string[], sig: SignatureCheck | null, stored: string, now: string | null, code: number): number {
+  const head =
+    word === 'match' ? `match: ${pdfPath} agrees with ${source}` : word === 'partial' ? `partial: ${pdfPath} was only partly checked against ${source}` : `mismatch: ${pdfPath} does not agree with ${source}`;
+  const out = [head];
+  if (sig) out.push(sig.ok ? `  signature: valid, signed by ${sig.subject ?? '(no subject)'} (the certificate is not checked against any authority)` : `  signature: NOT valid${sig.subject ? `; it names ${sig.subject}` : ''}`);
+  else out.push('  signature: none (an unsigned record)');
+  out.push(...lines);
+  if (word !== 'match') {
+    out.push(`  record fingerprint     ${stored}`);
+    if (now) out.push(`  recomputed fingerprint ${now}`);
+  }
+  io.out(`${out.join('\n')}\n`);
+  return code;
+}
+
+async function reviewToCheck(pdfPath: string, contents: RecordContents, reviewPath: string | undefined): Promise<{ ok: true; review: Review; source: string } | { ok: false; message: string }> {
+  if (reviewPath) {
+    const loaded = await loadReviewFile(reviewPath);
+    return loaded.ok ? { ok: true, review: loaded.review, source: reviewPath } : { ok: false, message: loaded.message };
+  }
+  const att = contents.attachments.find((a) => a.name.endsWith('.flankfilm.json')) ?? contents.attachments[0];
+  if (!att) return { ok: false, message: `${pdfPath}: the record has no attached review; give --review FILE` };
+  const parsed = parseReviewText(new TextDecoder('utf-8', { fatal: false }).decode(att.data));
+  // The attachment's name is the forger's text too: print only safe characters of it.
+  const name = att.name.replace(/[^\p{L}\p{N}._ -]/gu, '?').slice(0, 80);
+  if (!parsed.ok) return { ok: false, message: `${pdfPath}: the attached review (${name}) is not valid:\n${formatIssues(parsed.issues)}` };
+  return { ok: true, review: parsed.review, source: `the attached review (${name})` };
 }

@@ -7,6 +7,7 @@ import type { Results } from '../../review/results';
 import { run } from '../../review/run';
 import type { Review } from '../../review/schema';
 import { status } from '../../review/status';
+import { checkSignedState, NO_AUDIT_WORDS } from '../../review/audit/signedState';
 import { readRecord, RecordReadError } from '../../report/pdfRead';
 import { INFO_KEYS } from '../../report/record';
 import { EXIT, UsageError, type CliIo } from '../io';
@@ -94,16 +95,18 @@ export async function verifyCommand(args: string[], io: CliIo): Promise<number> 
     throw e;
   }
   const now = fingerprintParts(review, results);
+  // The signed inputs a sign-off keeps must reproduce its fingerprint; if not, they were altered.
+  const altered = checkSignedState(review).kind === 'altered' ? [`  signed state: ${NO_AUDIT_WORDS.altered}`] : [];
   const differ = differingParts({ inputs: stored.inputs!, results: stored.results!, engine: stored.engine! }, now);
   if (differ.length === 0 && now.combined === stored.combined) {
-    io.out(`match: ${pdfPath} agrees with ${source}\nfingerprint ${now.combined}\nstate: ${status(review, results)}\n`);
+    io.out(`${[`match: ${pdfPath} agrees with ${source}`, `fingerprint ${now.combined}`, `state: ${status(review, results)}`, ...altered].join('\n')}\n`);
     return EXIT.ok;
   }
   const lines = [`mismatch: ${pdfPath} does not agree with ${source}`];
   for (const p of differ) lines.push(`  differs: ${PART_WORDS[p]}`);
   if (differ.includes('engine')) lines.push(`  the record was made by Flankfilm ${stored.engineVersion ?? '(unknown)'}; this is Flankfilm ${now.engineVersion}`);
   if (differ.length === 0) lines.push('  differs: the combined fingerprint (the part hashes agree: the record’s metadata was altered)');
-  lines.push(`  record fingerprint     ${stored.combined}`, `  recomputed fingerprint ${now.combined}`);
+  lines.push(...altered, `  record fingerprint     ${stored.combined}`, `  recomputed fingerprint ${now.combined}`);
   io.out(`${lines.join('\n')}\n`);
   return EXIT.mismatch;
 }

@@ -215,3 +215,34 @@ describe('revision history', () => {
     expect(status(r, run(r))).toBe('signed');
   }, 60_000);
 });
+
+describe('undo this change', () => {
+  it('undoing every change, one at a time, returns the review to Signed', async () => {
+    const { setIn } = await import('../../renderer/state/paths');
+    const { undoEdit } = await import('../../app/review/audit/undo');
+    const s = signedDemo();
+    let draft: any = JSON.parse(JSON.stringify(edited(s, (j) => {
+      j.oils[0].kv40_mm2s = 240;
+      delete j.oils[0].viscosityIndex;
+      j.loadCases.splice(1, 0, { ...j.loadCases[0], name: 'Overload trip (invented)' });
+      j.loadCases.reverse();
+      j.oils.splice(1, 1);
+      j.gearPair.components = ['backstop', 'clutch'];
+      j.policy.temperatureRange_C = [25, 70];
+    })));
+    const signedState = s.signoff!.signedState!;
+    const kinds = new Set<string>();
+    for (let step = 0; step < 20; step++) {
+      const p = parseReviewValue(draft);
+      if (!p.ok) throw new Error(JSON.stringify(p.issues));
+      const changes = diffInputs(signedState, inputsOf(p.review));
+      if (changes.length === 0) break;
+      changes.forEach((c) => kinds.add(c.kind));
+      const u = undoEdit(draft, signedState, changes[changes.length - 1]!);
+      draft = setIn(draft, u.path, u.value);
+    }
+    expect([...kinds].sort()).toEqual(['added', 'changed', 'removed', 'reordered']);
+    const back = parseReviewValue(draft);
+    expect(back.ok && status(back.review, run(back.review))).toBe('signed');
+  });
+});

@@ -8,6 +8,7 @@
 import { ENGINE_VERSION } from '../../engine/version';
 import { canonicalJson } from '../canonicalJson';
 import { fingerprint } from '../fingerprint';
+import type { Results } from '../results';
 import { run } from '../run';
 import { REVIEW_FORMAT, REVIEW_VERSION, type Review, type SignedState, type Signoff } from '../schema';
 
@@ -29,10 +30,11 @@ export type SignedStateCheck =
   /** The signed state (or the sign-off) no longer gives the signed fingerprint. */
   | { readonly kind: 'altered' }
   /**
-   * The signed state. `confirmed` is false when it was signed by another engine version: its
-   * fingerprint cannot be recomputed here, so the state is shown but not vouched for.
+   * The signed state, and its results by this engine. `confirmed` is false when it was signed by
+   * another engine version: its fingerprint cannot be recomputed here, so the state is shown but
+   * not vouched for.
    */
-  | { readonly kind: 'kept'; readonly signed: Review; readonly confirmed: boolean };
+  | { readonly kind: 'kept'; readonly signed: Review; readonly confirmed: boolean; readonly results: Results | null };
 
 /** Check the signed state a review keeps against its sign-off's fingerprint. */
 export function checkSignedState(review: Review): SignedStateCheck {
@@ -40,15 +42,16 @@ export function checkSignedState(review: Review): SignedStateCheck {
   if (!so) return { kind: 'draft' };
   if (!so.signedState) return { kind: 'not-kept' };
   const signed = reviewAsSigned(so.signedState, so);
-  if (so.engineVersion !== ENGINE_VERSION) return { kind: 'kept', signed, confirmed: false };
-  let now: string;
+  let results: Results;
   try {
-    now = fingerprint(signed, run(signed));
+    results = run(signed);
   } catch {
-    // Inputs that the engine refuses were not what was signed: signing computes them first.
-    return { kind: 'altered' };
+    // Inputs that the engine refuses were not what was signed (signing computes them first),
+    // unless another engine signed them.
+    return so.engineVersion === ENGINE_VERSION ? { kind: 'altered' } : { kind: 'kept', signed, confirmed: false, results: null };
   }
-  return now === so.fingerprint ? { kind: 'kept', signed, confirmed: true } : { kind: 'altered' };
+  if (so.engineVersion !== ENGINE_VERSION) return { kind: 'kept', signed, confirmed: false, results };
+  return fingerprint(signed, results) === so.fingerprint ? { kind: 'kept', signed, confirmed: true, results } : { kind: 'altered' };
 }
 
 /** Whether two sets of inputs are the same to the fingerprint. */

@@ -11,6 +11,8 @@ import { MapPanel } from './components/panels/MapPanel';
 import { MeshPanel } from './components/mesh/MeshPanel';
 import { SignoffPanel } from './components/signoff/SignoffPanel';
 import { SignoffDialog } from './components/signoff/SignoffDialog';
+import { ChangesSinceSigning } from './components/signoff/ChangesSinceSigning';
+import { CompareWith } from './components/signoff/CompareWith';
 import { TopBar } from './components/TopBar';
 import { RecoveryPrompt } from './components/RecoveryPrompt';
 import { InfoDialog } from './components/InfoDialog';
@@ -103,6 +105,11 @@ export function App({ bridge }: { readonly bridge: Bridge }) {
     void bridge.discardAutosave({}).finally(() => void actions.openDemo());
   }, [bridge, actions]);
 
+  const pickOther = useCallback(async () => {
+    const r = await bridge.openReview({});
+    return r.canceled ? null : r.text;
+  }, [bridge]);
+
   const results = computed.results;
   const stale = Boolean(results) && (!review || computed.error !== null);
   const title = typeof doc.draft?.title === 'string' ? doc.draft.title : 'Flankfilm';
@@ -142,7 +149,10 @@ export function App({ bridge }: { readonly bridge: Bridge }) {
               <SideBySidePanel results={results} units={units} />
               <MeshPanel results={results} limits={limits} units={units} />
               <MapPanel review={review} edition={doc.edition} results={results} units={units} />
-              <SignoffPanel status={status} signoff={review?.signoff} canSign={review !== null} onOpen={() => setSigning(true)} />
+              <SignoffPanel status={status} signoff={review?.signoff} canSign={review !== null} onOpen={() => setSigning(true)}>
+                <ChangesSinceSigning review={review} results={results ?? null} status={status} units={units} />
+                <CompareWith review={review} units={units} pickOther={pickOther} />
+              </SignoffPanel>
             </div>
           </main>
           <SignoffDialog

@@ -94,6 +94,12 @@ describe('flankfilm diff REVIEW (against its own signed state)', () => {
     const r = await cli('diff', f);
     expect(r.code, r.err).toBe(0);
     expect(r.out).toContain('no field-level audit is possible');
+    // Such a file still verifies against its record.
+    const pdf = join(dir, 'old.pdf');
+    expect((await cli('review', f, '--pdf', pdf)).code).toBe(0);
+    const v = await cli('verify', pdf, '--review', f);
+    expect(v.code, v.out).toBe(0);
+    expect(v.out).toContain('state: signed');
     writeFileSync(f, JSON.stringify({ ...j, title: 'Edited', signoff: so }));
     const e = await cli('diff', f, '--json');
     expect(e.code).toBe(3);

@@ -39,6 +39,7 @@ export function App({ bridge }: { readonly bridge: Bridge }) {
   const computed = useRecompute(review, doc.edition);
   const [units, setUnits] = useState<UnitSystem>('si');
   const [signing, setSigning] = useState(false);
+  const [compareRequest, setCompareRequest] = useState(0);
   const [recovery, setRecovery] = useState<Recovery | null>(null);
   const [info, setInfo] = useState<{ title: string; lines: string[] } | null>(null);
   const actions = useDocumentActions({ bridge, doc, review, dispatch, setUnits });
@@ -83,6 +84,7 @@ export function App({ bridge }: { readonly bridge: Bridge }) {
       'export-record': () => void actions.exportRecord(units === 'us' ? 'letter' : 'a4'),
       'export-csv': () => void actions.exportCsv(),
       sign: () => setSigning(true),
+      compare: () => setCompareRequest((n) => n + 1),
       methods: () => setInfo({ title: 'Methods and sources', lines: [...(computed.results?.assumptions ?? []), ...METHODS.map(methodLine)] }),
       about: () =>
         void bridge.appInfo({}).then((a) => setInfo({ title: 'About Flankfilm', lines: [`Flankfilm ${a.version}`, `Engine ${a.engineVersion}`, `Platform ${a.platform}`] })),
@@ -151,7 +153,7 @@ export function App({ bridge }: { readonly bridge: Bridge }) {
               <MapPanel review={review} edition={doc.edition} results={results} units={units} />
               <SignoffPanel status={status} signoff={review?.signoff} canSign={review !== null} onOpen={() => setSigning(true)}>
                 <ChangesSinceSigning review={review} results={results ?? null} status={status} units={units} />
-                <CompareWith review={review} units={units} pickOther={pickOther} />
+                <CompareWith review={review} units={units} pickOther={pickOther} request={compareRequest} />
               </SignoffPanel>
             </div>
           </main>

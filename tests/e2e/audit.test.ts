@@ -75,6 +75,11 @@ describe('changes since signing, on the Sign-off panel', () => {
     // The review on screen is not replaced by the compared file.
     await expect(status(page)).resolves.toBe('signed');
     await shootPanel(page, 'sign-off', 'sign-off-compare');
+    // The same from the menu's File → Compare with….
+    await page.getByRole('button', { name: 'Close the comparison' }).click();
+    await expect.poll(() => items(page, 'compare-list').count()).toBe(0);
+    harness.sendMenu({ command: 'compare' });
+    await expect.poll(() => items(page, 'compare-list').count(), { timeout: WAIT }).toBe(1);
     expect(s.pageErrors).toEqual([]);
   });
 

@@ -1,4 +1,4 @@
-import { useMemo, useState } from 'react';
+import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
 import { diffInputs } from '../../../app/review/audit/diff';
 import { inputsOf } from '../../../app/review/audit/signedState';
 import { formatIssues, parseReviewText } from '../../../app/review/parse';
@@ -11,17 +11,19 @@ interface Props {
   readonly units: UnitSystem;
   /** Let the user pick another review file; its text, or null if cancelled. */
   readonly pickOther: () => Promise<string | null>;
+  /** Bumped by the menu's "Compare with…": pick a file as the button does. */
+  readonly request: number;
 }
 
 type Other = { readonly review: Review } | { readonly error: string };
 
 /** "Compare with…": open another revision and list what changed from it to the review on screen. */
-export function CompareWith({ review, units, pickOther }: Props) {
+export function CompareWith({ review, units, pickOther, request }: Props) {
   const [other, setOther] = useState<Other | null>(null);
   const [busy, setBusy] = useState(false);
   const changes = useMemo(() => (other && 'review' in other && review ? diffInputs(inputsOf(other.review), inputsOf(review)) : null), [other, review]);
 
-  const pick = async () => {
+  const pick = useCallback(async () => {
     setBusy(true);
     try {
       const text = await pickOther();
@@ -33,7 +35,14 @@ export function CompareWith({ review, units, pickOther }: Props) {
     } finally {
       setBusy(false);
     }
-  };
+  }, [pickOther]);
+  const seen = useRef(request);
+  useEffect(() => {
+    if (request === seen.current) return;
+    seen.current = request;
+    void pick();
+    document.getElementById('sign-off')?.scrollIntoView({ block: 'start' });
+  }, [request, pick]);
 
   return (
     <div className="compare" data-testid="compare">

@@ -246,3 +246,27 @@ describe('undo this change', () => {
     expect(back.ok && status(back.review, run(back.review))).toBe('signed');
   });
 });
+
+describe('the results that move with each change alone', () => {
+  it('each change applied alone to the signed inputs is exactly that change; a single change moves what all move', async () => {
+    const { applyAlone } = await import('../../app/review/audit/attribute');
+    const s = signedDemo();
+    const e = edited(s, (j) => {
+      j.oils[0].kv40_mm2s = 240;
+      j.loadCases.splice(1, 0, { ...j.loadCases[0], name: 'Overload trip (invented)' });
+      j.loadCases[3].oilTemperature_C = 35; // "Cold start", now the fourth
+      j.oils.reverse();
+    });
+    const c = compareReviews(s, e);
+    expect(c.changes.map((x) => x.kind).sort()).toEqual(['added', 'changed', 'changed', 'reordered']);
+    for (const change of c.changes) {
+      const p = parseReviewValue({ format: 'flankfilm.review', version: 1, ...(applyAlone(inputsOf(s), inputsOf(e), change) as object) });
+      expect(p.ok).toBe(true);
+      if (!p.ok) continue;
+      const alone = diffInputs(inputsOf(s), inputsOf(p.review));
+      expect(alone.map((x) => [x.kind, x.label]), change.label).toEqual([[change.kind, change.label]]);
+    }
+    const one = compareReviews(s, edited(s, (j) => (j.loadCases[1].oilTemperature_C = 75)));
+    expect(one.perChange?.[0]).toEqual({ moves: one.moved?.moves });
+  });
+});

@@ -57,22 +57,36 @@ const figure = (q: ResultMove['quantity'], v: ResultMove['before']): string => {
 };
 
 /** The readable list: changes by panel, then the results that moved with them. */
+/** Moved figures grouped by load case and oil, one line each. */
+function movedLines(moves: readonly ResultMove[], indent: string): string[] {
+  const byCase = new Map<string, ResultMove[]>();
+  for (const m of moves) {
+    const where = m.loadCase === null ? `Overall, ${m.oil ?? ''}` : `${m.loadCase}${m.oil ? ` — ${m.oil}` : ''}`;
+    byCase.set(where, [...(byCase.get(where) ?? []), m]);
+  }
+  return [...byCase].map(([where, ms]) => `${indent}${where}: ${ms.map((m) => `${QUANTITY_SYMBOLS[m.quantity]} ${figure(m.quantity, m.before)} → ${figure(m.quantity, m.after)}`).join('; ')}`);
+}
+
+const ALONE_WORDS = { invalid: 'valid only together with another change', 'not-computable': 'cannot be computed on its own' } as const;
+
 function comparisonText(c: Comparison, units: NumberWords): string[] {
   const lines: string[] = [];
   for (const panel of INPUT_PANELS) {
-    const here = c.changes.filter((x) => x.panel === panel);
+    const here = c.changes.map((x, i) => [x, c.perChange?.[i]] as const).filter(([x]) => x.panel === panel);
     if (!here.length) continue;
-    lines.push('', panel, ...here.map((x) => `  ${changeLine(x, units)}`));
+    lines.push('', panel);
+    for (const [x, alone] of here) {
+      lines.push(`  ${changeLine(x, units)}`);
+      if (!alone || c.changes.length === 1) continue; // a single change: its results are those below
+      if ('alone' in alone) lines.push(`      on its own: ${ALONE_WORDS[alone.alone]}`);
+      else if (alone.moves.length === 0) lines.push('      on its own: no result moves');
+      else lines.push('      on its own, moves:', ...movedLines(alone.moves, '        '));
+    }
   }
   if (c.resultsError) lines.push('', `Results: ${c.resultsError}`);
   if (c.moved) {
-    lines.push('', c.moved.moves.length ? 'Results that moved' : 'No result moved (verdicts, SB, SintS and λmin as before).');
-    const byCase = new Map<string, ResultMove[]>();
-    for (const m of c.moved.moves) {
-      const where = m.loadCase === null ? `Overall, ${m.oil ?? ''}` : `${m.loadCase}${m.oil ? ` — ${m.oil}` : ''}`;
-      byCase.set(where, [...(byCase.get(where) ?? []), m]);
-    }
-    for (const [where, ms] of byCase) lines.push(`  ${where}: ${ms.map((m) => `${QUANTITY_SYMBOLS[m.quantity]} ${figure(m.quantity, m.before)} → ${figure(m.quantity, m.after)}`).join('; ')}`);
+    lines.push('', c.moved.moves.length ? `Results that moved${c.changes.length > 1 ? ' (all changes together)' : ''}` : 'No result moved (verdicts, SB, SintS and λmin as before).');
+    lines.push(...movedLines(c.moved.moves, '  '));
     lines.push('', c.moved.verdictChanged ? 'The verdict changed.' : 'The verdict did not change.');
   }
   lines.push('', `${c.changes.length} ${c.changes.length === 1 ? 'change' : 'changes'}.`);

@@ -9,6 +9,7 @@ import { run } from '../run';
 import type { Review } from '../schema';
 import { diffInputs, type InputChange } from './diff';
 import { resultsMoved, type MovedResults } from './resultsMoved';
+import { attributeChanges, type Attribution } from './attribute';
 import { checkSignedState, inputsOf, type SignedStateCheck } from './signedState';
 
 export interface Comparison {
@@ -17,6 +18,8 @@ export interface Comparison {
   readonly moved: MovedResults | null;
   /** Which side the engine refused, and why, in words. */
   readonly resultsError: string | null;
+  /** Per change (same order), the results that move with it alone; null beyond MAX_ATTRIBUTED_CHANGES or without results. */
+  readonly perChange: Attribution[] | null;
 }
 
 function compute(review: Review, side: string): Results | string {
@@ -31,11 +34,11 @@ function compute(review: Review, side: string): Results | string {
 /** What changed from `before` to `after`. `changes` is empty exactly when the inputs are the same. */
 export function compareReviews(before: Review, after: Review): Comparison {
   const changes = diffInputs(inputsOf(before), inputsOf(after));
-  if (changes.length === 0) return { changes, moved: { moves: [], verdictChanged: false }, resultsError: null };
+  if (changes.length === 0) return { changes, moved: { moves: [], verdictChanged: false }, resultsError: null, perChange: [] };
   const b = compute(before, 'earlier');
   const a = compute(after, 'later');
-  if (typeof b === 'string' || typeof a === 'string') return { changes, moved: null, resultsError: [b, a].filter((x) => typeof x === 'string').join('; ') };
-  return { changes, moved: resultsMoved(b, a), resultsError: null };
+  if (typeof b === 'string' || typeof a === 'string') return { changes, moved: null, resultsError: [b, a].filter((x) => typeof x === 'string').join('; '), perChange: null };
+  return { changes, moved: resultsMoved(b, a), resultsError: null, perChange: attributeChanges(inputsOf(before), inputsOf(after), changes, b) };
 }
 
 export type SinceSigning = { readonly check: Exclude<SignedStateCheck, { kind: 'kept' }> } | { readonly check: Extract<SignedStateCheck, { kind: 'kept' }>; readonly comparison: Comparison };
@@ -50,7 +53,10 @@ export function changesSinceSigning(review: Review): SinceSigning {
 /** The `--json` shape: review paths, labels, values in file units; codes, not words. */
 export function comparisonJson(c: Comparison): Record<string, unknown> {
   return {
-    changes: c.changes.map((x) => ({ kind: x.kind, path: x.path, panel: x.panel, label: x.label, before: x.before ?? null, after: x.after ?? null })),
+    changes: c.changes.map((x, i) => {
+      const alone = c.perChange?.[i];
+      return { kind: x.kind, path: x.path, panel: x.panel, label: x.label, before: x.before ?? null, after: x.after ?? null, resultsMovedAlone: alone ? ('moves' in alone ? alone.moves : alone.alone) : null };
+    }),
     verdictChanged: c.moved ? c.moved.verdictChanged : null,
     resultsChanged: c.moved ? c.moved.moves : null,
     ...(c.resultsError ? { resultsError: c.resultsError } : {}),

@@ -44,6 +44,7 @@ export function menuTemplate(input: MenuInput): MenuItemConstructorOptions[] {
       cmd('Save as…', 'save-as', 'CmdOrCtrl+Shift+S'),
       { type: 'separator' },
       cmd('Sign off…', 'sign'),
+      cmd('Compare with…', 'compare'),
       cmd('Export record…', 'export-record', 'CmdOrCtrl+E'),
       cmd('Export CSV…', 'export-csv', 'CmdOrCtrl+Shift+E'),
       ...(mac ? [] : [{ type: 'separator' } as const, { label: 'Quit', accelerator: 'Ctrl+Q', click: input.quit }]),

@@ -11,6 +11,8 @@ import { MapPanel } from './components/panels/MapPanel';
 import { MeshPanel } from './components/mesh/MeshPanel';
 import { SignoffPanel } from './components/signoff/SignoffPanel';
 import { SignoffDialog } from './components/signoff/SignoffDialog';
+import { ChangesSinceSigning } from './components/signoff/ChangesSinceSigning';
+import { CompareWith } from './components/signoff/CompareWith';
 import { TopBar } from './components/TopBar';
 import { RecoveryPrompt } from './components/RecoveryPrompt';
 import { InfoDialog } from './components/InfoDialog';
@@ -37,6 +39,7 @@ export function App({ bridge }: { readonly bridge: Bridge }) {
   const computed = useRecompute(review, doc.edition);
   const [units, setUnits] = useState<UnitSystem>('si');
   const [signing, setSigning] = useState(false);
+  const [compareRequest, setCompareRequest] = useState(0);
   const [recovery, setRecovery] = useState<Recovery | null>(null);
   const [info, setInfo] = useState<{ title: string; lines: string[] } | null>(null);
   const actions = useDocumentActions({ bridge, doc, review, dispatch, setUnits });
@@ -81,6 +84,7 @@ export function App({ bridge }: { readonly bridge: Bridge }) {
       'export-record': () => void actions.exportRecord(units === 'us' ? 'letter' : 'a4'),
       'export-csv': () => void actions.exportCsv(),
       sign: () => setSigning(true),
+      compare: () => setCompareRequest((n) => n + 1),
       methods: () => setInfo({ title: 'Methods and sources', lines: [...(computed.results?.assumptions ?? []), ...METHODS.map(methodLine)] }),
       about: () =>
         void bridge.appInfo({}).then((a) => setInfo({ title: 'About Flankfilm', lines: [`Flankfilm ${a.version}`, `Engine ${a.engineVersion}`, `Platform ${a.platform}`] })),
@@ -102,6 +106,11 @@ export function App({ bridge }: { readonly bridge: Bridge }) {
     setRecovery(null);
     void bridge.discardAutosave({}).finally(() => void actions.openDemo());
   }, [bridge, actions]);
+
+  const pickOther = useCallback(async () => {
+    const r = await bridge.openReview({});
+    return r.canceled ? null : r.text;
+  }, [bridge]);
 
   const results = computed.results;
   const stale = Boolean(results) && (!review || computed.error !== null);
@@ -142,7 +151,10 @@ export function App({ bridge }: { readonly bridge: Bridge }) {
               <SideBySidePanel results={results} units={units} />
               <MeshPanel results={results} limits={limits} units={units} />
               <MapPanel review={review} edition={doc.edition} results={results} units={units} />
-              <SignoffPanel status={status} signoff={review?.signoff} canSign={review !== null} onOpen={() => setSigning(true)} />
+              <SignoffPanel status={status} signoff={review?.signoff} canSign={review !== null} onOpen={() => setSigning(true)}>
+                <ChangesSinceSigning review={review} results={results ?? null} status={status} units={units} />
+                <CompareWith review={review} units={units} pickOther={pickOther} request={compareRequest} />
+              </SignoffPanel>
             </div>
           </main>
           <SignoffDialog

@@ -13,6 +13,7 @@ export const USAGE = `usage:
   flankfilm sign FILE --reviewer NAME --role ROLE --decision approved|approved-with-conditions|not-approved
                  [--organisation ORG] [--conditions TEXT] [--signed-at ISO8601]
   flankfilm verify PDF [--review FILE]
+  flankfilm diff REVIEW [OTHER] [--json]   changes since signing, or from REVIEW to OTHER (exit 0 none, 3 some)
   flankfilm schema
   flankfilm demo [DIR]
 `;

@@ -1,7 +1,8 @@
 #!/usr/bin/env node
 /**
  * The `flankfilm` command. Exit codes: 0 success, 1 invalid input (a message names the field),
- * 2 usage error, 3 a record that does not match its review (verify), 4 a record of another engine version, checked only in part (verify).
+ * 2 usage error, 3 a record that does not match its review (verify) or reviews that differ (diff),
+ * 4 a record of another engine version, checked only in part (verify).
  */
 import { runCli } from './runCli';
 

@@ -3,6 +3,8 @@ import { REVIEW_VERSION } from './schema';
 /**
  * Bring an older review file up to the current version, one step at a time. Version 1 is the
  * first, so there is nothing to do yet; each future version adds one step here, never edits one.
+ * A step must bring the signed states a sign-off keeps (`signoff.signedState` and each
+ * `signoff.history[].signedState`) along with the inputs, or the audit would compare two versions.
  */
 const STEPS: Record<number, (r: Record<string, unknown>) => Record<string, unknown>> = {};
 

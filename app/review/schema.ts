@@ -140,20 +140,11 @@ export const policySchema = z
 
 export const DECISIONS = ['approved', 'approved-with-conditions', 'not-approved'] as const;
 
-export const signoffSchema = z.strictObject({
-  reviewer: line(200).min(1),
-  role: line(200).min(1),
-  organisation: line(200).optional(),
-  decision: z.enum(DECISIONS),
-  conditions: prose(4000).optional(),
-  signedAt: z.iso.datetime({ offset: true }),
-  engineVersion: line(50).min(1),
-  fingerprint: z.string().regex(/^[0-9a-f]{64}$/, { message: 'must be a SHA-256 hex digest' }),
-});
-
-export const reviewSchema = z.strictObject({
-  format: z.literal(REVIEW_FORMAT),
-  version: z.literal(REVIEW_VERSION),
+/**
+ * The inputs of a review: everything but its format, version and sign-off. The review is these
+ * plus those; a sign-off keeps a copy of them as signed (its `signedState`).
+ */
+const reviewBodyShape = {
   title: line(200).min(1),
   id: line(100).optional(),
   revision: z.number().int().gte(0).lte(100000).default(0),
@@ -165,6 +156,39 @@ export const reviewSchema = z.strictObject({
   loadCases: z.array(loadCaseSchema).min(1).max(20),
   oils: z.array(oilSchema).max(10),
   policy: policySchema.default(() => policySchema.parse({})),
+};
+
+/** The inputs as signed, defaults filled in (app/review/audit compares them with the file). */
+export const signedStateSchema = z.strictObject(reviewBodyShape);
+
+/** Earlier signings kept in a sign-off's history, newest last; older ones are dropped. */
+export const MAX_SIGNOFF_HISTORY = 10;
+
+const signoffShape = {
+  reviewer: line(200).min(1),
+  role: line(200).min(1),
+  organisation: line(200).optional(),
+  decision: z.enum(DECISIONS),
+  conditions: prose(4000).optional(),
+  signedAt: z.iso.datetime({ offset: true }),
+  engineVersion: line(50).min(1),
+  fingerprint: z.string().regex(/^[0-9a-f]{64}$/, { message: 'must be a SHA-256 hex digest' }),
+  /** The inputs this sign-off covers; absent in files signed before it was kept (no field-level audit). */
+  signedState: signedStateSchema.optional(),
+};
+
+/** An earlier signing of the same review, as it was when it was replaced. */
+export const earlierSignoffSchema = z.strictObject(signoffShape);
+
+export const signoffSchema = z.strictObject({
+  ...signoffShape,
+  history: z.array(earlierSignoffSchema).max(MAX_SIGNOFF_HISTORY).optional(),
+});
+
+export const reviewSchema = z.strictObject({
+  format: z.literal(REVIEW_FORMAT),
+  version: z.literal(REVIEW_VERSION),
+  ...reviewBodyShape,
   signoff: signoffSchema.optional(),
 });
 
@@ -177,5 +201,8 @@ export type Oil = z.output<typeof oilSchema>;
 export type LoadCase = z.output<typeof loadCaseSchema>;
 export type GearPair = z.output<typeof gearPairSchema>;
 export type Signoff = z.output<typeof signoffSchema>;
+export type EarlierSignoff = z.output<typeof earlierSignoffSchema>;
+/** The inputs of a review without format, version and sign-off (what a sign-off keeps as signed). */
+export type SignedState = z.output<typeof signedStateSchema>;
 export type FzgStage = z.output<typeof fzgStageSchema>;
 export type Decision = (typeof DECISIONS)[number];

@@ -31,6 +31,7 @@ describe('the native menu', () => {
       ['Export record…', 'CmdOrCtrl+E', 'export-record'],
       ['Export CSV…', 'CmdOrCtrl+Shift+E', 'export-csv'],
       ['Sign off…', undefined, 'sign'],
+      ['Compare with…', undefined, 'compare'],
     ];
     for (const [label, accelerator, command] of rows) {
       const item = find(file, label);

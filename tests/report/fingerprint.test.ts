@@ -94,7 +94,7 @@ describe('fingerprint', () => {
     const signed = signReview(review, results, SIGN);
     if (!signed.ok) throw new Error('sign failed');
     const hashed = fingerprintInputs(signed.review) as { signoff: Record<string, unknown> };
-    expect(Object.keys(hashed.signoff).sort()).toEqual(['conditions', 'decision', 'engineVersion', 'organisation', 'reviewer', 'role']);
+    expect(Object.keys(hashed.signoff).sort()).toEqual(['conditions', 'decision', 'engineVersion', 'organisation', 'reviewer', 'role', 'signedState']);
   });
 });
 

@@ -81,7 +81,10 @@ export async function signCommand(args: string[], io: CliIo): Promise<number> {
     io.err(`${file}: cannot write (${why}); the file was not changed.\n`);
     return EXIT.invalid;
   }
-  if (previous) io.out(`replaced the sign-off by ${previous.reviewer} of ${previous.signedAt}\n`);
+  if (previous) {
+    const kept = signed.signoff.history?.some((h) => h.signedAt === previous.signedAt && h.fingerprint === previous.fingerprint);
+    io.out(kept ? `the sign-off by ${previous.reviewer} of ${previous.signedAt} is kept in the revision history\n` : `replaced the sign-off by ${previous.reviewer} of ${previous.signedAt} (the same inputs and details signed again)\n`);
+  }
   io.out(`signed ${file}: ${signed.signoff.decision} by ${signed.signoff.reviewer} at ${signed.signoff.signedAt}\nfingerprint ${signed.signoff.fingerprint}\n`);
   return EXIT.ok;
 }

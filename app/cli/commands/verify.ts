@@ -11,6 +11,7 @@ import { status } from '../../review/status';
 import { PdfFile, readRecord, RecordReadError, type RecordContents } from '../../report/pdfRead';
 import { checkSignature, signatureDicts, type SignatureCheck, type SignatureDict } from '../../report/pdfSignature';
 import { compareRecord, paperOf, rebuildRecord, type RecordPart } from '../../report/rebuild';
+import { checkSignedState, NO_AUDIT_WORDS } from '../../review/audit/signedState';
 import { INFO_KEYS } from '../../report/record';
 import { EXIT, UsageError, type CliIo } from '../io';
 import { loadReviewFile } from '../reviewFile';
@@ -132,6 +133,8 @@ export async function verifyCommand(args: string[], io: CliIo): Promise<number> 
 
   const parts = differingParts({ inputs: stored.inputs!, results: stored.results!, engine: stored.engine! }, now);
   for (const p of parts) differ(PART_WORDS[p]);
+  // The signed inputs a sign-off keeps must reproduce its fingerprint; if not, they were altered.
+  if (checkSignedState(review).kind === 'altered') differ(`signed state: ${NO_AUDIT_WORDS.altered}`);
   if (parts.length === 0 && now.combined !== stored.combined) differ('document information (the combined fingerprint does not belong to its part hashes)');
 
   let rebuilt;

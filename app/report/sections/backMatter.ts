@@ -4,6 +4,8 @@ import { drawStatusIcon, STATUS_COLOURS } from '../icons';
 import { basisTag, METHODS } from '../../review/methods';
 import { caseTitle } from './caseResults';
 import { DECISION_WORDS, GREY, STATUS_LABELS } from '../words';
+import { revisionHistory, type Signing } from '../../review/audit/history';
+import type { Signoff } from '../../review/schema';
 
 /** Methods and sources: the static list, then the assumptions the engine states for this review. */
 export function drawMethods(ctx: RecordContext): void {
@@ -80,6 +82,7 @@ export function drawSignoff(ctx: RecordContext): void {
       ],
       { labelShare: 0.3, size: 8.5 },
     );
+    if (s.history?.length) drawRevisionHistory(ctx, s);
     if (status === 'changed-since-signing') {
       L.para('The fingerprint recomputed for this record differs from the one signed: this sign-off does not cover the record as it stands. Sign the review again after checking the changes.', { size: 8.5 });
     }
@@ -110,6 +113,34 @@ export function drawSignoff(ctx: RecordContext): void {
     'The fingerprint is SHA-256 over canonical JSON (sorted keys, no whitespace) of the review without its sign-off’s fingerprint and signing time, a defined summary of the results (per case the key figures and verdict codes, and the verdict per oil) and the engine version. The review is attached to this PDF; `flankfilm verify` recomputes it and names the part that differs.',
     { size: 7.5, color: GREY },
   );
+}
+
+/** At most this many changed fields are named on a line; the rest are counted. */
+const NAMED_CHANGES = 8;
+
+function changedWords(line: Signing): string {
+  if (line.changes === null) return line.first ? 'earliest signing kept in the file' : 'not known: that signing kept no signed inputs';
+  if (line.changes.length === 0) return 'no input changed';
+  const named = line.changes.slice(0, NAMED_CHANGES).map((c) => `${c.panel}: ${c.label}${c.kind === 'added' ? ' (added)' : c.kind === 'removed' ? ' (removed)' : ''}`);
+  const more = line.changes.length - named.length;
+  return `${named.join('; ')}${more > 0 ? `; and ${more} more` : ''}`;
+}
+
+/** One line a signing the file keeps: who, when, the decision, the fields changed since the previous signing. */
+function drawRevisionHistory(ctx: RecordContext, signoff: Signoff): void {
+  const L = ctx.layout;
+  L.heading('Revision history', 2);
+  L.table(
+    [
+      { header: 'Signed at', width: 0.19 },
+      { header: 'By', width: 0.23 },
+      { header: 'Decision', width: 0.16 },
+      { header: 'Inputs changed since the previous signing', width: 0.42 },
+    ],
+    revisionHistory(signoff).map((h) => [h.signedAt, `${h.reviewer} (${h.role})`, DECISION_WORDS[h.decision], changedWords(h)]),
+    { fontSize: 7.5, zebra: true },
+  );
+  L.para('The file keeps the earlier sign-offs with the inputs each signed, the latest few only; the fingerprint covers them.', { size: 7.5, color: GREY });
 }
 
 function sourceWithTag(source: string, tag: string): string {

@@ -1,8 +1,9 @@
 import { MATERIAL_PRESETS } from '../../../app/engine/materials';
-import { MATERIAL_WORDS } from '../../../app/review/vocabulary';
+import { MATERIAL_WORDS } from '../../../app/review/inputLabels';
 import { useSheet } from '../../state/context';
 import { getIn } from '../../state/paths';
 import { NumberField } from '../fields/NumberField';
+import { inputProps } from '../fields/inputProps';
 import { SelectField } from '../fields/SelectField';
 
 
@@ -18,25 +19,25 @@ export function GearMember({ member, title }: { readonly member: 'pinion' | 'whe
   return (
     <fieldset className="member">
       <legend>{title}</legend>
-      <NumberField path={[...p, 'teeth']} label={`Teeth z${member === 'pinion' ? 1 : 2}`} />
-      <NumberField path={[...p, 'profileShift']} label={`Profile shift x${member === 'pinion' ? 1 : 2}`} optional />
-      <NumberField path={[...p, 'tipDiameter_mm']} label="Tip diameter da" kind="length" optional />
-      <NumberField path={[...p, 'roughnessRa_um']} label="Flank roughness Ra" kind="roughness" />
+      <NumberField path={[...p, 'teeth']} {...inputProps(`gearPair.${member}.teeth`)} />
+      <NumberField path={[...p, 'profileShift']} {...inputProps(`gearPair.${member}.profileShift`)} optional />
+      <NumberField path={[...p, 'tipDiameter_mm']} {...inputProps(`gearPair.${member}.tipDiameter_mm`)} optional />
+      <NumberField path={[...p, 'roughnessRa_um']} {...inputProps(`gearPair.${member}.roughnessRa_um`)} />
       <SelectField
         path={[...p, 'material']}
-        label="Material"
+        {...inputProps(`gearPair.${member}.material`)}
         value={custom ? 'custom' : (material as string)}
         options={[...MATERIAL_PRESETS.map((m) => [m, MATERIAL_WORDS[m]] as const), ['custom', 'Custom material'] as const]}
         onValue={(v) => dispatch({ type: 'set', path: [...p, 'material'], value: v === 'custom' ? CUSTOM_START : v })}
       />
       {custom ? (
         <div className="custom-material">
-          <NumberField path={[...p, 'material', 'youngsModulus_GPa']} label="Young’s modulus E" unit="GPa" />
-          <NumberField path={[...p, 'material', 'poissonRatio']} label="Poisson’s ratio ν" />
-          <NumberField path={[...p, 'material', 'thermalConductivity_WmK']} label="Thermal conductivity k" unit="W/(m·K)" />
-          <NumberField path={[...p, 'material', 'density_kgm3']} label="Density ρ" kind="density" />
-          <NumberField path={[...p, 'material', 'specificHeat_JkgK']} label="Specific heat c" unit="J/(kg·K)" />
-          <NumberField path={[...p, 'material', 'structuralFactorXW']} label="Structural factor XW" />
+          <NumberField path={[...p, 'material', 'youngsModulus_GPa']} {...inputProps(`gearPair.${member}.material.youngsModulus_GPa`)} />
+          <NumberField path={[...p, 'material', 'poissonRatio']} {...inputProps(`gearPair.${member}.material.poissonRatio`)} />
+          <NumberField path={[...p, 'material', 'thermalConductivity_WmK']} {...inputProps(`gearPair.${member}.material.thermalConductivity_WmK`)} />
+          <NumberField path={[...p, 'material', 'density_kgm3']} {...inputProps('gearPair.${member}.material.density_kgm3')} />
+          <NumberField path={[...p, 'material', 'specificHeat_JkgK']} {...inputProps(`gearPair.${member}.material.specificHeat_JkgK`)} />
+          <NumberField path={[...p, 'material', 'structuralFactorXW']} {...inputProps(`gearPair.${member}.material.structuralFactorXW`)} />
         </div>
       ) : null}
     </fieldset>

@@ -1,23 +1,15 @@
 import type { GearResult } from '../../../app/review/results';
 import { COMPONENTS } from '../../../app/review/schema';
+import { COMPONENT_WORDS, fieldLabel } from '../../../app/review/inputLabels';
 import { useSheet } from '../../state/context';
 import { getIn } from '../../state/paths';
 import { CheckField } from '../fields/CheckField';
 import { NumberField } from '../fields/NumberField';
+import { inputProps } from '../fields/inputProps';
 import { TextField } from '../fields/TextField';
 import { QuantityRow } from '../Quantity';
 import { GearMember } from './GearMember';
 import { Panel } from './Panel';
-
-const COMPONENT_WORDS: Readonly<Record<(typeof COMPONENTS)[number], string>> = {
-  'bronze-bushing': 'Bronze bushings',
-  'brass-cage': 'Brass bearing cages',
-  'yellow-metal': 'Other yellow metals',
-  backstop: 'Backstop',
-  clutch: 'Clutch',
-  'food-contact': 'Incidental food contact',
-  'paint-or-seal-sensitive': 'Sensitive paint or seals',
-};
 
 /** Geometry and materials of pinion and wheel, with the derived geometry beside them. */
 export function GearPairPanel({ gear, stale }: { readonly gear: GearResult | null; readonly stale: boolean }) {
@@ -26,14 +18,14 @@ export function GearPairPanel({ gear, stale }: { readonly gear: GearResult | nul
   const gp = ['gearPair'] as const;
   return (
     <Panel id="gear-pair" title="Gear pair">
-      <TextField path={['title']} label="Review title" wide />
+      <TextField path={['title']} {...inputProps('title')} wide />
       <div className="grid-fields">
-        <NumberField path={[...gp, 'normalModule_mm']} label="Normal module mn" kind="length" />
-        <NumberField path={[...gp, 'normalPressureAngle_deg']} label="Pressure angle αn" unit="°" />
-        <NumberField path={[...gp, 'helixAngle_deg']} label="Helix angle β" unit="°" />
-        <NumberField path={[...gp, 'faceWidth_mm']} label="Face width b" kind="length" />
-        <NumberField path={[...gp, 'centerDistance_mm']} label="Centre distance a" kind="length" optional hint="Leave empty to take it from the profile shifts" />
-        <NumberField path={[...gp, 'pinionMeshes']} label="Meshes of the pinion np" />
+        <NumberField path={[...gp, 'normalModule_mm']} {...inputProps('gearPair.normalModule_mm')} />
+        <NumberField path={[...gp, 'normalPressureAngle_deg']} {...inputProps('gearPair.normalPressureAngle_deg')} />
+        <NumberField path={[...gp, 'helixAngle_deg']} {...inputProps('gearPair.helixAngle_deg')} />
+        <NumberField path={[...gp, 'faceWidth_mm']} {...inputProps('gearPair.faceWidth_mm')} />
+        <NumberField path={[...gp, 'centerDistance_mm']} {...inputProps('gearPair.centerDistance_mm')} optional hint="Leave empty to take it from the profile shifts" />
+        <NumberField path={[...gp, 'pinionMeshes']} {...inputProps('gearPair.pinionMeshes')} />
       </div>
       <div className="members">
         <GearMember member="pinion" title="Pinion" />
@@ -42,13 +34,13 @@ export function GearPairPanel({ gear, stale }: { readonly gear: GearResult | nul
       <fieldset className="subgroup">
         <legend>ISO 6336-2 factors (inputs)</legend>
         <div className="grid-fields">
-          <NumberField path={[...gp, 'dynamicFactorKv']} label="Dynamic factor Kv" />
-          <NumberField path={[...gp, 'faceLoadFactorKHbeta']} label="Face load factor KHβ" />
-          <NumberField path={[...gp, 'transverseLoadFactorKHalpha']} label="Transverse load factor KHα" />
+          <NumberField path={[...gp, 'dynamicFactorKv']} {...inputProps('gearPair.dynamicFactorKv')} />
+          <NumberField path={[...gp, 'faceLoadFactorKHbeta']} {...inputProps('gearPair.faceLoadFactorKHbeta')} />
+          <NumberField path={[...gp, 'transverseLoadFactorKHalpha']} {...inputProps('gearPair.transverseLoadFactorKHalpha')} />
         </div>
       </fieldset>
       <fieldset className="subgroup">
-        <legend>Parts in the oil circuit</legend>
+        <legend>{fieldLabel(['gearPair', 'components'])}</legend>
         <div className="checks">
           {COMPONENTS.map((c) => (
             <CheckField key={c} path={[...gp, 'components', c]} label={COMPONENT_WORDS[c]} checked={components.includes(c)} onChange={(on) => dispatch({ type: 'toggleComponent', component: c, on })} />

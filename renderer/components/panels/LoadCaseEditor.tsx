@@ -2,6 +2,8 @@ import { useSheet } from '../../state/context';
 import { getIn } from '../../state/paths';
 import { draftPower, draftTorque } from '../../state/reviewState';
 import { NumberField } from '../fields/NumberField';
+import { inputProps } from '../fields/inputProps';
+import { LUBRICATION_WORDS } from '../../../app/review/inputLabels';
 import { SelectField } from '../fields/SelectField';
 import { TextField } from '../fields/TextField';
 
@@ -19,37 +21,35 @@ export function LoadCaseEditor({ index, canRemove }: { readonly index: number; r
     <fieldset className="item" data-testid={`load-case-${index}`}>
       <legend>{legend}</legend>
       <div className="grid-fields">
-        <TextField path={[...p, 'name']} label="Name" wide />
-        <NumberField path={[...p, 'pinionSpeed_rpm']} label="Pinion speed n1" unit="rpm" />
+        <TextField path={[...p, 'name']} {...inputProps('loadCases[].name')} wide />
+        <NumberField path={[...p, 'pinionSpeed_rpm']} {...inputProps('loadCases[].pinionSpeed_rpm')} />
         <NumberField
           path={[...p, 'pinionTorque_Nm']}
-          label="Pinion torque T1"
+          {...inputProps('loadCases[].pinionTorque_Nm')}
           note={givesTorque ? undefined : 'from the power'}
-          kind="torque"
           value={draftTorque(draft, index)}
           derived={!givesTorque}
           onValue={(value) => dispatch({ type: 'setDrive', index, given: 'torque', value })}
         />
         <NumberField
           path={[...p, 'power_kW']}
-          label="Power P"
+          {...inputProps('loadCases[].power_kW')}
           note={givesTorque ? 'from the torque' : undefined}
-          kind="power"
           value={draftPower(draft, index)}
           derived={givesTorque}
           onValue={(value) => dispatch({ type: 'setDrive', index, given: 'power', value })}
         />
-        <NumberField path={[...p, 'applicationFactor']} label="Application factor KA" />
-        <NumberField path={[...p, 'oilTemperature_C']} label="Oil temperature θoil" kind="temperature" />
+        <NumberField path={[...p, 'applicationFactor']} {...inputProps('loadCases[].applicationFactor')} />
+        <NumberField path={[...p, 'oilTemperature_C']} {...inputProps('loadCases[].oilTemperature_C')} />
         <SelectField
           path={[...p, 'lubrication']}
-          label="Lubrication"
+          {...inputProps('loadCases[].lubrication')}
           options={[
-            ['dip', 'Dip (splash)'],
-            ['spray', 'Spray (injection)'],
+            ['dip', LUBRICATION_WORDS.dip],
+            ['spray', LUBRICATION_WORDS.spray],
           ]}
         />
-        <NumberField path={[...p, 'timeShare']} label="Share of operating time" hint="Fraction of the time, 0 to 1" />
+        <NumberField path={[...p, 'timeShare']} {...inputProps('loadCases[].timeShare')} hint="Fraction of the time, 0 to 1" />
       </div>
       {canRemove ? (
         <button type="button" className="link-button" onClick={() => dispatch({ type: 'removeItem', list: 'loadCases', index })}>

@@ -4,25 +4,13 @@ import { FZG_STAGES, type FzgStage } from '../../../app/review/schema';
 import { useSheet } from '../../state/context';
 import { getIn } from '../../state/paths';
 import { NumberField } from '../fields/NumberField';
+import { inputProps } from '../fields/inputProps';
+import { BASE_OIL_WORDS, CHEMISTRY_WORDS, INPUT_LABELS, OIL_ROLE_WORDS } from '../../../app/review/inputLabels';
 import { SelectField } from '../fields/SelectField';
 import { TextField } from '../fields/TextField';
 import { Quantity } from '../Quantity';
 
-const BASE_WORDS: Readonly<Record<(typeof BASE_OILS)[number], string>> = {
-  mineral: 'Mineral',
-  pao: 'PAO',
-  'pag-insoluble': 'PAG, water-insoluble',
-  'pag-soluble': 'PAG, water-soluble',
-  ester: 'Ester',
-  'phosphate-ester': 'Phosphate ester',
-  traction: 'Traction fluid',
-};
-const CHEMISTRY_WORDS: Readonly<Record<(typeof CHEMISTRIES)[number], string>> = {
-  'r-and-o': 'R&O (rust and oxidation)',
-  'anti-wear': 'AW (anti-wear)',
-  'extreme-pressure': 'EP (extreme pressure)',
-};
-const STAGES: readonly (readonly [FzgStage, string])[] = [...FZG_STAGES.map((s) => [s, String(s)] as const), ['>12', 'above 12'] as const];
+const STAGES: readonly (readonly [FzgStage, string])[] = [...FZG_STAGES.map((s) => [s, String(s)] as const), ['>12', INPUT_LABELS['oils[].fzgFailureStage']?.words?.['>12'] ?? '>12'] as const];
 
 /** One candidate oil. */
 export function OilEditor({ index, summary }: { readonly index: number; readonly summary: OilSummary | null }) {
@@ -34,24 +22,24 @@ export function OilEditor({ index, summary }: { readonly index: number; readonly
     <fieldset className="item" data-testid={`oil-${index}`}>
       <legend>{legend}</legend>
       <div className="grid-fields">
-        <TextField path={[...p, 'name']} label="Name" wide />
+        <TextField path={[...p, 'name']} {...inputProps('oils[].name')} wide />
         <SelectField
           path={[...p, 'role']}
-          label="Role"
+          {...inputProps('oils[].role')}
           options={[
-            ['in-service', 'In service'],
-            ['proposed', 'Proposed'],
-            ['candidate', 'Candidate'],
+            ['in-service', OIL_ROLE_WORDS['in-service']],
+            ['proposed', OIL_ROLE_WORDS.proposed],
+            ['candidate', OIL_ROLE_WORDS.candidate],
           ]}
         />
-        <NumberField path={[...p, 'kv40_mm2s']} label={units === 'us' ? 'Viscosity at 40 °C (104 °F)' : 'Viscosity at 40 °C'} kind="kinematicViscosity" />
-        <NumberField path={[...p, 'kv100_mm2s']} label={units === 'us' ? 'Viscosity at 100 °C (212 °F)' : 'Viscosity at 100 °C'} kind="kinematicViscosity" />
-        <NumberField path={[...p, 'viscosityIndex']} label="Viscosity index VI" optional hint="Empty: computed by ASTM D2270" />
-        <NumberField path={[...p, 'density15_kgm3']} label={units === 'us' ? 'Density at 15 °C (59 °F)' : 'Density at 15 °C'} kind="density" />
-        <SelectField path={[...p, 'baseOil']} label="Base oil" options={BASE_OILS.map((b) => [b, BASE_WORDS[b]] as const)} />
-        <SelectField path={[...p, 'chemistry']} label="Additive chemistry" options={CHEMISTRIES.map((c) => [c, CHEMISTRY_WORDS[c]] as const)} />
-        <SelectField path={[...p, 'fzgFailureStage']} label="FZG A/8.3/90 failure stage" options={STAGES} />
-        <NumberField path={[...p, 'pressureViscosity_1perGPa']} label="Pressure–viscosity α" unit="1/GPa" optional hint="Empty: estimated from the base oil" />
+        <NumberField path={[...p, 'kv40_mm2s']} {...inputProps('oils[].kv40_mm2s', units)} />
+        <NumberField path={[...p, 'kv100_mm2s']} {...inputProps('oils[].kv100_mm2s', units)} />
+        <NumberField path={[...p, 'viscosityIndex']} {...inputProps('oils[].viscosityIndex')} optional hint="Empty: computed by ASTM D2270" />
+        <NumberField path={[...p, 'density15_kgm3']} {...inputProps('oils[].density15_kgm3', units)} />
+        <SelectField path={[...p, 'baseOil']} {...inputProps('oils[].baseOil')} options={BASE_OILS.map((b) => [b, BASE_OIL_WORDS[b]] as const)} />
+        <SelectField path={[...p, 'chemistry']} {...inputProps('oils[].chemistry')} options={CHEMISTRIES.map((c) => [c, CHEMISTRY_WORDS[c]] as const)} />
+        <SelectField path={[...p, 'fzgFailureStage']} {...inputProps('oils[].fzgFailureStage')} options={STAGES} />
+        <NumberField path={[...p, 'pressureViscosity_1perGPa']} {...inputProps('oils[].pressureViscosity_1perGPa')} optional hint="Empty: estimated from the base oil" />
       </div>
       {summary ? (
         <p className="derived-line">

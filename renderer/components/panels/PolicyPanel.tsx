@@ -3,18 +3,12 @@ import { useSheet } from '../../state/context';
 import { getIn } from '../../state/paths';
 import { CheckField } from '../fields/CheckField';
 import { NumberField } from '../fields/NumberField';
+import { inputProps } from '../fields/inputProps';
+import { FILM_FORMULA_WORDS, SCUFFING_METHOD_CHOICES, fieldLabel } from '../../../app/review/inputLabels';
+import { SCUFFING_METHODS } from '../../../app/engine/mesh/types';
 import { SelectField } from '../fields/SelectField';
 import { Panel } from './Panel';
 
-const FORMULA_WORDS: Readonly<Record<(typeof FILM_FORMULAS)[number], string>> = {
-  'dowson-higginson': 'Dowson–Higginson (line contact)',
-  'pan-hamrock': 'Pan–Hamrock (1989)',
-};
-const METHOD_OPTIONS = [
-  ['both', 'Both (flash and integral)'],
-  ['flash', 'Flash temperature (ISO/TS 6336-20)'],
-  ['integral', 'Integral temperature (ISO/TS 6336-21)'],
-] as const;
 const STAGES = Array.from({ length: 12 }, (_, i) => [i + 1, String(i + 1)] as const);
 
 /** The review's thresholds and method choices. */
@@ -25,27 +19,27 @@ export function PolicyPanel() {
   return (
     <Panel id="policy" title="Policy">
       <div className="grid-fields">
-        <NumberField path={[...p, 'lambdaTarget']} label="λ target" />
-        <NumberField path={[...p, 'scuffingSafetyMin']} label="SB,min (flash)" />
-        <NumberField path={[...p, 'integralSafetyMin']} label="SintS,min (integral)" />
-        <SelectField path={[...p, 'scuffingMethods']} label="Scuffing methods" hint="With both, the more demanding method governs" options={METHOD_OPTIONS} />
-        <SelectField path={[...p, 'antiWearOilFzgStage']} label="FZG floor, AW oils" hint="FZG A/8.3/90 failure stage assumed for anti-wear oils; the hydraulic-oil class DIN 51524-2 (HLP) asks for 10" options={STAGES} />
-        <SelectField path={[...p, 'epOilFzgStage']} label="FZG floor, EP oils" hint="FZG A/8.3/90 failure stage assumed for EP oils; the EP gear-oil class DIN 51517-3 (CLP) asks for 12" options={STAGES} />
-        <NumberField path={[...p, 'temperatureRange_C', 0]} label="Temperature range, low" kind="temperature" />
-        <NumberField path={[...p, 'temperatureRange_C', 1]} label="Temperature range, high" kind="temperature" />
-        <NumberField path={[...p, 'shockApplicationFactor']} label="Shock duty from KA" />
+        <NumberField path={[...p, 'lambdaTarget']} {...inputProps('policy.lambdaTarget')} />
+        <NumberField path={[...p, 'scuffingSafetyMin']} {...inputProps('policy.scuffingSafetyMin')} />
+        <NumberField path={[...p, 'integralSafetyMin']} {...inputProps('policy.integralSafetyMin')} />
+        <SelectField path={[...p, 'scuffingMethods']} {...inputProps('policy.scuffingMethods')} hint="With both, the more demanding method governs" options={SCUFFING_METHODS.map((m) => [m, SCUFFING_METHOD_CHOICES[m]] as const)} />
+        <SelectField path={[...p, 'antiWearOilFzgStage']} {...inputProps('policy.antiWearOilFzgStage')} hint="FZG A/8.3/90 failure stage assumed for anti-wear oils; the hydraulic-oil class DIN 51524-2 (HLP) asks for 10" options={STAGES} />
+        <SelectField path={[...p, 'epOilFzgStage']} {...inputProps('policy.epOilFzgStage')} hint="FZG A/8.3/90 failure stage assumed for EP oils; the EP gear-oil class DIN 51517-3 (CLP) asks for 12" options={STAGES} />
+        <NumberField path={[...p, 'temperatureRange_C', 0]} {...inputProps('policy.temperatureRange_C[0]')} />
+        <NumberField path={[...p, 'temperatureRange_C', 1]} {...inputProps('policy.temperatureRange_C[1]')} />
+        <NumberField path={[...p, 'shockApplicationFactor']} {...inputProps('policy.shockApplicationFactor')} />
       </div>
       <fieldset className="subgroup">
         <legend>Film and friction</legend>
         <div className="grid-fields">
-          <SelectField path={[...p, 'filmFormula']} label="Film formula" options={FILM_FORMULAS.map((f) => [f, FORMULA_WORDS[f]] as const)} />
-          <NumberField path={[...p, 'boundaryBelowLambda']} label="Boundary below λ" />
-          <NumberField path={[...p, 'fullFilmFromLambda']} label="Full film from λ" />
-          <NumberField path={[...p, 'frictionCoefficient']} label="Friction coefficient μ" optional hint="Empty: the ISO/TS 6336-20 estimate" />
-          <NumberField path={[...p, 'scuffingTemperatureSpread']} label="Spread of θS (σ/θS)" />
-          <NumberField path={[...p, 'pathPoints']} label="Points along the path" />
+          <SelectField path={[...p, 'filmFormula']} {...inputProps('policy.filmFormula')} options={FILM_FORMULAS.map((f) => [f, FILM_FORMULA_WORDS[f]] as const)} />
+          <NumberField path={[...p, 'boundaryBelowLambda']} {...inputProps('policy.boundaryBelowLambda')} />
+          <NumberField path={[...p, 'fullFilmFromLambda']} {...inputProps('policy.fullFilmFromLambda')} />
+          <NumberField path={[...p, 'frictionCoefficient']} {...inputProps('policy.frictionCoefficient')} optional hint="Empty: the ISO/TS 6336-20 estimate" />
+          <NumberField path={[...p, 'scuffingTemperatureSpread']} {...inputProps('policy.scuffingTemperatureSpread')} />
+          <NumberField path={[...p, 'pathPoints']} {...inputProps('policy.pathPoints')} />
         </div>
-        <CheckField path={[...p, 'thermalFilmCorrection']} label="Inlet shear heating correction (Murch–Wilson)" checked={thermal !== false} onChange={(on) => dispatch({ type: 'set', path: [...p, 'thermalFilmCorrection'], value: on })} />
+        <CheckField path={[...p, 'thermalFilmCorrection']} label={fieldLabel([...p, 'thermalFilmCorrection'])} checked={thermal !== false} onChange={(on) => dispatch({ type: 'set', path: [...p, 'thermalFilmCorrection'], value: on })} />
       </fieldset>
     </Panel>
   );

@@ -1,3 +1,4 @@
+import type { ReactNode } from 'react';
 import type { ReviewStatus } from '../../../app/review/results';
 import type { Signoff } from '../../../app/review/schema';
 import { Panel } from '../panels/Panel';
@@ -9,10 +10,12 @@ interface Props {
   readonly signoff: Signoff | undefined;
   readonly canSign: boolean;
   readonly onOpen: () => void;
+  /** The changes since signing and the comparison with another revision. */
+  readonly children?: ReactNode;
 }
 
-/** Who signed, when and what they decided; and the button to sign (again). */
-export function SignoffPanel({ status, signoff, canSign, onOpen }: Props) {
+/** Who signed, when and what they decided; the button to sign (again); and what changed since. */
+export function SignoffPanel({ status, signoff, canSign, onOpen, children }: Props) {
   return (
     <Panel
       id="sign-off"
@@ -41,6 +44,7 @@ export function SignoffPanel({ status, signoff, canSign, onOpen }: Props) {
         <p className="note">Not signed. Sign when the inputs are final; the record then carries the sign-off.</p>
       )}
       {!canSign ? <p className="note">Correct the marked inputs before signing.</p> : null}
+      {children}
     </Panel>
   );
 }

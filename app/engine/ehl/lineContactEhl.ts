@@ -1,0 +1,177 @@
+import { requireInRange, type WarningSink } from '../diagnostics';
+import { lineContactGroups } from '../film/lineContactGroups';
+import { panHamrockFilm } from '../film/panHamrock';
+import type { Metres, MetresPerSecond, NewtonsPerMetre, Pascals, PascalSeconds, PerPascal } from '../units';
+import { ehlWorkspace, solveDimensionless, type DimensionlessSolution, type EhlWorkspace } from './newtonSolver';
+import { viscosityParameters, type ViscosityLaw } from './pressureLaws';
+
+/** One contact point, SI (the inputs of the film formulas, plus the laws). */
+export interface LineContactEhlInput {
+  /** Viscosity at the inlet temperature and ambient pressure, Pa·s. */
+  readonly eta0: PascalSeconds;
+  /** Barus pressure–viscosity coefficient, 1/Pa (also sets the Roelands index). */
+  readonly alpha: PerPascal;
+  /** Mean entrainment velocity ū = (v1 + v2)/2, m/s (> 0). */
+  readonly uMean: MetresPerSecond;
+  /** Reduced radius of curvature R, m. */
+  readonly radius: Metres;
+  /** Normal load per unit contact length w, N/m. */
+  readonly loadPerLength: NewtonsPerMetre;
+  /** Hamrock's effective modulus E′ = 2E*, Pa. */
+  readonly eReduced: Pascals;
+}
+
+export interface LineContactEhlOptions {
+  /** Grid nodes N, 65…1025; default {@link EHL_DEFAULT_NODES}. */
+  readonly nodes?: number;
+  /** Pressure–viscosity law; default Roelands. */
+  readonly viscosityLaw?: ViscosityLaw;
+  /** Inlet end of the grid, x/b (−12…−2.5); default −4.5. */
+  readonly inlet?: number;
+  /** Outlet end of the grid, x/b (1.2…3); default 1.5. */
+  readonly outlet?: number;
+  readonly maxIterations?: number;
+  /** Reuse the arrays of an earlier solve with the same node count. */
+  readonly workspace?: EhlWorkspace;
+}
+
+export const EHL_DEFAULT_NODES = 257;
+export const EHL_NODE_LIMITS = { min: 65, max: 1025 } as const;
+const TOLERANCE = 1e-8;
+
+export interface LineContactEhlResult {
+  readonly converged: boolean;
+  readonly iterations: number;
+  /** Largest scaled residual of the last iterate (dimensionless, relative to pH and the load). */
+  readonly residual: number;
+  readonly stopReason: DimensionlessSolution['reason'];
+  readonly nodes: number;
+  readonly viscosityLaw: ViscosityLaw;
+  /** Minimum film, at the exit constriction, m. */
+  readonly hMin: Metres;
+  /** Film at the centre of the Hertz contact, x = 0, m. */
+  readonly hCentral: Metres;
+  readonly pMax: Pascals;
+  /** x/b of the pressure maximum and of the film minimum. */
+  readonly xAtPMax: number;
+  readonly xAtHMin: number;
+  /** The pressure spike: the local maximum nearest the outlet, when there is one inside the contact. */
+  readonly spike: { readonly xOverB: number; readonly p: Pascals } | null;
+  readonly hertzPressure: Pascals;
+  readonly hertzSemiWidth: Metres;
+  /** Hamrock's groups U, W, G of the point. */
+  readonly groups: { readonly U: number; readonly W: number; readonly G: number };
+  /** Pan–Hamrock (1989) films at the same point, m (the formula the solver is held to). */
+  readonly formula: { readonly hMin: Metres; readonly hCentral: Metres };
+  /** x/b, p (Pa) and h (m) at every node. */
+  readonly xOverB: Float64Array;
+  readonly pressure: Float64Array;
+  readonly film: Float64Array;
+}
+
+/**
+ * Numerical film and pressure of a steady, isothermal, fully flooded EHL line contact at one
+ * point: the Reynolds equation with the half-space deformation integral, Roelands (or Barus)
+ * viscosity, Dowson–Higginson density, load balance and the Reynolds cavitation condition, solved
+ * by a Newton–Raphson scheme from a Hertzian start (newtonSolver.ts: Houpert & Hamrock 1986,
+ * discretisation after Venner & Lubrecht 2000 [memory]).
+ *
+ * Hertz units: b = 4RpH/E′, pH = √(wE′/(2πR)), λ̄ = 12 η0 ū R²/(b³ pH).
+ * A cross-check and a picture at a chosen point, not a replacement for the path formulas.
+ *
+ * Out of range: a node count outside 65…1025 or a grid end outside its limits throws
+ * EngineInputError naming the option; ū ≤ 0 or a non-positive input throws (there is no film to
+ * solve for). Groups outside the fitted range of the formulas add a warning (the comparison is then
+ * an extrapolation of the formula, not of the solver). The result is never NaN: a solve that does
+ * not converge says so (`converged: false`, its stop reason and last residual).
+ */
+export function lineContactEhl(input: LineContactEhlInput, options: LineContactEhlOptions = {}, warnings?: WarningSink): LineContactEhlResult {
+  const nodes = requireInRange('nodes', options.nodes ?? EHL_DEFAULT_NODES, EHL_NODE_LIMITS.min, EHL_NODE_LIMITS.max);
+  if (!Number.isInteger(nodes)) requireInRange('nodes (a whole number)', Number.NaN, EHL_NODE_LIMITS.min, EHL_NODE_LIMITS.max);
+  const xIn = requireInRange('inlet', options.inlet ?? -4.5, -12, -2.5, 'x/b');
+  const xOut = requireInRange('outlet', options.outlet ?? 1.5, 1.2, 3, 'x/b');
+  requireInRange('uMean', input.uMean, 1e-6, 1e3, 'm/s');
+  const g = lineContactGroups('Pan–Hamrock', input.eta0, input.alpha, input.uMean, input.radius, input.loadPerLength, input.eReduced, warnings);
+  if (!g) throw new Error('unreachable: uMean checked above');
+  const groups = { U: g.U, W: g.W, G: g.G };
+  const formula = panHamrockFilm(input.eta0, input.alpha, input.uMean, input.radius, input.loadPerLength, input.eReduced);
+  const R = input.radius;
+  const pH = Math.sqrt((input.loadPerLength * input.eReduced) / (2 * Math.PI * R));
+  const b = (4 * R * pH) / input.eReduced;
+  const toH = R / (b * b);
+  const law = options.viscosityLaw ?? 'roelands';
+  const work = options.workspace && options.workspace.nodes === nodes ? options.workspace : ehlWorkspace(nodes);
+  const sol = solveDimensionless(
+    {
+      lambdaBar: (12 * input.eta0 * input.uMean * R * R) / (b * b * b * pH),
+      hertzPressure: pH,
+      viscosity: viscosityParameters(law, input.eta0, input.alpha),
+      nodes,
+      xIn,
+      xOut,
+      maxIterations: options.maxIterations ?? 60,
+      tolerance: TOLERANCE,
+      startCentralFilm: formula.hCentral * toH,
+    },
+    work,
+  );
+  return dimensional(sol, work, nodes, law, pH, b, toH, groups, formula);
+}
+
+function dimensional(
+  sol: DimensionlessSolution,
+  w: EhlWorkspace,
+  n: number,
+  law: ViscosityLaw,
+  pH: number,
+  b: number,
+  toH: number,
+  groups: LineContactEhlResult['groups'],
+  formula: { hMin: Metres; hCentral: Metres },
+): LineContactEhlResult {
+  const xOverB = Float64Array.from(w.x);
+  const pressure = new Float64Array(n);
+  const film = new Float64Array(n);
+  let iP = 0, iH = 0, iC = 0;
+  for (let i = 0; i < n; i++) {
+    pressure[i] = (w.p[i] as number) * pH;
+    film[i] = (w.h[i] as number) / toH;
+    if ((pressure[i] as number) > (pressure[iP] as number)) iP = i;
+    if ((film[i] as number) < (film[iH] as number)) iH = i;
+    if (Math.abs(w.x[i] as number) < Math.abs(w.x[iC] as number)) iC = i;
+  }
+  // Central film at x = 0 exactly, by linear interpolation between the two nearest nodes.
+  const j = (w.x[iC] as number) > 0 && iC > 0 ? iC - 1 : iC;
+  const x0 = w.x[j] as number, x1 = w.x[j + 1] as number;
+  const t = x1 !== x0 ? -x0 / (x1 - x0) : 0;
+  const hCentral = (film[j] as number) * (1 - t) + (film[j + 1] as number) * t;
+  let spike: LineContactEhlResult['spike'] = null;
+  for (let i = n - 2; i > 0; i--) {
+    const pi = pressure[i] as number;
+    if (pi > 0 && pi >= (pressure[i - 1] as number) && pi > (pressure[i + 1] as number) && (w.x[i] as number) > 0) {
+      spike = { xOverB: w.x[i] as number, p: pi as Pascals };
+      break;
+    }
+  }
+  return {
+    converged: sol.converged,
+    iterations: sol.iterations,
+    residual: sol.residual,
+    stopReason: sol.reason,
+    nodes: n,
+    viscosityLaw: law,
+    hMin: (film[iH] as number) as Metres,
+    hCentral: hCentral as Metres,
+    pMax: (pressure[iP] as number) as Pascals,
+    xAtPMax: w.x[iP] as number,
+    xAtHMin: w.x[iH] as number,
+    spike,
+    hertzPressure: pH as Pascals,
+    hertzSemiWidth: b as Metres,
+    groups,
+    formula: { hMin: formula.hMin, hCentral: formula.hCentral },
+    xOverB,
+    pressure,
+    film,
+  };
+}

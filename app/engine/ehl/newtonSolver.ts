@@ -1,0 +1,246 @@
+import { deformationKernel } from './kernel';
+import { densityRatio, lnViscosityRatio, type ViscosityParameters } from './pressureLaws';
+import { solveDenseInPlace } from './denseSolve';
+
+/** The dimensionless problem in Hertz units: X = x/b, P = p/pH, H = hR/b². */
+export interface DimensionlessProblem {
+  /** λ̄ = 12 η0 ū R²/(b³ pH). */
+  readonly lambdaBar: number;
+  /** Hertz pressure pH, Pa (the pressure laws need dimensional pressure). */
+  readonly hertzPressure: number;
+  readonly viscosity: ViscosityParameters;
+  readonly nodes: number;
+  /** Inlet and outlet ends of the grid, in units of b. */
+  readonly xIn: number;
+  readonly xOut: number;
+  readonly maxIterations: number;
+  /** Converged when the largest scaled residual is below this. */
+  readonly tolerance: number;
+  /** Central film H(0) of the start, e.g. from a film formula. */
+  readonly startCentralFilm: number;
+}
+
+/** Arrays of one solve; make once per node count and reuse (nothing is allocated per iteration). */
+export interface EhlWorkspace {
+  readonly nodes: number;
+  readonly x: Float64Array;
+  readonly p: Float64Array;
+  readonly h: Float64Array;
+  readonly kernel: Float64Array;
+  readonly rho: Float64Array;
+  readonly dRho: Float64Array;
+  readonly eps: Float64Array;
+  readonly dEpsP: Float64Array;
+  readonly dEpsH: Float64Array;
+  readonly pTrial: Float64Array;
+  readonly rhs: Float64Array;
+  readonly matrix: Float64Array;
+  readonly scratch: Float64Array;
+}
+
+export function ehlWorkspace(nodes: number): EhlWorkspace {
+  const a = () => new Float64Array(nodes);
+  const m = nodes - 1;
+  return { nodes, x: a(), p: a(), h: a(), kernel: a(), rho: a(), dRho: a(), eps: a(), dEpsP: a(), dEpsH: a(), pTrial: a(), rhs: new Float64Array(m), matrix: new Float64Array(m * m), scratch: new Float64Array(1) };
+}
+
+export interface DimensionlessSolution {
+  converged: boolean;
+  iterations: number;
+  /** Largest scaled residual of the last iterate (Reynolds/complementarity rows and load balance). */
+  residual: number;
+  /** H0 of the film equation. */
+  h0: number;
+  /** Why it stopped short, when it did. */
+  reason: 'converged' | 'iteration-limit' | 'stalled' | 'non-finite';
+}
+
+const H_FLOOR = 1e-9;
+
+/**
+ * Steady isothermal EHL line contact by a damped Newton–Raphson method on the fully coupled system
+ * (pressures and H0 together, the dense elastic Jacobian solved directly), after Houpert & Hamrock,
+ * "Fast approach for calculating film thicknesses and pressures in elastohydrodynamically
+ * lubricated contacts at high loads", ASME J. Tribology 108 (1986) 411–420 [memory]. The
+ * discretisation is the one of Venner & Lubrecht, Multilevel Methods in Lubrication (2000) [memory]:
+ *
+ *   d/dX(ε dP/dX) − d(ρ̄H)/dX = 0,  ε = ρ̄H³/(η̄λ̄)      (Reynolds; central Poiseuille, upwind wedge)
+ *   H = H0 + X²/2 − (1/π)∫ ln|X − X′| P dX′              (half-space deformation, kernel.ts)
+ *   ∫ P dX = π/2                                          (load balance)
+ *
+ * Cavitation (the Reynolds condition P = dP/dX = 0 at the outlet) is the complementarity P ≥ 0,
+ * −R ≥ 0, P·R = 0, solved as min(P, −R/|∂R/∂P|) = 0 by a semismooth Newton (active-set) step.
+ * The start is the Hertz ellipse with H(0) = `startCentralFilm`. A backtracking line search on the
+ * largest residual keeps the iterate from diverging; P is kept ≥ 0 and never becomes NaN: a
+ * non-finite trial step is rejected and the solve stops with the last finite iterate.
+ */
+export function solveDimensionless(q: DimensionlessProblem, w: EhlWorkspace): DimensionlessSolution {
+  const n = q.nodes;
+  const dx = (q.xOut - q.xIn) / (n - 1);
+  const { x, p, pTrial } = w;
+  for (let i = 0; i < n; i++) {
+    const xi = q.xIn + i * dx;
+    x[i] = xi;
+    p[i] = Math.abs(xi) < 1 ? Math.sqrt(1 - xi * xi) : 0;
+  }
+  p[0] = 0;
+  p[n - 1] = 0;
+  deformationKernel(n, dx, w.kernel);
+  // Scale the start to carry the load exactly and place H(0) where the formula says.
+  let sum = 0;
+  for (let i = 0; i < n; i++) sum += p[i] as number;
+  const scale = Math.PI / 2 / (sum * dx);
+  for (let i = 0; i < n; i++) p[i] = (p[i] as number) * scale;
+  const iZero = Math.round(-q.xIn / dx);
+  let h0 = q.startCentralFilm - elastic(w, p, iZero, n) - ((x[iZero] as number) ** 2) / 2;
+
+  let merit = evaluate(q, w, p, h0, dx);
+  let iterations = 0;
+  let reason: DimensionlessSolution['reason'] = 'iteration-limit';
+  while (iterations < q.maxIterations) {
+    if (merit < q.tolerance) {
+      reason = 'converged';
+      break;
+    }
+    iterations++;
+    assemble(q, w, p, dx);
+    if (!solveDenseInPlace(w.matrix, w.rhs, n - 1)) {
+      reason = 'stalled';
+      break;
+    }
+    let step = 1;
+    let accepted = false;
+    for (let tries = 0; tries < 12; tries++) {
+      for (let i = 1; i < n - 1; i++) {
+        const v = (p[i] as number) + step * (w.rhs[i - 1] as number);
+        pTrial[i] = v > 0 ? v : 0;
+      }
+      pTrial[0] = 0;
+      pTrial[n - 1] = 0;
+      const h0Trial = h0 + step * (w.rhs[n - 2] as number);
+      const m = evaluate(q, w, pTrial, h0Trial, dx);
+      if (Number.isFinite(m) && (m < merit * (1 - 1e-4 * step) || tries === 11)) {
+        if (!Number.isFinite(m)) break;
+        p.set(pTrial);
+        h0 = h0Trial;
+        merit = m;
+        accepted = true;
+        break;
+      }
+      step /= 2;
+    }
+    if (!accepted) {
+      reason = 'non-finite';
+      merit = evaluate(q, w, p, h0, dx);
+      break;
+    }
+  }
+  if (merit < q.tolerance) reason = 'converged';
+  else evaluate(q, w, p, h0, dx);
+  return { converged: reason === 'converged', iterations, residual: merit, h0, reason };
+}
+
+function elastic(w: EhlWorkspace, p: Float64Array, i: number, n: number): number {
+  const k = w.kernel;
+  let s = 0;
+  for (let j = 1; j < n - 1; j++) s += (k[i > j ? i - j : j - i] as number) * (p[j] as number);
+  return s;
+}
+
+/**
+ * Film, density and flow factor at every node for pressures `p` and offset `h0`; returns the largest
+ * scaled residual (complementarity rows and load balance). Leaves the node state in the workspace.
+ */
+function evaluate(q: DimensionlessProblem, w: EhlWorkspace, p: Float64Array, h0: number, dx: number): number {
+  const n = q.nodes;
+  const { x, h, rho, dRho, eps, dEpsP, dEpsH, scratch } = w;
+  const pH = q.hertzPressure;
+  let load = 0;
+  for (let i = 0; i < n; i++) {
+    const xi = x[i] as number;
+    const hi = h0 + (xi * xi) / 2 + elastic(w, p, i, n);
+    h[i] = hi;
+    const pi = (p[i] as number) * pH;
+    load += p[i] as number;
+    const r = densityRatio(pi, scratch);
+    const dr = (scratch[0] as number) * pH;
+    const lnEta = lnViscosityRatio(q.viscosity, pi, scratch);
+    const dLnEta = (scratch[0] as number) * pH;
+    rho[i] = r;
+    dRho[i] = dr;
+    const hc = hi > H_FLOOR ? hi : H_FLOOR;
+    const e = (r * hc * hc * hc * Math.exp(-lnEta)) / q.lambdaBar;
+    eps[i] = e;
+    dEpsP[i] = e * (dr / r - dLnEta);
+    dEpsH[i] = hi > H_FLOOR ? (3 * e) / hi : 0;
+  }
+  let worst = Math.abs(load * dx - Math.PI / 2) / (Math.PI / 2);
+  for (let i = 1; i < n - 1; i++) {
+    const c = rowCoefficients(w, p, i, dx);
+    const phi = Math.min(p[i] as number, -c.residual / Math.abs(c.diagonal));
+    const a = Math.abs(phi);
+    if (!(a <= worst)) worst = Number.isNaN(a) ? Infinity : a;
+  }
+  return worst;
+}
+
+/** Coefficients of Reynolds row i, written into one reused object. */
+const ROW = { residual: 0, diagonal: 0, dPm: 0, dP0: 0, dPp: 0, dHm: 0, dH0: 0, dHp: 0 };
+
+function rowCoefficients(w: EhlWorkspace, p: Float64Array, i: number, dx: number): typeof ROW {
+  const { h, rho, dRho, eps, dEpsP, dEpsH, kernel } = w;
+  const dx2 = dx * dx;
+  const pm = p[i - 1] as number, p0 = p[i] as number, pp = p[i + 1] as number;
+  const em = ((eps[i - 1] as number) + (eps[i] as number)) / 2;
+  const ep = ((eps[i] as number) + (eps[i + 1] as number)) / 2;
+  const gp = pp - p0, gm = p0 - pm;
+  const rhm = (rho[i - 1] as number) * (h[i - 1] as number);
+  const rh0 = (rho[i] as number) * (h[i] as number);
+  ROW.residual = (ep * gp - em * gm) / dx2 - (rh0 - rhm) / dx;
+  ROW.dPp = ep / dx2 + ((dEpsP[i + 1] as number) / 2) * gp / dx2;
+  ROW.dP0 = -(ep + em) / dx2 + ((dEpsP[i] as number) / 2) * (gp - gm) / dx2 - ((dRho[i] as number) * (h[i] as number)) / dx;
+  ROW.dPm = em / dx2 - ((dEpsP[i - 1] as number) / 2) * gm / dx2 + ((dRho[i - 1] as number) * (h[i - 1] as number)) / dx;
+  ROW.dHp = ((dEpsH[i + 1] as number) / 2) * gp / dx2;
+  ROW.dH0 = ((dEpsH[i] as number) / 2) * (gp - gm) / dx2 - (rho[i] as number) / dx;
+  ROW.dHm = -((dEpsH[i - 1] as number) / 2) * gm / dx2 + (rho[i - 1] as number) / dx;
+  const k0 = kernel[0] as number, k1 = kernel[1] as number;
+  ROW.diagonal = ROW.dP0 + ROW.dHm * k1 + ROW.dH0 * k0 + ROW.dHp * k1;
+  return ROW;
+}
+
+/** The semismooth Newton system for the state left by the last evaluate(): matrix and right-hand side. */
+function assemble(q: DimensionlessProblem, w: EhlWorkspace, p: Float64Array, dx: number): void {
+  const n = q.nodes;
+  const m = n - 1;
+  const { matrix, rhs, kernel } = w;
+  matrix.fill(0);
+  let load = 0;
+  for (let i = 0; i < n; i++) load += p[i] as number;
+  for (let i = 1; i < n - 1; i++) {
+    const r = i - 1;
+    const row = r * m;
+    const c = rowCoefficients(w, p, i, dx);
+    const s = 1 / Math.abs(c.diagonal);
+    const pi = p[i] as number;
+    if (pi < -c.residual * s) {
+      matrix[row + r] = 1;
+      rhs[r] = -pi;
+      continue;
+    }
+    rhs[r] = -c.residual * s;
+    const am = c.dHm * s, a0 = c.dH0 * s, ap = c.dHp * s;
+    for (let j = 1; j < n - 1; j++) {
+      const km = kernel[Math.abs(i - 1 - j)] as number;
+      const k0 = kernel[Math.abs(i - j)] as number;
+      const kp = kernel[Math.abs(i + 1 - j)] as number;
+      matrix[row + j - 1] = am * km + a0 * k0 + ap * kp;
+    }
+    if (i > 1) matrix[row + r - 1] = (matrix[row + r - 1] as number) + c.dPm * s;
+    matrix[row + r] = (matrix[row + r] as number) + c.dP0 * s;
+    if (i < n - 2) matrix[row + r + 1] = (matrix[row + r + 1] as number) + c.dPp * s;
+    matrix[row + m - 1] = am + a0 + ap;
+  }
+  const last = (m - 1) * m;
+  for (let j = 0; j < m - 1; j++) matrix[last + j] = dx;
+  rhs[m - 1] = -(load * dx - Math.PI / 2);
+}

@@ -2,7 +2,7 @@ import { requireInRange, type WarningSink } from '../diagnostics';
 import { lineContactGroups } from '../film/lineContactGroups';
 import { panHamrockFilm } from '../film/panHamrock';
 import type { Metres, MetresPerSecond, NewtonsPerMetre, Pascals, PascalSeconds, PerPascal } from '../units';
-import { ehlWorkspace, solveDimensionless, type DimensionlessSolution, type EhlWorkspace } from './newtonSolver';
+import { ehlWorkspace, solveDimensionless, type DimensionlessSolution, type EhlWorkspace, type WedgeScheme } from './newtonSolver';
 import { viscosityParameters, type ViscosityLaw } from './pressureLaws';
 
 /** One contact point, SI (the inputs of the film formulas, plus the laws). */
@@ -26,11 +26,17 @@ export interface LineContactEhlOptions {
   readonly nodes?: number;
   /** Pressure–viscosity law; default Roelands. */
   readonly viscosityLaw?: ViscosityLaw;
-  /** Inlet end of the grid, x/b (−12…−2.5); default −4.5. */
+  /**
+   * Inlet end of the grid, x/b (−12…−2.5). Default: −4.5, or further upstream for a thick film,
+   * so that the undeformed gap at the inlet end, X²/2, is at least 40 times the central film H_c
+   * of the start (a fully flooded inlet; our choice, checked by the inlet-length test).
+   */
   readonly inlet?: number;
   /** Outlet end of the grid, x/b (1.2…3); default 1.5. */
   readonly outlet?: number;
   readonly maxIterations?: number;
+  /** Difference scheme of the wedge term; default second order (see newtonSolver.ts). */
+  readonly wedge?: WedgeScheme;
   /** Reuse the arrays of an earlier solve with the same node count. */
   readonly workspace?: EhlWorkspace;
 }
@@ -38,6 +44,7 @@ export interface LineContactEhlOptions {
 export const EHL_DEFAULT_NODES = 257;
 export const EHL_NODE_LIMITS = { min: 65, max: 1025 } as const;
 const TOLERANCE = 1e-8;
+const FLOODED_GAP_RATIO = 40;
 
 export interface LineContactEhlResult {
   readonly converged: boolean;
@@ -88,7 +95,6 @@ export interface LineContactEhlResult {
 export function lineContactEhl(input: LineContactEhlInput, options: LineContactEhlOptions = {}, warnings?: WarningSink): LineContactEhlResult {
   const nodes = requireInRange('nodes', options.nodes ?? EHL_DEFAULT_NODES, EHL_NODE_LIMITS.min, EHL_NODE_LIMITS.max);
   if (!Number.isInteger(nodes)) requireInRange('nodes (a whole number)', Number.NaN, EHL_NODE_LIMITS.min, EHL_NODE_LIMITS.max);
-  const xIn = requireInRange('inlet', options.inlet ?? -4.5, -12, -2.5, 'x/b');
   const xOut = requireInRange('outlet', options.outlet ?? 1.5, 1.2, 3, 'x/b');
   requireInRange('uMean', input.uMean, 1e-6, 1e3, 'm/s');
   const g = lineContactGroups('Pan–Hamrock', input.eta0, input.alpha, input.uMean, input.radius, input.loadPerLength, input.eReduced, warnings);
@@ -99,6 +105,8 @@ export function lineContactEhl(input: LineContactEhlInput, options: LineContactE
   const pH = Math.sqrt((input.loadPerLength * input.eReduced) / (2 * Math.PI * R));
   const b = (4 * R * pH) / input.eReduced;
   const toH = R / (b * b);
+  const autoInlet = -Math.min(12, Math.max(4.5, Math.sqrt(2 * FLOODED_GAP_RATIO * formula.hCentral * toH)));
+  const xIn = requireInRange('inlet', options.inlet ?? autoInlet, -12, -2.5, 'x/b');
   const law = options.viscosityLaw ?? 'roelands';
   const work = options.workspace && options.workspace.nodes === nodes ? options.workspace : ehlWorkspace(nodes);
   const sol = solveDimensionless(
@@ -112,6 +120,7 @@ export function lineContactEhl(input: LineContactEhlInput, options: LineContactE
       maxIterations: options.maxIterations ?? 60,
       tolerance: TOLERANCE,
       startCentralFilm: formula.hCentral * toH,
+      wedge: options.wedge ?? 'second-order',
     },
     work,
   );

@@ -18,7 +18,19 @@ export interface DimensionlessProblem {
   readonly tolerance: number;
   /** Central film H(0) of the start, e.g. from a film formula. */
   readonly startCentralFilm: number;
+  /** Upwind order of the wedge term d(ρ̄H)/dX. */
+  readonly wedge: WedgeScheme;
 }
+
+/**
+ * The wedge term's difference scheme. Second order (the default) is nearer the continuum on a
+ * coarse grid; first order (Venner & Lubrecht's choice for multigrid smoothing) adds numerical
+ * diffusion that reads h_c high but smooths an under-resolved exit constriction.
+ */
+export type WedgeScheme = 'second-order' | 'first-order';
+
+/** The scheme of the solve under way (one flag, so the row kernel allocates nothing). */
+const SECOND_ORDER = new Uint8Array(1);
 
 /** Arrays of one solve; make once per node count and reuse (nothing is allocated per iteration). */
 export interface EhlWorkspace {
@@ -36,12 +48,14 @@ export interface EhlWorkspace {
   readonly rhs: Float64Array;
   readonly matrix: Float64Array;
   readonly scratch: Float64Array;
+  /** [root-mean-square, largest] scaled residual of the last evaluation. */
+  readonly norms: Float64Array;
 }
 
 export function ehlWorkspace(nodes: number): EhlWorkspace {
   const a = () => new Float64Array(nodes);
   const m = nodes - 1;
-  return { nodes, x: a(), p: a(), h: a(), kernel: a(), rho: a(), dRho: a(), eps: a(), dEpsP: a(), dEpsH: a(), pTrial: a(), rhs: new Float64Array(m), matrix: new Float64Array(m * m), scratch: new Float64Array(1) };
+  return { nodes, x: a(), p: a(), h: a(), kernel: a(), rho: a(), dRho: a(), eps: a(), dEpsP: a(), dEpsH: a(), pTrial: a(), rhs: new Float64Array(m), matrix: new Float64Array(m * m), scratch: new Float64Array(1), norms: new Float64Array(2) };
 }
 
 export interface DimensionlessSolution {
@@ -71,13 +85,14 @@ const H_FLOOR = 1e-9;
  * Cavitation (the Reynolds condition P = dP/dX = 0 at the outlet) is the complementarity P ≥ 0,
  * −R ≥ 0, P·R = 0, solved as min(P, −R/|∂R/∂P|) = 0 by a semismooth Newton (active-set) step.
  * The start is the Hertz ellipse with H(0) = `startCentralFilm`. A backtracking line search on the
- * largest residual keeps the iterate from diverging; P is kept ≥ 0 and never becomes NaN: a
+ * root-mean-square residual keeps the iterate from diverging; P is kept ≥ 0 and never becomes NaN: a
  * non-finite trial step is rejected and the solve stops with the last finite iterate.
  */
 export function solveDimensionless(q: DimensionlessProblem, w: EhlWorkspace): DimensionlessSolution {
   const n = q.nodes;
   const dx = (q.xOut - q.xIn) / (n - 1);
   const { x, p, pTrial } = w;
+  SECOND_ORDER[0] = q.wedge === 'second-order' ? 1 : 0;
   for (let i = 0; i < n; i++) {
     const xi = q.xIn + i * dx;
     x[i] = xi;
@@ -98,7 +113,7 @@ export function solveDimensionless(q: DimensionlessProblem, w: EhlWorkspace): Di
   let iterations = 0;
   let reason: DimensionlessSolution['reason'] = 'iteration-limit';
   while (iterations < q.maxIterations) {
-    if (merit < q.tolerance) {
+    if ((w.norms[1] as number) < q.tolerance) {
       reason = 'converged';
       break;
     }
@@ -120,7 +135,6 @@ export function solveDimensionless(q: DimensionlessProblem, w: EhlWorkspace): Di
       const h0Trial = h0 + step * (w.rhs[n - 2] as number);
       const m = evaluate(q, w, pTrial, h0Trial, dx);
       if (Number.isFinite(m) && (m < merit * (1 - 1e-4 * step) || tries === 11)) {
-        if (!Number.isFinite(m)) break;
         p.set(pTrial);
         h0 = h0Trial;
         merit = m;
@@ -135,9 +149,11 @@ export function solveDimensionless(q: DimensionlessProblem, w: EhlWorkspace): Di
       break;
     }
   }
-  if (merit < q.tolerance) reason = 'converged';
-  else evaluate(q, w, p, h0, dx);
-  return { converged: reason === 'converged', iterations, residual: merit, h0, reason };
+  evaluate(q, w, p, h0, dx);
+  const residual = w.norms[1] as number;
+  if (residual < q.tolerance) reason = 'converged';
+  else if (reason === 'converged') reason = 'stalled';
+  return { converged: reason === 'converged', iterations, residual, h0, reason };
 }
 
 function elastic(w: EhlWorkspace, p: Float64Array, i: number, n: number): number {
@@ -148,8 +164,9 @@ function elastic(w: EhlWorkspace, p: Float64Array, i: number, n: number): number
 }
 
 /**
- * Film, density and flow factor at every node for pressures `p` and offset `h0`; returns the largest
- * scaled residual (complementarity rows and load balance). Leaves the node state in the workspace.
+ * Film, density and flow factor at every node for pressures `p` and offset `h0`; returns the
+ * root-mean-square scaled residual (complementarity rows and load balance), the line search's merit,
+ * and writes it and the largest into `w.norms`. Leaves the node state in the workspace.
  */
 function evaluate(q: DimensionlessProblem, w: EhlWorkspace, p: Float64Array, h0: number, dx: number): number {
   const n = q.nodes;
@@ -174,18 +191,24 @@ function evaluate(q: DimensionlessProblem, w: EhlWorkspace, p: Float64Array, h0:
     dEpsP[i] = e * (dr / r - dLnEta);
     dEpsH[i] = hi > H_FLOOR ? (3 * e) / hi : 0;
   }
-  let worst = Math.abs(load * dx - Math.PI / 2) / (Math.PI / 2);
+  const loadError = (load * dx - Math.PI / 2) / (Math.PI / 2);
+  let worst = Math.abs(loadError);
+  let squares = loadError * loadError;
   for (let i = 1; i < n - 1; i++) {
     const c = rowCoefficients(w, p, i, dx);
     const phi = Math.min(p[i] as number, -c.residual / Math.abs(c.diagonal));
     const a = Math.abs(phi);
+    squares += phi * phi;
     if (!(a <= worst)) worst = Number.isNaN(a) ? Infinity : a;
   }
-  return worst;
+  const rms = Math.sqrt(squares / (n - 1));
+  w.norms[0] = Number.isFinite(rms) ? rms : Infinity;
+  w.norms[1] = worst;
+  return w.norms[0] as number;
 }
 
 /** Coefficients of Reynolds row i, written into one reused object. */
-const ROW = { residual: 0, diagonal: 0, dPm: 0, dP0: 0, dPp: 0, dHm: 0, dH0: 0, dHp: 0 };
+const ROW = { residual: 0, diagonal: 0, dPmm: 0, dPm: 0, dP0: 0, dPp: 0, dHmm: 0, dHm: 0, dH0: 0, dHp: 0 };
 
 function rowCoefficients(w: EhlWorkspace, p: Float64Array, i: number, dx: number): typeof ROW {
   const { h, rho, dRho, eps, dEpsP, dEpsH, kernel } = w;
@@ -194,17 +217,24 @@ function rowCoefficients(w: EhlWorkspace, p: Float64Array, i: number, dx: number
   const em = ((eps[i - 1] as number) + (eps[i] as number)) / 2;
   const ep = ((eps[i] as number) + (eps[i + 1] as number)) / 2;
   const gp = pp - p0, gm = p0 - pm;
-  const rhm = (rho[i - 1] as number) * (h[i - 1] as number);
   const rh0 = (rho[i] as number) * (h[i] as number);
-  ROW.residual = (ep * gp - em * gm) / dx2 - (rh0 - rhm) / dx;
+  const rhm = (rho[i - 1] as number) * (h[i - 1] as number);
+  // Wedge term by upwind differences: second order (3, −4, 1)/2 or first order (1, −1); first order
+  // next to the inlet boundary.
+  const second = SECOND_ORDER[0] === 1 && i > 1;
+  const c0 = second ? 1.5 : 1, c1 = second ? -2 : -1, c2 = second ? 0.5 : 0;
+  const rhmm = second ? (rho[i - 2] as number) * (h[i - 2] as number) : 0;
+  ROW.residual = (ep * gp - em * gm) / dx2 - (c0 * rh0 + c1 * rhm + c2 * rhmm) / dx;
   ROW.dPp = ep / dx2 + ((dEpsP[i + 1] as number) / 2) * gp / dx2;
-  ROW.dP0 = -(ep + em) / dx2 + ((dEpsP[i] as number) / 2) * (gp - gm) / dx2 - ((dRho[i] as number) * (h[i] as number)) / dx;
-  ROW.dPm = em / dx2 - ((dEpsP[i - 1] as number) / 2) * gm / dx2 + ((dRho[i - 1] as number) * (h[i - 1] as number)) / dx;
+  ROW.dP0 = -(ep + em) / dx2 + ((dEpsP[i] as number) / 2) * (gp - gm) / dx2 - (c0 * (dRho[i] as number) * (h[i] as number)) / dx;
+  ROW.dPm = em / dx2 - ((dEpsP[i - 1] as number) / 2) * gm / dx2 - (c1 * (dRho[i - 1] as number) * (h[i - 1] as number)) / dx;
+  ROW.dPmm = second ? -(c2 * (dRho[i - 2] as number) * (h[i - 2] as number)) / dx : 0;
   ROW.dHp = ((dEpsH[i + 1] as number) / 2) * gp / dx2;
-  ROW.dH0 = ((dEpsH[i] as number) / 2) * (gp - gm) / dx2 - (rho[i] as number) / dx;
-  ROW.dHm = -((dEpsH[i - 1] as number) / 2) * gm / dx2 + (rho[i - 1] as number) / dx;
+  ROW.dH0 = ((dEpsH[i] as number) / 2) * (gp - gm) / dx2 - (c0 * (rho[i] as number)) / dx;
+  ROW.dHm = -((dEpsH[i - 1] as number) / 2) * gm / dx2 - (c1 * (rho[i - 1] as number)) / dx;
+  ROW.dHmm = second ? -(c2 * (rho[i - 2] as number)) / dx : 0;
   const k0 = kernel[0] as number, k1 = kernel[1] as number;
-  ROW.diagonal = ROW.dP0 + ROW.dHm * k1 + ROW.dH0 * k0 + ROW.dHp * k1;
+  ROW.diagonal = ROW.dP0 + ROW.dHmm * (kernel[2] as number) + ROW.dHm * k1 + ROW.dH0 * k0 + ROW.dHp * k1;
   return ROW;
 }
 
@@ -228,17 +258,19 @@ function assemble(q: DimensionlessProblem, w: EhlWorkspace, p: Float64Array, dx:
       continue;
     }
     rhs[r] = -c.residual * s;
-    const am = c.dHm * s, a0 = c.dH0 * s, ap = c.dHp * s;
+    const amm = c.dHmm * s, am = c.dHm * s, a0 = c.dH0 * s, ap = c.dHp * s;
     for (let j = 1; j < n - 1; j++) {
+      const kmm = i > 1 ? (kernel[Math.abs(i - 2 - j)] as number) : 0;
       const km = kernel[Math.abs(i - 1 - j)] as number;
       const k0 = kernel[Math.abs(i - j)] as number;
       const kp = kernel[Math.abs(i + 1 - j)] as number;
-      matrix[row + j - 1] = am * km + a0 * k0 + ap * kp;
+      matrix[row + j - 1] = amm * kmm + am * km + a0 * k0 + ap * kp;
     }
+    if (i > 2) matrix[row + r - 2] = (matrix[row + r - 2] as number) + c.dPmm * s;
     if (i > 1) matrix[row + r - 1] = (matrix[row + r - 1] as number) + c.dPm * s;
     matrix[row + r] = (matrix[row + r] as number) + c.dP0 * s;
     if (i < n - 2) matrix[row + r + 1] = (matrix[row + r + 1] as number) + c.dPp * s;
-    matrix[row + m - 1] = am + a0 + ap;
+    matrix[row + m - 1] = amm + am + a0 + ap;
   }
   const last = (m - 1) * m;
   for (let j = 0; j < m - 1; j++) matrix[last + j] = dx;

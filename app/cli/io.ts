@@ -14,4 +14,5 @@ export const USAGE = `usage:
   flankfilm verify PDF [--review FILE]
   flankfilm schema
   flankfilm demo [DIR]
+  flankfilm ehl REVIEW --case NAME [--oil NAME] --at A|B|C|D|E|lambda-min|POSITION_mm [--nodes N] [--law roelands|barus] [--json]
 `;

@@ -37,6 +37,7 @@ function Solved({ r, units }: { r: EhlPointResult; units: UnitSystem }) {
           ? `Converged in ${r.iterations} iterations on ${r.nodes} nodes, ${formatResult(r.ms, 2)} ms in a worker.`
           : `Did not converge after ${r.iterations} iterations (last residual ${r.residual.toExponential(1)}): the figures are provisional.`}
       </p>
+      <h3 className="film-chart__title">{spec.title}</h3>
       <FilmChart spec={spec} described={described} />
       <dl className="qlist qlist--row">
         <Figure label="Minimum film, numerical" kind="film" value={r.hMin_um} units={units} testId="film-hmin" />

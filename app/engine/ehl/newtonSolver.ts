@@ -110,6 +110,10 @@ export function solveDimensionless(q: DimensionlessProblem, w: EhlWorkspace): Di
   let h0 = q.startCentralFilm - elastic(w, p, iZero, n) - ((x[iZero] as number) ** 2) / 2;
 
   let merit = evaluate(q, w, p, h0, dx);
+  // Non-monotone acceptance (Grippo, Lampariello & Lucidi, SIAM J. Numer. Anal. 23 (1986) 707–716):
+  // a step is measured against the worst of the last few merits, so a full Newton step that crosses
+  // a kink of the complementarity function is not cut to a crawl.
+  const recent = [merit, merit, merit, merit];
   let iterations = 0;
   let reason: DimensionlessSolution['reason'] = 'iteration-limit';
   while (iterations < q.maxIterations) {
@@ -134,10 +138,12 @@ export function solveDimensionless(q: DimensionlessProblem, w: EhlWorkspace): Di
       pTrial[n - 1] = 0;
       const h0Trial = h0 + step * (w.rhs[n - 2] as number);
       const m = evaluate(q, w, pTrial, h0Trial, dx);
-      if (Number.isFinite(m) && (m < merit * (1 - 1e-4 * step) || tries === 11)) {
+      const reference = Math.max(recent[0] as number, recent[1] as number, recent[2] as number, recent[3] as number);
+      if (Number.isFinite(m) && (m < reference * (1 - 1e-4 * step) || tries === 11)) {
         p.set(pTrial);
         h0 = h0Trial;
         merit = m;
+        recent[iterations % 4] = m;
         accepted = true;
         break;
       }

@@ -2,6 +2,7 @@ import { lineContactEhl, type LineContactEhlOptions, type LineContactEhlResult }
 import { numericalFilmInWords } from '../engine/ehl/filmInWords';
 import { ANTI_WEAR_TRIBOFILM } from '../engine/film/tribofilmNote';
 import { micrometres, toMegapascals, toMicrometres, type Metres } from '../engine/units';
+import { WarningSink } from '../engine/diagnostics';
 import { ehlPointSetup, type EhlPointRequest, type EhlPointSetup } from './ehlPoint';
 import type { Review } from './schema';
 
@@ -12,6 +13,9 @@ export interface EhlPointResult {
   residual: number;
   stopReason: string;
   nodes: number;
+  /** Whether the grid resolves the exit constriction; if not, `suggestedNodes` would. */
+  gridResolved: boolean;
+  suggestedNodes: number | null;
   ms: number;
   viscosityLaw: string;
   loadCase: string;
@@ -44,9 +48,10 @@ export interface EhlPointResult {
 export function ehlAtPoint(review: Review, req: EhlPointRequest, options: LineContactEhlOptions = {}, now: () => number = () => 0): EhlPointResult {
   const setup = ehlPointSetup(review, req);
   const t0 = now();
-  const r = lineContactEhl(setup.input, options);
+  const sink = new WarningSink();
+  const r = lineContactEhl(setup.input, options, sink);
   const ms = now() - t0;
-  return toResult(setup, r, ms);
+  return toResult({ ...setup, warnings: [...setup.warnings, ...sink.items] }, r, ms);
 }
 
 function toResult(s: EhlPointSetup, r: LineContactEhlResult, ms: number): EhlPointResult {
@@ -58,6 +63,8 @@ function toResult(s: EhlPointSetup, r: LineContactEhlResult, ms: number): EhlPoi
     residual: r.residual,
     stopReason: r.stopReason,
     nodes: r.nodes,
+    gridResolved: r.gridResolved,
+    suggestedNodes: r.suggestedNodes,
     ms,
     viscosityLaw: r.viscosityLaw,
     loadCase: s.caseName,

@@ -48,6 +48,13 @@ function Solved({ r, units }: { r: EhlPointResult; units: UnitSystem }) {
         <Figure label="Hertz pressure" kind="stress" value={r.hertzP0_MPa} units={units} />
       </dl>
       <p data-testid="film-words">{r.inWords}</p>
+      {r.warnings.length ? (
+        <ul className="notes" data-testid="film-notes">
+          {r.warnings.map((w) => (
+            <li key={w.code}>{w.message}</li>
+          ))}
+        </ul>
+      ) : null}
       <p className="note">
         Isothermal solution at the bulk temperature {formatResult(toDisplay('temperature', r.filmTemperature_C, units), 3)} {unitLabel('temperature', units)}
         {r.thermalFactor < 1 ? `; the formula's film includes the inlet shear-heating factor ${formatResult(r.thermalFactor, 3)}` : ''}. A cross-check at one point, not a replacement for the path

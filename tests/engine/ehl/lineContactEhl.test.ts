@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { EngineInputError } from '../../../app/engine/diagnostics';
+import { EngineInputError, WarningSink } from '../../../app/engine/diagnostics';
 import { lineContactEhl, EHL_DEFAULT_NODES } from '../../../app/engine/ehl/lineContactEhl';
 import { deformationKernel } from '../../../app/engine/ehl/kernel';
 import { densityRatio, lnViscosityRatio, viscosityParameters } from '../../../app/engine/ehl/pressureLaws';
@@ -48,15 +48,26 @@ describe('numerical EHL: the solve', () => {
     expect(r.nodes).toBe(EHL_DEFAULT_NODES);
   });
 
-  // Measured, not hidden: at W = 2e−4 the change is 3.8 %, at U = 3e−12, W = 1.3e−4 it is 5.4 %, and
-  // at W = 4e−4 13 %: there the exit constriction is narrower than the default grid resolves.
+  // Measured, not hidden: at W = 4e−4 the change is 7 %, at W = 1e−3 36 %: there the exit
+  // constriction is narrower than the default grid resolves, and the result says so (next test).
   it('mesh refinement N → 2N changes h_min by less than 3 % in the moderate-load range', () => {
-    for (const [U, W] of [[1e-11, 1.3e-4], [1e-11, 5e-5], [3e-11, 1.3e-4]] as const) {
+    for (const [U, W] of [[1e-11, 1.3e-4], [1e-11, 5e-5], [3e-11, 1.3e-4], [3e-12, 1.3e-4], [1e-11, 2e-4]] as const) {
       const a = lineContactEhl(pointAt(U, W), { nodes: 257 });
       const b = lineContactEhl(pointAt(U, W), { nodes: 513 });
       expect(a.converged && b.converged).toBe(true);
       expect(Math.abs(b.hMin / a.hMin - 1), `${a.hMin} → ${b.hMin}`).toBeLessThan(0.03);
     }
+  });
+
+  it('a grid too coarse for the exit constriction is said, with the nodes that would resolve it', () => {
+    const sink = new WarningSink();
+    const r = lineContactEhl(pointAt(1e-11, 1e-3), {}, sink); // pH ≈ 2.9 GPa
+    expect(r.gridResolved).toBe(false);
+    expect(r.suggestedNodes as number).toBeGreaterThan(r.nodes);
+    expect(sink.items.map((w) => w.code)).toContain('ehl.grid-coarse');
+    const ok = new WarningSink();
+    expect(lineContactEhl(pointAt(1e-11, 1.3e-4), {}, ok).gridResolved).toBe(true);
+    expect(ok.items.map((w) => w.code)).not.toContain('ehl.grid-coarse');
   });
 
   it('Barus gives a thicker film than Roelands for the same α (its viscosity is higher under pressure)', () => {
@@ -88,5 +99,20 @@ describe('numerical EHL: the solve', () => {
     const r = lineContactEhl(pointAt(1.5e-10, 6.3e-5));
     expect(r.converged, `${r.stopReason} ${r.residual}`).toBe(true);
     expect(r.xOverB[0] as number).toBeLessThan(-4.5);
+  });
+});
+
+describe('numerical EHL: never NaN, over and past the fitted range', () => {
+  it('corners of U 1e−13…1e−9 and W 2e−6…3e−3 give finite figures and say whether they converged', () => {
+    for (const U of [1e-13, 1e-11, 1e-9]) {
+      for (const W of [2e-6, 1e-4, 3e-3]) {
+        const r = lineContactEhl(pointAt(U, W), { nodes: 129 });
+        const all = [r.hMin, r.hCentral, r.pMax, r.residual, r.xAtHMin, r.xAtPMax];
+        expect(all.every(Number.isFinite), `U ${U}, W ${W}: ${all.join(', ')}`).toBe(true);
+        expect(r.film.every(Number.isFinite) && r.pressure.every(Number.isFinite)).toBe(true);
+        expect(typeof r.converged).toBe('boolean');
+        if (!r.converged) expect(r.stopReason).not.toBe('converged');
+      }
+    }
   });
 });

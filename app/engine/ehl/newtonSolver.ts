@@ -35,8 +35,6 @@ export type WedgeScheme = 'hybrid' | 'second-order' | 'first-order';
 /** x/b upstream of which the hybrid scheme differences the wedge term to second order. */
 const HYBRID_EDGE = -1;
 
-/** The scheme of the solve under way (one flag, so the row kernel allocates nothing). */
-const SECOND_ORDER = new Uint8Array(1);
 
 /** Arrays of one solve; make once per node count and reuse (nothing is allocated per iteration). */
 export interface EhlWorkspace {
@@ -56,12 +54,14 @@ export interface EhlWorkspace {
   readonly scratch: Float64Array;
   /** [root-mean-square, largest] scaled residual of the last evaluation. */
   readonly norms: Float64Array;
+  /** The wedge scheme of the solve under way: 0 first order, 1 second order, 2 hybrid. */
+  readonly wedgeMode: Uint8Array;
 }
 
 export function ehlWorkspace(nodes: number): EhlWorkspace {
   const a = () => new Float64Array(nodes);
   const m = nodes - 1;
-  return { nodes, x: a(), p: a(), h: a(), kernel: a(), rho: a(), dRho: a(), eps: a(), dEpsP: a(), dEpsH: a(), pTrial: a(), rhs: new Float64Array(m), matrix: new Float64Array(m * m), scratch: new Float64Array(1), norms: new Float64Array(2) };
+  return { nodes, x: a(), p: a(), h: a(), kernel: a(), rho: a(), dRho: a(), eps: a(), dEpsP: a(), dEpsH: a(), pTrial: a(), rhs: new Float64Array(m), matrix: new Float64Array(m * m), scratch: new Float64Array(1), norms: new Float64Array(2), wedgeMode: new Uint8Array(1) };
 }
 
 export interface DimensionlessSolution {
@@ -98,7 +98,7 @@ export function solveDimensionless(q: DimensionlessProblem, w: EhlWorkspace): Di
   const n = q.nodes;
   const dx = (q.xOut - q.xIn) / (n - 1);
   const { x, p, pTrial } = w;
-  SECOND_ORDER[0] = q.wedge === 'second-order' ? 1 : q.wedge === 'hybrid' ? 2 : 0;
+  w.wedgeMode[0] = q.wedge === 'second-order' ? 1 : q.wedge === 'hybrid' ? 2 : 0;
   for (let i = 0; i < n; i++) {
     const xi = q.xIn + i * dx;
     x[i] = xi;
@@ -233,7 +233,7 @@ function rowCoefficients(w: EhlWorkspace, p: Float64Array, i: number, dx: number
   const rhm = (rho[i - 1] as number) * (h[i - 1] as number);
   // Wedge term by upwind differences: second order (3, −4, 1)/2 or first order (1, −1); first order
   // next to the inlet boundary.
-  const mode = SECOND_ORDER[0] as number;
+  const mode = w.wedgeMode[0] as number;
   const second = i > 1 && (mode === 1 || (mode === 2 && (w.x[i] as number) < HYBRID_EDGE));
   const c0 = second ? 1.5 : 1, c1 = second ? -2 : -1, c2 = second ? 0.5 : 0;
   const rhmm = second ? (rho[i - 2] as number) * (h[i - 2] as number) : 0;

@@ -116,3 +116,21 @@ describe('numerical EHL: never NaN, over and past the fitted range', () => {
     }
   });
 });
+
+describe('numerical EHL: convergence over the moderate range', () => {
+  it('a spread of U 1e−12…1e−10, W 2e−5…5e−4, G 2500…6000, both laws, converges from the Hertzian start', () => {
+    const E = 2.26e11, R = 0.01;
+    let seed = 12345;
+    const rnd = () => (seed = (seed * 1103515245 + 12345) % 2147483648) / 2147483648; // a fixed LCG: the same points every run
+    for (let k = 0; k < 12; k++) {
+      const U = 10 ** (-12 + 2 * rnd());
+      const W = 10 ** (Math.log10(2e-5) + Math.log10(25) * rnd());
+      const G = 2500 + 3500 * rnd();
+      const eta0 = 0.005 + 0.3 * rnd();
+      const law = rnd() < 0.5 ? 'roelands' : 'barus';
+      const r = lineContactEhl({ eta0, alpha: G / E, uMean: (U * E * R) / eta0, radius: R, loadPerLength: W * E * R, eReduced: E } as never, { viscosityLaw: law });
+      expect(r.converged, `U ${U}, W ${W}, G ${G}, ${law}: ${r.stopReason} ${r.residual}`).toBe(true);
+      expect(r.iterations).toBeLessThanOrEqual(30);
+    }
+  });
+});

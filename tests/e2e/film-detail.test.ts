@@ -21,7 +21,7 @@ describe('Film detail', () => {
     await expect(dialog.locator('h2').textContent()).resolves.toBe('Film detail');
     await expect(dialog.textContent()).resolves.toMatch(/C \(pitch point\)/);
     const words = await dialog.locator('[data-testid=film-words]').textContent();
-    expect(words).toMatch(/tribofilm of 0\.050–0\.15 µm \(common practice\)/);
+    expect(words).toMatch(/tribofilm of 50–150 nm \(common practice\)/);
     expect(words).toMatch(/roughness/);
     const label = await dialog.locator('[data-testid=film-chart]').getAttribute('aria-label');
     expect(label).toMatch(/composite roughness band/);

@@ -14,7 +14,7 @@ const um = (m: number): string => {
  * @param converged - whether the solve converged; if not, the sentence says the figure is provisional
  */
 export function numericalFilmInWords(hMin: Metres, sigma: Metres, converged: boolean, tribofilm: TribofilmRange = ANTI_WEAR_TRIBOFILM): string {
-  const head = `The numerical minimum film is ${um(hMin)} µm against a composite roughness of ${um(sigma)} µm and an anti-wear tribofilm of ${um(tribofilm.min)}–${um(tribofilm.max)} µm (common practice)`;
+  const head = `The numerical minimum film is ${um(hMin)} µm against a composite roughness of ${um(sigma)} µm and an anti-wear tribofilm of ${Math.round(tribofilm.min * 1e9)}–${Math.round(tribofilm.max * 1e9)} nm (common practice)`;
   const tail = converged ? '' : ' The solution did not converge, so this figure is provisional.';
   const belowRough = hMin < sigma;
   let verdict: string;

@@ -4,6 +4,7 @@ import { ANTI_WEAR_TRIBOFILM } from '../engine/film/tribofilmNote';
 import { micrometres, toMegapascals, toMicrometres, type Metres } from '../engine/units';
 import { WarningSink } from '../engine/diagnostics';
 import { ehlPointSetup, type EhlPointRequest, type EhlPointSetup } from './ehlPoint';
+import type { Results } from './results';
 import type { Review } from './schema';
 
 /** The numerical film at one point, in display units (what `flankfilm ehl --json` prints). */
@@ -89,4 +90,15 @@ function toResult(s: EhlPointSetup, r: LineContactEhlResult, ms: number): EhlPoi
     profile,
     warnings: s.warnings.map((w) => ({ code: w.code, message: w.message })),
   };
+}
+
+/**
+ * The Film detail the record carries when asked: at the point of least λ of the case × oil with
+ * the lowest λmin of the results. Null when the review has no oil.
+ */
+export function recordFilmDetail(review: Review, results: Results, now: () => number = () => 0): EhlPointResult | null {
+  let worst: Results['cases'][number] | null = null;
+  for (const c of results.cases) if (c.oil !== null && c.lambdaMin !== null && (worst === null || c.lambdaMin < (worst.lambdaMin as number))) worst = c;
+  if (!worst || worst.oil === null) return null;
+  return ehlAtPoint(review, { caseName: worst.loadCase, oilName: worst.oil, at: 'lambda-min' }, {}, now);
 }

@@ -40,3 +40,29 @@ describe('flankfilm ehl', () => {
     expect(err).toMatch(/usage:/);
   });
 });
+
+describe('flankfilm review --pdf --film-detail', () => {
+  it('adds the Film detail at least λ to the record, only when asked', async () => {
+    const { mkdtempSync } = await import('node:fs');
+    const { tmpdir } = await import('node:os');
+    const { join } = await import('node:path');
+    const { execFileSync } = await import('node:child_process');
+    const dir = mkdtempSync(join(tmpdir(), 'flankfilm-ehl-'));
+    const withFilm = join(dir, 'with.pdf');
+    const without = join(dir, 'without.pdf');
+    expect((await cli('review', DEMO, '--pdf', withFilm, '--film-detail')).code).toBe(0);
+    expect((await cli('review', DEMO, '--pdf', without)).code).toBe(0);
+    const text = (f: string) => execFileSync('pdftotext', [f, '-'], { encoding: 'utf8' }).replace(/\s+/g, ' '); // lines wrap in the PDF
+    const a = text(withFilm);
+    expect(a).toMatch(/Film detail: the numerical film at the point of least λ/);
+    expect(a).toMatch(/anti-wear tribofilm of 50–150 nm \(common practice\)/);
+    expect(a).toMatch(/Converged in \d+ iterations/);
+    expect(text(without)).not.toMatch(/Film detail/);
+  });
+
+  it('--film-detail without --pdf is a usage error', async () => {
+    const { code, err } = await cli('review', DEMO, '--film-detail');
+    expect(code).toBe(2);
+    expect(err).toMatch(/--film-detail adds a page to the record: give --pdf OUT too/);
+  });
+});

@@ -149,7 +149,7 @@ export function App({ bridge }: { readonly bridge: Bridge }) {
               {stale ? <p className="stale-note" role="status">Showing the results of the last valid entry.</p> : null}
               <VerdictPanel results={results} units={units} />
               <SideBySidePanel results={results} units={units} />
-              <MeshPanel results={results} limits={limits} units={units} />
+              <MeshPanel results={results} review={review} limits={limits} units={units} />
               <MapPanel review={review} edition={doc.edition} results={results} units={units} />
               <SignoffPanel status={status} signoff={review?.signoff} canSign={review !== null} onOpen={() => setSigning(true)}>
                 <ChangesSinceSigning review={review} results={results ?? null} status={status} units={units} />

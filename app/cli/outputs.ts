@@ -10,6 +10,7 @@ import type { Review } from '../review/schema';
 import { resultsToCsv } from '../report/csv';
 import { RecordTextError, renderRecord, signaturePlaceholderFor, type Paper } from '../report/record';
 import { operatingMaps } from '../review/operatingMaps';
+import { recordFilmDetail, type EhlPointResult } from '../review/ehlAtPoint';
 import { signRecordPdf, SigningError } from '../report/pdfSign';
 import { EXIT, type CliIo } from './io';
 
@@ -19,6 +20,8 @@ export interface OutputOptions {
   /** PKCS#12 identity to sign the record with (needs `pdf`). */
   p12?: string;
   paper: Paper;
+  /** Include the Film detail at least λ (a numerical EHL solve) in the record. */
+  filmDetail?: boolean;
 }
 
 export const P12_PASSPHRASE_ENV = 'FLANKFILM_P12_PASSPHRASE';
@@ -62,6 +65,7 @@ async function writePdf(review: Review, results: Results, path: string, options:
     pdf = await renderRecord(review, results, {
       paper: options.paper,
       maps: operatingMaps(review) ?? [],
+      ...(options.filmDetail ? { films: filmsOf(review, results) } : {}),
       ...(p12 ? { signature: signaturePlaceholderFor(review, signingTime) } : {}),
     });
     if (p12) pdf = await signRecordPdf(pdf, p12, process.env[P12_PASSPHRASE_ENV] ?? '', signingTime);
@@ -84,6 +88,11 @@ async function writePdf(review: Review, results: Results, path: string, options:
   }
   io.err(`wrote ${path}${p12 ? ' (signed)' : ''}\n`);
   return EXIT.ok;
+}
+
+function filmsOf(review: Review, results: Results): EhlPointResult[] {
+  const f = recordFilmDetail(review, results);
+  return f ? [f] : [];
 }
 
 function errCode(e: unknown): string {

@@ -13,6 +13,7 @@ const COMMANDS: Record<string, Command> = {
   sign: async (args, io) => (await import('./commands/sign')).signCommand(args, io),
   verify: async (args, io) => (await import('./commands/verify')).verifyCommand(args, io),
   diff: async (args, io) => (await import('./commands/diff')).diffCommand(args, io),
+  ehl: async (args, io) => (await import('./commands/ehl')).ehlCommand(args, io),
 };
 
 /** Register a command (the record commands live in their own module). */

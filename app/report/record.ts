@@ -8,6 +8,8 @@
  * creation date comes from the review (sign-off time, else review date, else 1970-01-01), and
  * pdfkit's file ID is an MD5 of the document information, which holds no clock or random value.
  */
+import type { EhlPointResult } from '../review/ehlAtPoint';
+import { drawFilmDetail } from './sections/filmDetail';
 import PDFDocument from 'pdfkit';
 import { pdfkitAddPlaceholder } from '@signpdf/placeholder-pdfkit';
 import { fingerprintParts, FINGERPRINT_SCHEME } from '../review/fingerprint';
@@ -57,6 +59,8 @@ export interface RecordOptions {
   signature?: SignaturePlaceholder;
   /** The operating maps (app/review/operatingMaps.ts) to include; the record computes none itself. */
   maps?: readonly OperatingMapResult[];
+  /** Film detail pictures to include, when asked (app/review/ehlAtPoint.ts); none by default. */
+  films?: readonly EhlPointResult[];
 }
 
 /**
@@ -149,6 +153,7 @@ export async function renderRecord(review: Review, results: Results, options: Re
   drawCaseResults(ctx);
   drawComparison(ctx);
   if (options.maps) drawOperatingMaps(ctx, options.maps);
+  if (options.films) drawFilmDetail(ctx, options.films);
   drawVerdict(ctx);
   drawMethods(ctx);
   drawWarnings(ctx);

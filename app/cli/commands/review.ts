@@ -10,7 +10,7 @@ import { operatingMaps, operatingMapsCsv } from '../../review/operatingMaps';
 import { atomicWrite } from '../../files/atomicWrite';
 import { pathClash } from '../../files/sameFile';
 
-/** `flankfilm review FILE [--json] [--pdf OUT] [--csv OUT] [--map OUT.csv] [--p12 ID.p12] [--paper a4|letter]` */
+/** `flankfilm review FILE [--json] [--pdf OUT [--film-detail]] [--csv OUT] [--map OUT.csv] [--p12 ID.p12] [--paper a4|letter]` */
 export async function reviewCommand(args: string[], io: CliIo): Promise<number> {
   const { values, positionals } = parseArgs({
     args,
@@ -22,12 +22,14 @@ export async function reviewCommand(args: string[], io: CliIo): Promise<number> 
       map: { type: 'string' },
       p12: { type: 'string' },
       paper: { type: 'string', default: 'a4' },
+      'film-detail': { type: 'boolean', default: false },
     },
   });
   if (positionals.length !== 1) throw new UsageError('give exactly one review FILE');
   const paper = values.paper;
   if (paper !== 'a4' && paper !== 'letter') throw new UsageError('--paper is a4 or letter');
   if (values.p12 && !values.pdf) throw new UsageError('--p12 signs the record: give --pdf OUT too');
+  if (values['film-detail'] && !values.pdf) throw new UsageError('--film-detail adds a page to the record: give --pdf OUT too');
   const file = positionals[0] as string;
   // An output that resolves (through links, symbolic or hard) to an input or to another output is refused before anything runs.
   const outputs = (['pdf', 'csv', 'map'] as const).filter((k) => values[k] !== undefined).map((k) => [`--${k}`, values[k] as string] as const);
@@ -62,7 +64,7 @@ export async function reviewCommand(args: string[], io: CliIo): Promise<number> 
   }
   if (values.pdf || values.csv) {
     const { writeOutputs } = await import('../outputs');
-    return writeOutputs(loaded.review, results, { pdf: values.pdf, csv: values.csv, p12: values.p12, paper }, io);
+    return writeOutputs(loaded.review, results, { pdf: values.pdf, csv: values.csv, p12: values.p12, paper, filmDetail: values['film-detail'] }, io);
   }
   return EXIT.ok;
 }

@@ -1,5 +1,8 @@
 import { memo, useEffect, useId, useMemo, useState } from 'react';
 import type { Results } from '../../../app/review/results';
+import type { Review } from '../../../app/review/schema';
+import type { EhlPointRequest, EhlPointSpec } from '../../../app/review/ehlPoint';
+import { FilmDetail } from '../film/FilmDetail';
 import type { UnitSystem } from '../../units/units';
 import { Panel } from '../panels/Panel';
 import { QuantityRow } from '../Quantity';
@@ -8,14 +11,28 @@ import { meshCharts, type RegimeLimits } from './series';
 
 interface Props {
   readonly results: Results | null;
+  /** The review the results come from: Film detail solves at a point of it. */
+  readonly review?: Review | null;
   readonly limits: RegimeLimits;
   readonly units: UnitSystem;
 }
 
 /** Charts along the path of contact, A to E, for one load case × oil. */
-function MeshPanelView({ results, limits, units }: Props) {
+const FILM_POINTS: ReadonlyArray<{ value: EhlPointSpec & string; label: string }> = [
+  { value: 'lambda-min', label: 'least λ' },
+  { value: 'A', label: 'A' },
+  { value: 'B', label: 'B' },
+  { value: 'C', label: 'C' },
+  { value: 'D', label: 'D' },
+  { value: 'E', label: 'E' },
+];
+
+function MeshPanelView({ results, review = null, limits, units }: Props) {
   const [picked, setPicked] = useState(0);
+  const [filmAt, setFilmAt] = useState<EhlPointSpec & string>('lambda-min');
+  const [film, setFilm] = useState<EhlPointRequest | null>(null);
   const selectId = useId();
+  const pointId = useId();
   const cases = results?.cases ?? [];
   const index = picked < cases.length ? picked : 0;
   const c = cases[index];
@@ -40,6 +57,21 @@ function MeshPanelView({ results, limits, units }: Props) {
               </option>
             ))}
           </select>
+          {review && c?.oil ? (
+            <>
+              <label htmlFor={pointId}>Film at</label>
+              <select id={pointId} value={filmAt} onChange={(e) => setFilmAt(e.target.value as EhlPointSpec & string)} data-testid="film-point">
+                {FILM_POINTS.map((p) => (
+                  <option key={p.value} value={p.value}>
+                    {p.label}
+                  </option>
+                ))}
+              </select>
+              <button type="button" onClick={() => setFilm({ caseName: c.loadCase, oilName: c.oil as string, at: filmAt })} data-testid="film-open">
+                Film detail…
+              </button>
+            </>
+          ) : null}
         </span>
       }
     >
@@ -58,6 +90,7 @@ function MeshPanelView({ results, limits, units }: Props) {
           <MeshChart key={s.id} spec={s} fileStem={stem} />
         ))}
       </div>
+      {film && review ? <FilmDetail review={review} point={film} units={units} onClose={() => setFilm(null)} /> : null}
     </Panel>
   );
 }

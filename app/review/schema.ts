@@ -28,15 +28,26 @@ export const materialSchema = z.union([
 
 export const COMPONENTS = ['bronze-bushing', 'brass-cage', 'yellow-metal', 'backstop', 'clutch', 'food-contact', 'paint-or-seal-sensitive'] as const;
 
-const gearSchema = z.strictObject({
+/** Field help for the profile shift (the sign convention matters on a ring). */
+export const PROFILE_SHIFT_HELP =
+  'Profile shift coefficient x, sign as ISO 21771 gives it: x > 0 moves the basic rack towards the tooth tips and thickens the tooth at the reference circle. On an external gear that is away from the axis; on a ring (internal teeth) it is towards the axis, so the ring\'s inner (tip) diameter shrinks.';
+
+export const gearSchema = z.strictObject({
   teeth: z.number().int({ message: 'must be a whole number of teeth' }).gte(5, { message: 'must be at least 5 teeth' }).lte(1000, { message: 'must be at most 1000 teeth' }),
-  profileShift: finite().gte(-3).lte(3).optional(),
-  tipDiameter_mm: positive(20000, 'mm').optional(),
+  profileShift: finite().gte(-3).lte(3).optional().describe(PROFILE_SHIFT_HELP),
+  tipDiameter_mm: positive(20000, 'mm').optional().describe('Tip diameter da; for a ring, its inner diameter. Else d + 2 mn (1 + x), for a ring d − 2 mn (1 + x).'),
   roughnessRa_um: finite().gte(0.01, { message: 'must be at least 0.01 µm' }).lte(25, { message: 'must be at most 25 µm' }),
   material: materialSchema,
 });
 
+export const GEAR_PAIR_KINDS = ['external', 'internal'] as const;
+
 export const gearPairSchema = z.strictObject({
+  /**
+   * External pair (when absent), or internal: the wheel is a ring with internal teeth and the
+   * pinion runs inside it. No schema default, so reviews written before it keep their fingerprint.
+   */
+  kind: z.enum(GEAR_PAIR_KINDS).optional().describe('external (default) or internal: the wheel is a ring with internal teeth, its tip diameter is its inner diameter'),
   normalModule_mm: positive(100, 'mm').gte(0.1, { message: 'must be at least 0.1 mm' }),
   normalPressureAngle_deg: finite().gte(10).lte(35).default(20),
   helixAngle_deg: finite().gte(0).lte(45).default(0),

@@ -3,7 +3,7 @@ import type { GearPairGeometry } from '../engine/geometry/types';
 import { analyseCase } from '../engine/mesh/analyseCase';
 import { ENGINE_VERSION } from '../engine/version';
 import { micrometres, radiansToDegrees, toMillimetres } from '../engine/units';
-import type { Review } from './schema';
+import { asPairReview, type PairReview, type Review } from './schema';
 import type { CaseResult, GearResult, Results } from './results';
 import { gearPairInput, materialOf } from './toEngine';
 import { caseToResult } from './caseResult';
@@ -11,6 +11,7 @@ import { oilModelsOf, oilSummaries } from './oils';
 import { overallVerdicts } from './overall';
 import { gradeFinder } from './gradeFinder';
 import { engineDutyOf, enginePolicyOf } from './engineInputs';
+import { runPlanetary } from './planetary/runPlanetary';
 
 /**
  * Recompute a review: file → run() → results. Pure and deterministic; the same review gives
@@ -18,7 +19,16 @@ import { engineDutyOf, enginePolicyOf } from './engineInputs';
  * schema accepts but the physics cannot (impossible geometry, say).
  */
 export function run(review: Review): Results {
-  const geometry = gearPairGeometry(gearPairInput(review.gearPair));
+  const pair = asPairReview(review);
+  if (!pair) return runPlanetary(review, runPair);
+  return runPair(pair, gearPairGeometry(gearPairInput(pair.gearPair)));
+}
+
+/**
+ * The per-pair pipeline: every load case × oil through the engine's mesh analysis, the verdicts
+ * and the grade finder, for the given geometry (which a planetary stage computes per mesh).
+ */
+export function runPair(review: PairReview, geometry: GearPairGeometry): Results {
   const pinion = materialOf(review.gearPair.pinion.material);
   const wheel = materialOf(review.gearPair.wheel.material);
   const policy = enginePolicyOf(review.policy);
@@ -46,7 +56,7 @@ export function run(review: Review): Results {
   };
 }
 
-function gearResult(g: GearPairGeometry): GearResult {
+export function gearResult(g: GearPairGeometry): GearResult {
   const mm = toMillimetres;
   return {
     workingPressureAngle_deg: radiansToDegrees(g.workingPressureAngle),
@@ -68,7 +78,7 @@ function gearResult(g: GearPairGeometry): GearResult {
   };
 }
 
-function assumptionsOf(review: Review): string[] {
+function assumptionsOf(review: PairReview): string[] {
   const gp = review.gearPair;
   const out = [
     `ISO 6336-2 factors not computed by Flankfilm are inputs: Kv = ${gp.dynamicFactorKv}, KHβ = ${gp.faceLoadFactorKHbeta}, KHα = ${gp.transverseLoadFactorKHalpha}${gp.dynamicFactorKv === 1 && gp.faceLoadFactorKHbeta === 1 && gp.transverseLoadFactorKHalpha === 1 ? ' (all taken as 1)' : ''}.`,

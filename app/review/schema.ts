@@ -68,8 +68,13 @@ export const gearPairSchema = z.strictObject({
 export const loadCaseSchema = z
   .strictObject({
     name: z.string().min(1).max(120),
-    pinionSpeed_rpm: positive(100000, 'rpm'),
+    /** Gear pair reviews. */
+    pinionSpeed_rpm: positive(100000, 'rpm').optional(),
     pinionTorque_Nm: positive(1e8, 'N·m').optional(),
+    /** Planetary reviews: the sun's speed (unless the sun is held), its torque or the power. */
+    sunSpeed_rpm: positive(100000, 'rpm').optional().describe('Planetary stage: speed of the sun (not when the sun is held)'),
+    carrierSpeed_rpm: positive(100000, 'rpm').optional().describe('Planetary stage with the sun held: speed of the carrier'),
+    sunTorque_Nm: positive(1e8, 'N·m').optional().describe('Planetary stage: torque on the sun (driving or, when the sun is held, reaction)'),
     power_kW: positive(1e6, 'kW').optional(),
     applicationFactor: finite().gte(1, { message: 'must be at least 1 (ISO 6336-1)' }).lte(4).default(1),
     oilTemperature_C: finite().gte(-40, { message: 'must be at least −40 °C' }).lte(200, { message: 'must be at most 200 °C' }),
@@ -77,11 +82,39 @@ export const loadCaseSchema = z
     timeShare: finite().gt(0).lte(1).default(1),
   })
   .superRefine((c, ctx) => {
-    const n = Number(c.pinionTorque_Nm !== undefined) + Number(c.power_kW !== undefined);
+    const n = Number(c.pinionTorque_Nm !== undefined) + Number(c.sunTorque_Nm !== undefined) + Number(c.power_kW !== undefined);
     if (n !== 1) {
-      ctx.addIssue({ code: 'custom', path: ['pinionTorque_Nm'], message: 'give exactly one of pinionTorque_Nm or power_kW' });
+      const path = c.sunTorque_Nm !== undefined || c.sunSpeed_rpm !== undefined || c.carrierSpeed_rpm !== undefined ? 'sunTorque_Nm' : 'pinionTorque_Nm';
+      ctx.addIssue({ code: 'custom', path: [path], message: `give exactly one of ${path} or power_kW` });
     }
   });
+
+export const HELD_MEMBERS = ['ring', 'carrier', 'sun'] as const;
+
+/** Help for Kγ, with guide values. */
+export const MESH_LOAD_FACTOR_HELP =
+  'Mesh load factor Kγ: the most loaded planet\'s share of the sun torque over the equal share (≥ 1). Default 1 (ideal sharing, e.g. a floating sun with few planets). Guide values for usual accuracy [memory, weak]: 3 planets about 1.1, 4 about 1.25, 5 about 1.35, 6 about 1.45; take the gearbox maker\'s figure where there is one.';
+
+/**
+ * A simple planetary stage: sun, equal planets on one carrier, ring; one member held. Geometry is
+ * common to the three members; each member has the gear fields of a pair.
+ */
+export const planetarySchema = z.strictObject({
+  normalModule_mm: positive(100, 'mm').gte(0.1, { message: 'must be at least 0.1 mm' }),
+  normalPressureAngle_deg: finite().gte(10).lte(35).default(20),
+  helixAngle_deg: finite().gte(0).lte(45).default(0),
+  faceWidth_mm: positive(5000, 'mm'),
+  planets: z.number().int({ message: 'must be a whole number of planets' }).gte(1, { message: 'must be at least 1 planet' }).lte(12, { message: 'must be at most 12 planets' }),
+  meshLoadFactorKgamma: finite().gte(1, { message: 'must be at least 1' }).lte(2, { message: 'must be at most 2' }).default(1).describe(MESH_LOAD_FACTOR_HELP),
+  held: z.enum(HELD_MEMBERS).describe('The member held still: ring (sun drives the carrier), carrier (sun drives the ring) or sun (carrier drives the ring)'),
+  sun: gearSchema,
+  planet: gearSchema,
+  ring: gearSchema.describe('The ring, with internal teeth: its tip diameter is its inner diameter'),
+  components: z.array(z.enum(COMPONENTS)).max(20).default([]),
+  dynamicFactorKv: finite().gte(1).lte(5).default(1),
+  faceLoadFactorKHbeta: finite().gte(1).lte(5).default(1),
+  transverseLoadFactorKHalpha: finite().gte(1).lte(5).default(1),
+});
 
 export const FZG_STAGES = [1, 2, 3, 4, 5, 6, 7, 8, 9, 10, 11, 12] as const;
 export const fzgStageSchema = z.union([z.number().int().gte(1).lte(12), z.literal('>12')]);
@@ -148,22 +181,47 @@ export const signoffSchema = z.strictObject({
   fingerprint: z.string().regex(/^[0-9a-f]{64}$/, { message: 'must be a SHA-256 hex digest' }),
 });
 
-export const reviewSchema = z.strictObject({
-  format: z.literal(REVIEW_FORMAT),
-  version: z.literal(REVIEW_VERSION),
-  title: z.string().min(1).max(200),
-  id: z.string().max(100).optional(),
-  revision: z.number().int().gte(0).lte(100000).default(0),
-  /** Date the review was prepared (ISO 8601); the record uses it as its creation date. */
-  date: z.iso.date().optional(),
-  notes: z.string().max(10000).optional(),
-  displayUnits: z.enum(['si', 'us']).default('si'),
-  gearPair: gearPairSchema,
-  loadCases: z.array(loadCaseSchema).min(1).max(20),
-  oils: z.array(oilSchema).max(10),
-  policy: policySchema.default(() => policySchema.parse({})),
-  signoff: signoffSchema.optional(),
-});
+export const reviewSchema = z
+  .strictObject({
+    format: z.literal(REVIEW_FORMAT),
+    version: z.literal(REVIEW_VERSION),
+    title: z.string().min(1).max(200),
+    id: z.string().max(100).optional(),
+    revision: z.number().int().gte(0).lte(100000).default(0),
+    /** Date the review was prepared (ISO 8601); the record uses it as its creation date. */
+    date: z.iso.date().optional(),
+    notes: z.string().max(10000).optional(),
+    displayUnits: z.enum(['si', 'us']).default('si'),
+    /** A gear pair, or (instead) a planetary stage. */
+    gearPair: gearPairSchema.optional(),
+    planetary: planetarySchema.optional(),
+    loadCases: z.array(loadCaseSchema).min(1).max(20),
+    oils: z.array(oilSchema).max(10),
+    policy: policySchema.default(() => policySchema.parse({})),
+    signoff: signoffSchema.optional(),
+  })
+  .superRefine((r, ctx) => {
+    if ((r.gearPair === undefined) === (r.planetary === undefined)) {
+      ctx.addIssue({ code: 'custom', path: [r.gearPair === undefined ? 'gearPair' : 'planetary'], message: 'give exactly one gear set: gearPair or planetary' });
+      return;
+    }
+    r.loadCases.forEach((c, i) => {
+      const need = (key: string, why: string) => ctx.addIssue({ code: 'custom', path: ['loadCases', i, key], message: why });
+      const forbid = (keys: readonly string[], why: string) => {
+        for (const k of keys) if ((c as Record<string, unknown>)[k] !== undefined) need(k, why);
+      };
+      if (r.gearPair) {
+        if (c.pinionSpeed_rpm === undefined) need('pinionSpeed_rpm', 'is required for a gear pair');
+        forbid(['sunSpeed_rpm', 'carrierSpeed_rpm', 'sunTorque_Nm'], 'belongs to a planetary stage; a gear pair gives pinionSpeed_rpm and pinionTorque_Nm or power_kW');
+      } else if (r.planetary) {
+        const sunHeld = r.planetary.held === 'sun';
+        if (sunHeld && c.carrierSpeed_rpm === undefined) need('carrierSpeed_rpm', 'is required when the sun is held');
+        if (!sunHeld && c.sunSpeed_rpm === undefined) need('sunSpeed_rpm', 'is required for a planetary stage');
+        forbid(sunHeld ? ['sunSpeed_rpm'] : ['carrierSpeed_rpm'], sunHeld ? 'must be absent: the sun is held' : 'is given only when the sun is held; give sunSpeed_rpm');
+        forbid(['pinionSpeed_rpm', 'pinionTorque_Nm'], 'belongs to a gear pair; a planetary stage gives sunSpeed_rpm and sunTorque_Nm or power_kW');
+      }
+    });
+  });
 
 /** A review as written in a file (defaults may be absent). */
 export type ReviewInput = z.input<typeof reviewSchema>;
@@ -173,6 +231,19 @@ export type Policy = z.output<typeof policySchema>;
 export type Oil = z.output<typeof oilSchema>;
 export type LoadCase = z.output<typeof loadCaseSchema>;
 export type GearPair = z.output<typeof gearPairSchema>;
+export type Planetary = z.output<typeof planetarySchema>;
+export type HeldMember = (typeof HELD_MEMBERS)[number];
+/** A load case of a gear pair review (the pinion speed is given). */
+export type PairLoadCase = LoadCase & { pinionSpeed_rpm: number };
+/** A review of a gear pair: what the per-pair pipeline runs (a planetary review runs it per mesh). */
+export type PairReview = Omit<Review, 'gearPair' | 'planetary' | 'loadCases'> & { gearPair: GearPair; planetary?: undefined; loadCases: PairLoadCase[] };
+
+/** The review as a gear pair review, or null when it is a planetary stage. */
+export function asPairReview(r: Review): PairReview | null {
+  if (!r.gearPair) return null;
+  // The schema requires pinionSpeed_rpm on every load case of a gear pair review.
+  return r as PairReview;
+}
 export type Signoff = z.output<typeof signoffSchema>;
 export type FzgStage = z.output<typeof fzgStageSchema>;
 export type Decision = (typeof DECISIONS)[number];

@@ -5,7 +5,7 @@
  */
 import type { Regime } from '../engine/film/regime';
 import type { Decision } from './schema';
-import type { OilFit, VerdictCode } from './results';
+import type { OilFit, PlanetaryMesh, PlanetaryResult, VerdictCode } from './results';
 
 export const VERDICT_WORDS: Readonly<Record<VerdictCode, string>> = {
   'aw-suffices': 'Anti-wear chemistry suffices',
@@ -18,6 +18,17 @@ export const VERDICT_SHORT: Readonly<Record<VerdictCode, string>> = {
   'aw-suffices': 'AW suffices',
   'ep-warranted': 'EP warranted',
   'beyond-oil': 'Beyond oil',
+};
+
+export const MESH_WORDS: Readonly<Record<PlanetaryMesh, string>> = {
+  'sun-planet': 'sun–planet',
+  'planet-ring': 'planet–ring',
+};
+
+export const HELD_WORDS: Readonly<Record<PlanetaryResult['held'], string>> = {
+  ring: 'ring held',
+  carrier: 'carrier held',
+  sun: 'sun held',
 };
 
 export const DECISION_WORDS: Readonly<Record<Decision, string>> = {

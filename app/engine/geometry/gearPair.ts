@@ -78,7 +78,7 @@ export function gearPairGeometry(g: GearPairInput): GearPairGeometry {
         'geometry.centre-distance-impossible',
         F.a,
         `> ${(a0 * Math.cos(at) * 1e3).toFixed(3)} mm`,
-        `The centre distance ${(a * 1e3).toFixed(3)} mm is impossible: it must exceed ${(a0 * Math.cos(at) * 1e3).toFixed(3)} mm, the ${kind === 'internal' ? 'difference' : 'sum'} of the base radii.`,
+        `The centre distance ${(a * 1e3).toFixed(3)} mm is impossible: ${kind === 'internal' ? 'the base circles would not leave a line of action' : 'the base circles would overlap'} (it must exceed ${(a0 * Math.cos(at) * 1e3).toFixed(3)} mm, the ${kind === 'internal' ? 'difference' : 'sum'} of the base radii).`,
       );
     }
     awt = Math.acos(cosAwt) as Radians;

@@ -13,18 +13,36 @@ const MATERIAL_WORDS: Readonly<Record<(typeof MATERIAL_PRESETS)[number], string>
 /** Steel thermal data as a starting point for a custom material (materials.ts). */
 const CUSTOM_START = { youngsModulus_GPa: 206, poissonRatio: 0.3, thermalConductivity_WmK: 50, density_kgm3: 7800, specificHeat_JkgK: 470, structuralFactorXW: 1 };
 
-/** One gear of the pair: teeth, shift, tip, roughness, material. */
-export function GearMember({ member, title }: { readonly member: 'pinion' | 'wheel'; readonly title: string }) {
+type Member = 'pinion' | 'wheel' | 'sun' | 'planet' | 'ring';
+const SUBSCRIPT: Readonly<Record<Member, string>> = { pinion: '1', wheel: '2', sun: 'S', planet: 'P', ring: 'R' };
+
+interface Props {
+  readonly member: Member;
+  readonly title: string;
+  /** Where the gear set lives: a pair or a planetary stage. */
+  readonly root?: 'gearPair' | 'planetary';
+  /** The gear has internal teeth (a ring): its tip diameter is its inner diameter. */
+  readonly internal?: boolean;
+}
+
+/** One gear of the set: teeth, shift, tip, roughness, material. */
+export function GearMember({ member, title, root = 'gearPair', internal = false }: Props) {
   const { draft, dispatch } = useSheet();
-  const p = ['gearPair', member] as const;
+  const p = [root, member] as const;
+  const i = SUBSCRIPT[member];
   const material = getIn(draft, [...p, 'material']);
   const custom = typeof material === 'object' && material !== null;
   return (
     <fieldset className="member">
       <legend>{title}</legend>
-      <NumberField path={[...p, 'teeth']} label={`Teeth z${member === 'pinion' ? 1 : 2}`} />
-      <NumberField path={[...p, 'profileShift']} label={`Profile shift x${member === 'pinion' ? 1 : 2}`} optional />
-      <NumberField path={[...p, 'tipDiameter_mm']} label="Tip diameter da" kind="length" optional />
+      <NumberField path={[...p, 'teeth']} label={`Teeth z${i}`} />
+      <NumberField
+        path={[...p, 'profileShift']}
+        label={`Profile shift x${i}`}
+        optional
+        hint={internal ? 'ISO 21771 sign: x > 0 thickens the teeth and moves them towards the axis; the inner diameter shrinks' : 'ISO 21771 sign: x > 0 thickens the teeth and moves them away from the axis'}
+      />
+      <NumberField path={[...p, 'tipDiameter_mm']} label={internal ? 'Inner (tip) diameter da' : 'Tip diameter da'} kind="length" optional />
       <NumberField path={[...p, 'roughnessRa_um']} label="Flank roughness Ra" kind="roughness" />
       <SelectField
         path={[...p, 'material']}

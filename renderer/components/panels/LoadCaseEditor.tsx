@@ -1,5 +1,6 @@
 import { useSheet } from '../../state/context';
 import { getIn } from '../../state/paths';
+import { caseKeys } from '../../state/gearSet';
 import { draftPower, draftTorque } from '../../state/reviewState';
 import { NumberField } from '../fields/NumberField';
 import { SelectField } from '../fields/SelectField';
@@ -13,17 +14,18 @@ export function LoadCaseEditor({ index, canRemove }: { readonly index: number; r
   const { draft, dispatch } = useSheet();
   const p = ['loadCases', index] as const;
   const name = getIn(draft, [...p, 'name']);
-  const givesTorque = getIn(draft, [...p, 'pinionTorque_Nm']) !== undefined;
+  const k = caseKeys(draft);
+  const givesTorque = getIn(draft, [...p, k.torque]) !== undefined;
   const legend = typeof name === 'string' && name ? name : `Load case ${index + 1}`;
   return (
     <fieldset className="item" data-testid={`load-case-${index}`}>
       <legend>{legend}</legend>
       <div className="grid-fields">
         <TextField path={[...p, 'name']} label="Name" wide />
-        <NumberField path={[...p, 'pinionSpeed_rpm']} label="Pinion speed n1" unit="rpm" />
+        <NumberField path={[...p, k.speed]} label={k.speedLabel} unit="rpm" />
         <NumberField
-          path={[...p, 'pinionTorque_Nm']}
-          label="Pinion torque T1"
+          path={[...p, k.torque]}
+          label={k.torqueLabel}
           note={givesTorque ? undefined : 'from the power'}
           kind="torque"
           value={draftTorque(draft, index)}

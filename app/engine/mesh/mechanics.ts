@@ -52,8 +52,7 @@ export interface MeshMechanics {
  * Reduced radius in the normal plane at s from T1: ρn = ρ/cos βb, with ρ1 = s and ρ2 = T1T2 − s
  * (external, convex–convex) or ρ2 = s + T1T2 (internal, conformal: ρred = ρ1 ρ2/(ρ2 − ρ1)).
  */
-export function normalReducedRadius(g: GearPairGeometry, s: number): Metres {
-  const cosBb = Math.cos(g.baseHelixAngle);
+export function normalReducedRadius(g: GearPairGeometry, s: number, cosBb: number = Math.cos(g.baseHelixAngle)): Metres {
   return g.kind === 'internal'
     ? conformalReducedRadius((s / cosBb) as Metres, ((s + g.lineOfAction) / cosBb) as Metres)
     : reducedRadius((s / cosBb) as Metres, ((g.lineOfAction - s) / cosBb) as Metres);
@@ -73,6 +72,7 @@ export function meshMechanics(g: GearPairGeometry, pinion: Material, wheel: Mate
   const forces = toothForces(duty.pinionTorque, g.referenceDiameter1, g.transversePressureAngle, g.faceWidth);
   const omega1 = duty.pinionSpeed;
   const omega2 = (omega1 / g.u) as RadiansPerSecond;
+  const cosBb = Math.cos(g.baseHelixAngle);
   const internal = g.kind === 'internal';
   // One load along the whole path (stress, film, flash): KA Kv KHβ KHα Fbt/b, as ISO/TS 6336-20 loads
   // its flash temperature; with Kv = KHβ = KHα = 1 (the defaults) this is METHODS' KA Fbt/b.
@@ -84,7 +84,7 @@ export function meshMechanics(g: GearPairGeometry, pinion: Material, wheel: Mate
     if (s === g.points.C) pitchIndex = i;
     const share = loadShare(s, g.points, g.transverseContactRatio, g.overlapRatio);
     const load = (share * nominalLoad) as NewtonsPerMetre;
-    const rho = normalReducedRadius(g, s);
+    const rho = normalReducedRadius(g, s, cosBb);
     xg[i] = share;
     w[i] = load;
     rr[i] = rho;
@@ -99,7 +99,7 @@ export function meshMechanics(g: GearPairGeometry, pinion: Material, wheel: Mate
     z1[i] = fv.specificSliding1;
     z2[i] = fv.specificSliding2;
   }
-  const rhoC = normalReducedRadius(g, g.points.C);
+  const rhoC = normalReducedRadius(g, g.points.C, cosBb);
   const nominal = nominalContactStress(g, forces.tangential, eStar, {
     kA: duty.applicationFactor,
     kv: duty.dynamicFactor,

@@ -59,8 +59,8 @@ export function nominalContactStress(g: GearPairGeometry, ft: Newtons, eStar: Pa
   const zE = elasticityFactor(eStar);
   const zEpsilon = contactRatioFactor(g.transverseContactRatio, g.overlapRatio);
   const zBeta = helixAngleFactor(g);
-  const uTerm = g.kind === 'internal' ? (g.u - 1) / g.u : (g.u + 1) / g.u;
-  const sigmaH0 = zH * zE * zEpsilon * zBeta * Math.sqrt((ft * uTerm) / (g.referenceDiameter1 * g.faceWidth));
+  const uSum = g.kind === 'internal' ? g.u - 1 : g.u + 1;
+  const sigmaH0 = zH * zE * zEpsilon * zBeta * Math.sqrt((ft * uSum) / (g.referenceDiameter1 * g.faceWidth * g.u));
   const sigmaH = sigmaH0 * Math.sqrt(k.kA * k.kv * k.kHbeta * k.kHalpha);
   return { zH, zE, zEpsilon, zBeta, sigmaH0: sigmaH0 as Pascals, sigmaH: sigmaH as Pascals };
 }

@@ -20,10 +20,11 @@ export function summaryText(r: Results, state?: { status: ReviewStatus; review: 
     lines.push(...stageLines(r.planetary), '');
     for (const m of r.meshes) {
       lines.push(`${MESH_WORDS[m.mesh].replace(/^./, (c) => c.toUpperCase())} mesh (${m.mesh === 'sun-planet' ? 'external' : 'internal'}; speeds and torques of its pinion in the carrier frame)`);
-      lines.push(...gearLines(m.gear, '  '), '', ...caseLines(m.cases, '  '), '');
+      lines.push(...gearLines(m.gear, '  ', 'Mesh geometry'), '', ...caseLines(m.cases, '  '), '');
     }
   } else {
-    lines.push(...gearLines(r.gear, ''), '', ...caseLines(r.cases, ''));
+    const internal = state?.review.gearPair?.kind === 'internal';
+    lines.push(...gearLines(r.gear, '', internal ? 'Internal gear pair (pinion in a ring)' : 'Gear pair'), '', ...caseLines(r.cases, ''));
   }
   if (r.verdicts.length) {
     lines.push('', r.planetary ? 'Overall, per oil, across both meshes:' : 'Overall, per oil:');
@@ -34,9 +35,9 @@ export function summaryText(r: Results, state?: { status: ReviewStatus; review: 
   return lines.join('\n');
 }
 
-function gearLines(g: GearResult, indent: string): string[] {
+function gearLines(g: GearResult, indent: string, title: string): string[] {
   return [
-    `${indent}Gear pair: αwt ${f(g.workingPressureAngle_deg)}°, εα ${f(g.transverseContactRatio, 3)}, εβ ${f(g.overlapRatio, 3)}, a ${f(g.centerDistance_mm, 3)} mm, T1T2 ${f(g.lineOfAction_mm, 2)} mm`,
+    `${indent}${title}: αwt ${f(g.workingPressureAngle_deg)}°, εα ${f(g.transverseContactRatio, 3)}, εβ ${f(g.overlapRatio, 3)}, a ${f(g.centerDistance_mm, 3)} mm, T1T2 ${f(g.lineOfAction_mm, 2)} mm`,
     `${indent}Path from T1 (mm): A ${f(g.points_mm.A)}  B ${f(g.points_mm.B)}  C ${f(g.points_mm.C)}  D ${f(g.points_mm.D)}  E ${f(g.points_mm.E)}`,
     ...g.checks.map((c) => `${indent}  ${c.severity}: ${c.message}`),
   ];

@@ -140,7 +140,7 @@ export function App({ bridge }: { readonly bridge: Bridge }) {
           <main className="sheet">
             <div className="sheet__inputs" aria-label="Inputs" role="group">
               <ProblemList issues={issues} engineError={review ? computed.error : null} stale={stale} />
-              <GearPairPanel gear={results?.gear ?? null} stale={stale} />
+              <GearPairPanel results={results ?? null} stale={stale} />
               <DutyPanel />
               <OilsPanel summaries={results?.oils ?? []} />
               <PolicyPanel />

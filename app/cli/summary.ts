@@ -1,5 +1,5 @@
-import type { CaseResult, ChangeSide, LimitCheck, Results, Shortfall } from '../review/results';
-import { DECISION_WORDS, OIL_FIT_WORDS, REGIME_WORDS, SHORTFALL_SHORT, VERDICT_WORDS } from '../review/vocabulary';
+import type { CaseResult, ChangeSide, GearResult, LimitCheck, PlanetaryResult, Results, Shortfall } from '../review/results';
+import { DECISION_WORDS, HELD_WORDS, MESH_WORDS, OIL_FIT_WORDS, REGIME_WORDS, SHORTFALL_SHORT, VERDICT_WORDS } from '../review/vocabulary';
 import type { ReviewStatus } from '../review/results';
 import type { Review } from '../review/schema';
 import { STATUS_WORDS } from '../review/status';
@@ -22,7 +22,6 @@ const sideText = (s: ChangeSide) =>
 
 /** The compact human-readable summary of `flankfilm review FILE`: the need, the change, each oil, then the cases. */
 export function summaryText(r: Results, state?: { status: ReviewStatus; review: Review }): string {
-  const g = r.gear;
   const so = state?.review.signoff;
   const lines = [
     `${r.title}`,
@@ -38,7 +37,7 @@ export function summaryText(r: Results, state?: { status: ReviewStatus; review: 
     lines.push('');
   }
   if (r.verdicts.length) {
-    lines.push('Each oil against the need');
+    lines.push(r.planetary ? 'Each oil against the need, across both meshes' : 'Each oil against the need');
     for (const v of r.verdicts) {
       const short = v.shortfalls.length ? `short on ${shortfallList(v.shortfalls)}` : OIL_FIT_WORDS[v.oilFit];
       lines.push(`  ${v.oil}: ${v.code === 'beyond-oil' ? VERDICT_WORDS[v.code] : short}`);
@@ -46,22 +45,15 @@ export function summaryText(r: Results, state?: { status: ReviewStatus; review: 
     }
     lines.push('');
   }
-  lines.push(
-    `Gear pair: αwt ${f(g.workingPressureAngle_deg)}°, εα ${f(g.transverseContactRatio, 3)}, εβ ${f(g.overlapRatio, 3)}, a ${f(g.centerDistance_mm, 3)} mm, T1T2 ${f(g.lineOfAction_mm, 2)} mm`,
-    `Path from T1 (mm): A ${f(g.points_mm.A)}  B ${f(g.points_mm.B)}  C ${f(g.points_mm.C)}  D ${f(g.points_mm.D)}  E ${f(g.points_mm.E)}`,
-    ...g.checks.map((c) => `  ${c.severity === 'warning' ? 'Warning' : 'Note'}: ${c.message}`),
-    '',
-  );
-  for (const c of r.cases) {
-    lines.push(`${c.loadCase}${c.oil ? ` — ${c.oil}` : ''}`);
-    lines.push(`  v ${f(c.pitchLineVelocity_mps)} m/s; σH ${f(c.nominalContactStress_MPa, 0)} MPa (${c.nominalContactStressEdition}); pH,max ${f(c.maxHertzStress_MPa, 0)} MPa; pC (whole load) ${f(c.pitchHertzStress_MPa, 0)} MPa`);
-    if (c.oil) {
-      lines.push(`  λmin ${f(c.lambdaMin)} (${c.regime ? REGIME_WORDS[c.regime] : '—'}); θB,max ${f(c.maxContactTemperature_C, 0)} °C against θS ${f(c.scuffingTemperature_C, 0)} °C; FZG stage needed ${stage(c.verdict?.neededFzgStage ?? null)}`);
-      if (c.verdict) {
-        lines.push(`  ${c.verdict.checks.map(checkText).join('; ')}`);
-        lines.push(`  → ${VERDICT_WORDS[c.verdict.code]}; the oil ${c.verdict.shortfalls.length ? `is short on ${shortfallList(c.verdict.shortfalls)}` : 'meets the need'}`);
-      }
+  if (r.planetary && r.meshes) {
+    lines.push(...stageLines(r.planetary), '');
+    for (const m of r.meshes) {
+      lines.push(`${MESH_WORDS[m.mesh].replace(/^./, (c) => c.toUpperCase())} mesh (${m.mesh === 'sun-planet' ? 'external' : 'internal'}; speeds and torques of its pinion in the carrier frame)`);
+      lines.push(...gearLines(m.gear, '  ', 'Mesh geometry'), '', ...caseLines(m.cases, '  '), '');
     }
+  } else {
+    const internal = state?.review.gearPair?.kind === 'internal';
+    lines.push(...gearLines(r.gear, '', internal ? 'Internal gear pair (pinion in a ring)' : 'Gear pair'), '', ...caseLines(r.cases, ''));
   }
   for (const gf of r.gradeFinder) lines.push(`  Grade finder, ${gf.oil}: ${gf.note}`);
   const applying = r.cautions.filter((k) => k.applies);
@@ -74,4 +66,43 @@ export function summaryText(r: Results, state?: { status: ReviewStatus; review: 
   if (!applying.some((k) => k.id === 'defer')) lines.push('', "This review is an engineering aid, not an approval: follow the gearbox maker's lubricant list, local codes and the judgement of a licensed engineer.");
   lines.push('');
   return lines.join('\n');
+}
+
+function gearLines(g: GearResult, indent: string, title: string): string[] {
+  return [
+    `${indent}${title}: αwt ${f(g.workingPressureAngle_deg)}°, εα ${f(g.transverseContactRatio, 3)}, εβ ${f(g.overlapRatio, 3)}, a ${f(g.centerDistance_mm, 3)} mm, T1T2 ${f(g.lineOfAction_mm, 2)} mm`,
+    `${indent}Path from T1 (mm): A ${f(g.points_mm.A)}  B ${f(g.points_mm.B)}  C ${f(g.points_mm.C)}  D ${f(g.points_mm.D)}  E ${f(g.points_mm.E)}`,
+    ...g.checks.map((c) => `${indent}  ${c.severity === 'warning' ? 'Warning' : 'Note'}: ${c.message}`),
+  ];
+}
+
+function caseLines(cases: readonly CaseResult[], indent: string): string[] {
+  const lines: string[] = [];
+  for (const c of cases) {
+    lines.push(`${indent}${c.loadCase}${c.oil ? ` — ${c.oil}` : ''}`);
+    lines.push(`${indent}  v ${f(c.pitchLineVelocity_mps)} m/s; σH ${f(c.nominalContactStress_MPa, 0)} MPa (${c.nominalContactStressEdition}); pH,max ${f(c.maxHertzStress_MPa, 0)} MPa; pC (whole load) ${f(c.pitchHertzStress_MPa, 0)} MPa`);
+    if (c.oil) {
+      lines.push(`${indent}  λmin ${f(c.lambdaMin)} (${c.regime ? REGIME_WORDS[c.regime] : '—'}); θB,max ${f(c.maxContactTemperature_C, 0)} °C against θS ${f(c.scuffingTemperature_C, 0)} °C; FZG stage needed ${stage(c.verdict?.neededFzgStage ?? null)}`);
+      if (c.verdict) {
+        lines.push(`${indent}  ${c.verdict.checks.map(checkText).join('; ')}`);
+        lines.push(`${indent}  → ${VERDICT_WORDS[c.verdict.code]}; the oil ${c.verdict.shortfalls.length ? `is short on ${shortfallList(c.verdict.shortfalls)}` : 'meets the need'}`);
+      }
+    }
+  }
+  return lines;
+}
+
+function stageLines(p: PlanetaryResult): string[] {
+  const lines = [
+    `Planetary stage: sun/planet/ring ${p.teeth.sun}/${p.teeth.planet}/${p.teeth.ring} teeth, ${p.planets} planet${p.planets === 1 ? '' : 's'}, ${HELD_WORDS[p.held]}, Kγ ${f(p.meshLoadFactorKgamma)}`,
+    `  Ratio ${f(p.ratio, 4)} (${p.driving} to ${p.driven}); centre distance ${f(p.centerDistance_mm, 3)} mm; gap between planet tips ${p.planetTipGap_mm === null ? '— (one planet)' : `${f(p.planetTipGap_mm)} mm`}; Xmp sun–planet ${f(p.multipleMeshFactor['sun-planet'])}, planet–ring ${f(p.multipleMeshFactor['planet-ring'])}`,
+  ];
+  for (const k of p.loadCases) {
+    lines.push(
+      `  ${k.loadCase}: sun ${f(k.sunSpeed_rpm, 1)} rpm, carrier ${f(k.carrierSpeed_rpm, 1)} rpm, ring ${f(k.ringSpeed_rpm, 1)} rpm; relative to the carrier sun ${f(k.sunRelativeSpeed_rpm, 1)}, planet ${f(k.planetRelativeSpeed_rpm, 1)} rpm; sun torque ${f(k.sunTorque_Nm, 0)} N·m, per planet mesh ${f(k.meshTorque_Nm['sun-planet'], 0)} N·m on the sun, ${f(k.meshTorque_Nm['planet-ring'], 0)} N·m on the planet into the ring`,
+    );
+  }
+  for (const g of p.governingMesh) lines.push(`  Governing mesh for ${g.oil}: ${MESH_WORDS[g.mesh]}`);
+  for (const c of p.checks) lines.push(`  ${c.severity === 'warning' ? 'Warning' : 'Note'}: ${c.message}`);
+  return lines;
 }

@@ -48,13 +48,16 @@ function csvNumber(x: number): string {
   return fixed.includes('.') ? fixed.replace(/\.?0+$/, '') : fixed;
 }
 
+/** A planetary stage's CSV starts each row with its mesh (sun-planet, planet-ring); a pair's has no mesh column. */
 export function resultsToCsv(results: Results, system: UnitSystem = 'si'): string {
   const u = unitsFor(system);
-  const header = ['load case', 'oil', 'point', ...COLUMNS.map((c) => (c.quantity ? `${c.name} (${u.unit(c.quantity) || '–'})` : c.name))];
+  const meshes = results.meshes ?? null;
+  const header = [...(meshes ? ['mesh'] : []), 'load case', 'oil', 'point', ...COLUMNS.map((c) => (c.quantity ? `${c.name} (${u.unit(c.quantity) || '–'})` : c.name))];
   const lines = [header.map(quote).join(',')];
-  for (const c of results.cases) {
+  const blocks = meshes ? meshes.map((m) => ({ lead: [m.mesh], cases: m.cases })) : [{ lead: [] as string[], cases: results.cases }];
+  for (const { lead, cases } of blocks) for (const c of cases) {
     c.path.forEach((p, i) => {
-      const cells = [textCell(c.loadCase), textCell(c.oil ?? ''), String(i)];
+      const cells = [...lead, textCell(c.loadCase), textCell(c.oil ?? ''), String(i)];
       for (const col of COLUMNS) {
         const v = col.get(p);
         if (v === null) cells.push('');

@@ -6,7 +6,7 @@ import type { VerdictFacts } from '../engine/verdict/types';
 import { kelvinToCelsius, toMegapascals, toMicrometres, toMillimetres, type Kelvin, type Metres, type Pascals } from '../engine/units';
 import type { ReviewOil } from './oils';
 import type { CaseResult, LimitCheck, PointResult } from './results';
-import type { LoadCase, Policy, Review } from './schema';
+import type { PairLoadCase, PairReview, Policy } from './schema';
 
 const orNull = (x: number): number | null => (Number.isFinite(x) ? x : null);
 
@@ -39,7 +39,7 @@ function pointAt(a: CaseAnalysis, i: number): PointResult {
 }
 
 /** The facts the verdict rules read, from one analysis. */
-function verdictFacts(review: Review, lc: LoadCase, oil: ReviewOil, all: readonly ReviewOil[], a: CaseAnalysis, maxHertz: Pascals): VerdictFacts {
+function verdictFacts(review: PairReview, lc: PairLoadCase, oil: ReviewOil, all: readonly ReviewOil[], a: CaseAnalysis, maxHertz: Pascals): VerdictFacts {
   const film = a.film as NonNullable<CaseAnalysis['film']>;
   const heat = a.heat as NonNullable<CaseAnalysis['heat']>;
   const sc = a.scuffing as NonNullable<CaseAnalysis['scuffing']>;
@@ -75,7 +75,7 @@ function verdictFacts(review: Review, lc: LoadCase, oil: ReviewOil, all: readonl
 }
 
 /** One analysis as the results JSON shows it (display units). */
-export function caseToResult(review: Review, lc: LoadCase, oil: ReviewOil | null, all: readonly ReviewOil[], a: CaseAnalysis): CaseResult {
+export function caseToResult(review: PairReview, lc: PairLoadCase, oil: ReviewOil | null, all: readonly ReviewOil[], a: CaseAnalysis): CaseResult {
   const m = a.mechanics;
   const path: PointResult[] = [];
   let maxI = 0;

@@ -12,7 +12,7 @@ import { hertzLinePressure, reducedRadius } from '../engine/stress/hertz';
 import { kelvinToCelsius, micrometres, millimetres, toMegapascals, toMicrometres, toMillimetres, type Metres, type MetresPerSecond, type NewtonsPerMetre, type Pascals } from '../engine/units';
 import { engineDutyOf, enginePolicyOf } from './engineInputs';
 import { oilModelsOf } from './oils';
-import type { Review } from './schema';
+import { asPairReview, type Review } from './schema';
 import { gearPairInput, materialOf } from './toEngine';
 
 /** Where on the path: a characteristic point, the point of least λ, or a position from T1 in mm. */
@@ -66,7 +66,9 @@ const POINT_WORDS = { A: 'A (start of contact)', B: 'B (single-pair contact begi
  * functions for load sharing, curvature and flank velocities. Throws EhlPointError for an unknown
  * case or oil or a point outside A–E, EngineInputError for a review the physics cannot take.
  */
-export function ehlPointSetup(review: Review, req: EhlPointRequest): EhlPointSetup {
+export function ehlPointSetup(full: Review, req: EhlPointRequest): EhlPointSetup {
+  const review = asPairReview(full);
+  if (!review) throw new EhlPointError('case', 'Film detail solves a point of a gear pair; for a planetary stage it is not offered yet');
   const li = review.loadCases.findIndex((c) => c.name === req.caseName);
   if (li < 0) throw new EhlPointError('case', `no load case named "${req.caseName}"; the review has: ${review.loadCases.map((c) => `"${c.name}"`).join(', ')}`);
   const oils = oilModelsOf(review.oils);

@@ -1,6 +1,6 @@
 import type { EngineDuty, EnginePolicy } from '../engine/mesh/types';
 import { celsiusToKelvin, rpmToRadiansPerSecond } from '../engine/units';
-import type { Policy, Review } from './schema';
+import type { PairReview, Policy } from './schema';
 import { pinionTorqueOf } from './toEngine';
 
 export function enginePolicyOf(p: Policy): EnginePolicy {
@@ -22,7 +22,7 @@ export function enginePolicyOf(p: Policy): EnginePolicy {
 }
 
 /** Load case `index` of the review, in SI. */
-export function engineDutyOf(review: Review, index: number): EngineDuty {
+export function engineDutyOf(review: PairReview, index: number): EngineDuty {
   const lc = review.loadCases[index];
   if (!lc) throw new RangeError(`no load case ${index}`);
   const gp = review.gearPair;

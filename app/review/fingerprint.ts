@@ -55,23 +55,7 @@ const roundOrNull = (x: number | null): number | null => (x === null ? null : ro
 /** The subset of the results that the fingerprint covers. */
 export function resultsSummary(results: Results): Record<string, unknown> {
   return {
-    cases: results.cases.map((c) => ({
-      loadCase: c.loadCase,
-      oil: c.oil,
-      pinionTorque_Nm: round(c.pinionTorque_Nm),
-      pitchLineVelocity_mps: round(c.pitchLineVelocity_mps),
-      nominalContactStress_MPa: round(c.nominalContactStress_MPa),
-      maxHertzStress_MPa: round(c.maxHertzStress_MPa),
-      lambdaMin: roundOrNull(c.lambdaMin),
-      regime: c.regime,
-      maxFlashTemperature_K: roundOrNull(c.maxFlashTemperature_K),
-      maxContactTemperature_C: roundOrNull(c.maxContactTemperature_C),
-      scuffingTemperature_C: roundOrNull(c.scuffingTemperature_C),
-      scuffingSafety: roundOrNull(c.scuffingSafety),
-      integralSafety: roundOrNull(c.integralSafety),
-      requiredFzgStage: c.requiredFzgStage,
-      verdict: c.verdict ? { code: c.verdict.code, oilFit: c.verdict.oilFit, rules: c.verdict.reasons.map((r) => r.rule) } : null,
-    })),
+    cases: results.cases.map(caseSummary),
     verdicts: results.verdicts.map((v) => ({
       oil: v.oil,
       code: v.code,
@@ -79,6 +63,30 @@ export function resultsSummary(results: Results): Record<string, unknown> {
       governingLoadCase: v.governingLoadCase,
       dutyShareMet: round(v.dutyShareMet),
     })),
+    // A planetary stage: every mesh's cases and the mesh that governs each oil (absent for a pair,
+    // so a pair's fingerprint is what it was).
+    ...(results.meshes ? { meshes: results.meshes.map((m) => ({ mesh: m.mesh, cases: m.cases.map(caseSummary) })) } : {}),
+    ...(results.planetary ? { governingMesh: results.planetary.governingMesh } : {}),
+  };
+}
+
+function caseSummary(c: Results['cases'][number]): Record<string, unknown> {
+  return {
+    loadCase: c.loadCase,
+    oil: c.oil,
+    pinionTorque_Nm: round(c.pinionTorque_Nm),
+    pitchLineVelocity_mps: round(c.pitchLineVelocity_mps),
+    nominalContactStress_MPa: round(c.nominalContactStress_MPa),
+    maxHertzStress_MPa: round(c.maxHertzStress_MPa),
+    lambdaMin: roundOrNull(c.lambdaMin),
+    regime: c.regime,
+    maxFlashTemperature_K: roundOrNull(c.maxFlashTemperature_K),
+    maxContactTemperature_C: roundOrNull(c.maxContactTemperature_C),
+    scuffingTemperature_C: roundOrNull(c.scuffingTemperature_C),
+    scuffingSafety: roundOrNull(c.scuffingSafety),
+    integralSafety: roundOrNull(c.integralSafety),
+    requiredFzgStage: c.requiredFzgStage,
+    verdict: c.verdict ? { code: c.verdict.code, oilFit: c.verdict.oilFit, rules: c.verdict.reasons.map((r) => r.rule) } : null,
   };
 }
 

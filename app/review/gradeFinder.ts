@@ -9,7 +9,7 @@ import { centistokes, micrometres, type KilogramsPerCubicMetre, type SquareMetre
 import { engineDutyOf } from './engineInputs';
 import type { ReviewOil } from './oils';
 import type { GradeFinderResult, GradeFinderRow } from './results';
-import type { Review } from './schema';
+import type { PairReview } from './schema';
 
 /**
  * Path points for the finder. A…E are always sampled exactly, so λ at A (where the film is thinnest:
@@ -28,7 +28,7 @@ export const CANDIDATE_GRADES = ISO_VG_GRADES.filter((g) => g >= 32 && g <= 1500
  * (ASTM D2270 inverted); α takes the base oil's default. Each grade is one cell of the operating
  * map's evaluator (engine/sweep), so the finder sees the same film, friction and heat as the cases.
  */
-export function gradeFinder(review: Review, geometry: GearPairGeometry, pinion: Material, wheel: Material, policy: EnginePolicy, oils: readonly ReviewOil[]): GradeFinderResult[] {
+export function gradeFinder(review: PairReview, geometry: GearPairGeometry, pinion: Material, wheel: Material, policy: EnginePolicy, oils: readonly ReviewOil[]): GradeFinderResult[] {
   const tHigh = review.policy.temperatureRange_C[1];
   const roughnessRa1 = micrometres(review.gearPair.pinion.roughnessRa_um);
   const roughnessRa2 = micrometres(review.gearPair.wheel.roughnessRa_um);
@@ -55,7 +55,7 @@ export function gradeFinder(review: Review, geometry: GearPairGeometry, pinion: 
 }
 
 /** λmin per candidate grade for one oil's base oil, VI and density, over every load case. */
-function gradeTable(review: Review, cases: readonly SweepCase[], oil: ReviewOil, tHigh: number): GradeFinderRow[] {
+function gradeTable(review: PairReview, cases: readonly SweepCase[], oil: ReviewOil, tHigh: number): GradeFinderRow[] {
   const vi = oil.model.viscosityIndex.value;
   const table: GradeFinderRow[] = [];
   const cell: CellResult = { lambdaMin: 0, scuffingSafety: 0, integralSafety: 0, verdict: 0 };

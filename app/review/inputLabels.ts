@@ -71,10 +71,10 @@ export const OIL_ROLE_WORDS = ROLE_WORDS;
 const UNIT_SYSTEM_WORDS = { si: 'SI', us: 'US customary' } as const;
 const ON_OFF = { true: 'on', false: 'off' } as const;
 
-const member = (n: 1 | 2): Readonly<Record<string, InputLabel>> => ({
+const member = (n: 1 | 2 | 'S' | 'P' | 'R', internal = false): Readonly<Record<string, InputLabel>> => ({
   teeth: { label: `Teeth z${n}` },
   profileShift: { label: `Profile shift x${n}` },
-  tipDiameter_mm: { label: 'Tip diameter da', kind: 'length' },
+  tipDiameter_mm: { label: internal ? 'Inner (tip) diameter da' : 'Tip diameter da', kind: 'length' },
   roughnessRa_um: { label: 'Flank roughness Ra', kind: 'roughness' },
   material: { label: 'Material', words: { ...MATERIAL_WORDS } },
   'material.youngsModulus_GPa': { label: 'Young’s modulus E', unit: 'GPa' },
@@ -110,10 +110,28 @@ export const INPUT_LABELS: Readonly<Record<string, InputLabel>> = {
   'gearPair.faceLoadFactorKHbeta': { label: 'Face load factor KHβ' },
   'gearPair.transverseLoadFactorKHalpha': { label: 'Transverse load factor KHα' },
   'gearPair.components': { label: 'Parts in the oil circuit', words: COMPONENT_WORDS },
+  'gearPair.kind': { label: 'Kind of gear set', words: { external: 'External pair', internal: 'Internal pair (pinion in a ring)' } },
+  'planetary.normalModule_mm': { label: 'Normal module mn', kind: 'length' },
+  'planetary.normalPressureAngle_deg': { label: 'Pressure angle αn', unit: '°' },
+  'planetary.helixAngle_deg': { label: 'Helix angle β', unit: '°' },
+  'planetary.faceWidth_mm': { label: 'Face width b', kind: 'length' },
+  'planetary.planets': { label: 'Planets' },
+  'planetary.meshLoadFactorKgamma': { label: 'Mesh load factor Kγ' },
+  'planetary.held': { label: 'Member held', words: { ring: 'Ring held', carrier: 'Carrier held', sun: 'Sun held' } },
+  ...prefixed('planetary.sun', member('S')),
+  ...prefixed('planetary.planet', member('P')),
+  ...prefixed('planetary.ring', member('R', true)),
+  'planetary.components': { label: 'Parts in the oil circuit', words: COMPONENT_WORDS },
+  'planetary.dynamicFactorKv': { label: 'Dynamic factor Kv' },
+  'planetary.faceLoadFactorKHbeta': { label: 'Face load factor KHβ' },
+  'planetary.transverseLoadFactorKHalpha': { label: 'Transverse load factor KHα' },
   'loadCases[].name': { label: 'Name' },
   'loadCases[].pinionSpeed_rpm': { label: 'Pinion speed n1', unit: 'rpm' },
   'loadCases[].pinionTorque_Nm': { label: 'Pinion torque T1', kind: 'torque' },
   'loadCases[].power_kW': { label: 'Power P', kind: 'power' },
+  'loadCases[].sunSpeed_rpm': { label: 'Sun speed', unit: 'rpm' },
+  'loadCases[].carrierSpeed_rpm': { label: 'Carrier speed', unit: 'rpm' },
+  'loadCases[].sunTorque_Nm': { label: 'Sun torque', kind: 'torque' },
   'loadCases[].applicationFactor': { label: 'Application factor KA' },
   'loadCases[].oilTemperature_C': { label: 'Oil temperature θoil', kind: 'temperature' },
   'loadCases[].lubrication': { label: 'Lubrication', words: LUBRICATION_WORDS },
@@ -179,6 +197,7 @@ export function panelOf(path: InputPath): InputPanel {
   switch (path[0]) {
     case 'title':
     case 'gearPair':
+    case 'planetary':
       return 'Gear pair';
     case 'loadCases':
       return 'Duty';

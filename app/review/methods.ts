@@ -21,6 +21,12 @@ export const METHODS: readonly MethodEntry[] = [
   { topic: 'Geometry', quantity: 'Working pressure angle and centre distance', formula: 'inv αwt = inv αt + 2 tan αn (x1 + x2)/(z1 + z2);  a = (d1 + d2)/2 · cos αt / cos αwt', source: 'ISO 21771', basis: 'published' },
   { topic: 'Geometry', quantity: 'Points A–E on the line of action (from T1)', formula: 'T1T2 = a sin αwt;  T1A = T1T2 − √(ra2² − rb2²);  T1E = √(ra1² − rb1²);  T1C = rb1 tan αwt;  T1B = T1E − pbt;  T1D = T1A + pbt', source: 'ISO 21771', basis: 'published' },
   { topic: 'Geometry', quantity: 'Contact ratios', formula: 'εα = (T1E − T1A)/pbt;  εβ = b sin β / (π mn)', source: 'ISO 21771', basis: 'published' },
+  { topic: 'Geometry', quantity: 'Internal pair (pinion in a ring)', formula: 'ISO 21771 with signed ring data (σ = −1): a = (d2 − d1)/2 · cos αt / cos αwt;  inv αwt = inv αt + 2 tan αn (x1 + x2)/(z1 − z2);  da2 = d2 − 2 mn (1 + x2);  T1A = √(ra2² − rb2²) − T1T2 (T2 beyond T1);  ρ2 = s + T1T2;  σH0 with (u − 1)/u', source: 'ISO 21771; ISO 6336-2 (u < 0 for internal gears)', basis: 'memory' },
+  { topic: 'Geometry', quantity: 'Internal pair: tooth-count difference', formula: 'z2 − z1 ≥ 10 for 20° full-depth teeth, else check tip interference', source: 'common practice', basis: 'common practice' },
+  { topic: 'Planetary stage', quantity: 'Speeds (Willis equation)', formula: '(nS − nC)/(nR − nC) = −zR/zS;  (nP − nC)/(nS − nC) = −zS/zP; each mesh in the carrier frame', source: 'R. Willis, Principles of Mechanism (1841)', basis: 'memory' },
+  { topic: 'Planetary stage', quantity: 'Torque per planet mesh', formula: 'T_sun Kγ / planets on the sun;  T_sun Kγ zP / (zS planets) on the planet into the ring', source: 'ISO 6336-1 (Kγ)', basis: 'memory' },
+  { topic: 'Planetary stage', quantity: 'Assembly', formula: 'zR = zS + 2 zP without shifts, else equal centre distances;  (zS + zR)/planets whole;  2 a sin(π/planets) > da,planet', source: 'planetary gear geometry', basis: 'published' },
+  { topic: 'Planetary stage', quantity: 'Multiple-mesh factor', formula: 'Xmp = (1 + np)/2: np = planets on the sun–planet mesh, 2 on the planet–ring mesh', source: 'ISO/TS 6336-20', basis: 'memory' },
   { topic: 'Geometry', quantity: 'Undercut limit', formula: 'x ≥ (14 − zn)/17 for αn = 20°', source: 'common practice', basis: 'common practice' },
   { topic: 'Geometry', quantity: 'Pointed tip', formula: 'normal tip thickness ≥ 0.2 mn', source: 'common practice (case-hardened gears)', basis: 'common practice' },
   // Kinematics
@@ -30,7 +36,8 @@ export const METHODS: readonly MethodEntry[] = [
   { topic: 'Load', quantity: 'Load sharing XΓ along the path', formula: 'spur, unmodified: 1/3 → 2/3 from A to B, 1 from B to D, 2/3 → 1/3 from D to E; helical with εβ ≥ 1: 1/εα', source: 'ISO/TS 6336-20; DIN 3990-4', basis: 'memory' },
   // Stress
   { topic: 'Contact stress', quantity: 'Hertz line contact', formula: 'pH = √(w E* / (π ρred,n));  bH = √(4 w ρred,n / (π E*));  ρn = ρ / cos βb', source: 'H. Hertz (1882); ISO 6336-2', basis: 'published' },
-  { topic: 'Contact stress', quantity: 'Nominal contact stress', formula: 'σH0 = ZH ZE Zε Zβ √(Ft (u + 1)/(d1 b u));  σH = σH0 √(KA Kv KHβ KHα)', source: 'ISO 6336-2:2019 (and :2006): Zβ = 1/√cos β; the 1996 edition\'s √cos β gives a stress lower by cos β', basis: 'published' },
+  { topic: 'Contact stress', quantity: 'Reduced radius, external and internal', formula: 'external ρred = ρ1 ρ2/(ρ1 + ρ2);  internal (conformal) ρred = ρ1 ρ2/(ρ2 − ρ1)', source: 'K. L. Johnson, Contact Mechanics §4.2; ISO 6336-2', basis: 'published' },
+  { topic: 'Contact stress', quantity: 'Nominal contact stress', formula: 'σH0 = ZH ZE Zε Zβ √(Ft (u ± 1)/(d1 b u)), + external, − internal;  σH = σH0 √(KA Kv KHβ KHα)', source: 'ISO 6336-2:2019 (and :2006): Zβ = 1/√cos β; the 1996 edition\'s √cos β gives a stress lower by cos β', basis: 'published' },
   { topic: 'Contact stress', quantity: 'Contact-ratio factor, helical forms', formula: 'Zε per ISO 6336-2 helical forms', source: 'ISO 6336-2', basis: 'memory' },
   // Oil
   { topic: 'Oil', quantity: 'Viscosity–temperature', formula: 'log log (ν + 0.7 + …) = A − B log T (T in K), anchored at KV40 and KV100', source: 'ASTM D341', basis: 'published' },

@@ -5,8 +5,11 @@ import { micrometres } from '../engine/units';
 import { engineDutyOf, enginePolicyOf } from './engineInputs';
 import { oilModelsOf } from './oils';
 import type { VerdictCode } from './results';
-import type { Review } from './schema';
+import { asPairReview, type PairReview, type Review } from './schema';
 import { gearPairInput, materialOf } from './toEngine';
+import type { GearPairGeometry } from '../engine/geometry/types';
+import { planetaryMeshReviews, type PlanetaryReview } from './planetary/meshReviews';
+import { run } from './run';
 
 export interface MapOptions {
   /** Cells along oil temperature (rows), default 60. */
@@ -23,6 +26,8 @@ export interface MapOptions {
 export interface OperatingMapResult {
   loadCase: string;
   oil: string;
+  /** A planetary stage only: the mesh swept, the one that governs. */
+  mesh?: 'sun-planet' | 'planet-ring';
   temperatures_C: number[];
   loadPercent: number[];
   lambdaMin: number[][];
@@ -37,8 +42,8 @@ const DEFAULT_CELLS = 60;
  * The oil temperature × load sweep (policy.temperatureRange_C × 10–150 % of each case's torque)
  * for every load case × oil. Returns null if cancelled through `progress`.
  */
-export function operatingMaps(review: Review, options: MapOptions = {}): OperatingMapResult[] | null {
-  const geometry = gearPairGeometry(gearPairInput(review.gearPair));
+export function operatingMaps(whole: Review, options: MapOptions = {}): OperatingMapResult[] | null {
+  const { review, geometry, mesh } = sweptPair(whole);
   const pinion = materialOf(review.gearPair.pinion.material);
   const wheel = materialOf(review.gearPair.wheel.material);
   const policy = enginePolicyOf(review.policy);
@@ -58,6 +63,7 @@ export function operatingMaps(review: Review, options: MapOptions = {}): Operati
       out.push({
         loadCase: review.loadCases[li]?.name ?? '',
         oil: oil.name,
+        ...(mesh ? { mesh } : {}),
         temperatures_C: Array.from(axes.temperatures_C),
         loadPercent: Array.from(axes.loadFractions, (f) => 100 * f),
         lambdaMin: grid((k) => map.lambdaMin[k] as number),
@@ -69,6 +75,16 @@ export function operatingMaps(review: Review, options: MapOptions = {}): Operati
     }
   }
   return out;
+}
+
+/** The pair the map sweeps: the review's gear pair, or the governing mesh of a planetary stage. */
+function sweptPair(whole: Review): { review: PairReview; geometry: GearPairGeometry; mesh?: OperatingMapResult['mesh'] } {
+  const pair = asPairReview(whole);
+  if (pair) return { review: pair, geometry: gearPairGeometry(gearPairInput(pair.gearPair)) };
+  const shown = run(whole).planetary?.shownMesh ?? 'sun-planet';
+  const mesh = planetaryMeshReviews(whole as PlanetaryReview).meshes.find((m) => m.mesh === shown);
+  if (!mesh) throw new TypeError('operatingMaps: no mesh to sweep');
+  return { review: mesh.review, geometry: mesh.geometry, mesh: mesh.mesh };
 }
 
 /** The maps as one CSV (a row per cell), with a header of names and units. */

@@ -266,6 +266,55 @@ export interface CautionSummary {
   appliesTo: Array<{ loadCase: string; oil: string }>;
 }
 
+export type PlanetaryMesh = 'sun-planet' | 'planet-ring';
+
+/** Speeds (rpm, signed: the input member's sense positive) and torques of one load case of a planetary stage. */
+export interface PlanetaryCaseKinematics {
+  loadCase: string;
+  sunSpeed_rpm: number;
+  planetSpeed_rpm: number;
+  ringSpeed_rpm: number;
+  carrierSpeed_rpm: number;
+  /** Speeds in the carrier frame, n − nC: what each mesh runs at. */
+  sunRelativeSpeed_rpm: number;
+  planetRelativeSpeed_rpm: number;
+  ringRelativeSpeed_rpm: number;
+  sunTorque_Nm: number;
+  /** Pinion torque of each mesh: sun T_sun Kγ/planets; planet on the ring T_sun Kγ zP/(zS planets). */
+  meshTorque_Nm: Record<PlanetaryMesh, number>;
+}
+
+export interface PlanetaryResult {
+  held: 'ring' | 'carrier' | 'sun';
+  planets: number;
+  meshLoadFactorKgamma: number;
+  teeth: { sun: number; planet: number; ring: number };
+  /** Speed of the driving member over the driven one. */
+  ratio: number;
+  driving: 'sun' | 'carrier';
+  driven: 'carrier' | 'ring';
+  centerDistance_mm: number;
+  /** Gap between neighbouring planets' tip circles; null for one planet. */
+  planetTipGap_mm: number | null;
+  /** Multiple-mesh factor Xmp = (1 + n_p)/2 of each mesh's bulk temperature. */
+  multipleMeshFactor: Record<PlanetaryMesh, number>;
+  loadCases: PlanetaryCaseKinematics[];
+  /** Per oil, the mesh whose verdict governs. */
+  governingMesh: Array<{ oil: string; mesh: PlanetaryMesh }>;
+  /** The mesh whose gear and cases stand at the top level of the results (the one that governs the first oil). */
+  shownMesh: PlanetaryMesh;
+  checks: Array<{ code: string; severity: string; message: string }>;
+}
+
+/** One mesh of a planetary stage, with the keys a gear pair's results have. */
+export interface MeshResult {
+  mesh: PlanetaryMesh;
+  gear: GearResult;
+  cases: CaseResult[];
+  verdicts: OverallVerdict[];
+  gradeFinder: GradeFinderResult[];
+}
+
 export interface Results {
   flankfilm: string;
   title: string;
@@ -275,6 +324,7 @@ export interface Results {
   changes: ChangeFinding[];
   /** Every caution once: those that apply first. */
   cautions: CautionSummary[];
+  /** For a planetary stage: the governing mesh's (see `planetary.shownMesh`); every mesh is in `meshes`. */
   gear: GearResult;
   oils: OilSummary[];
   cases: CaseResult[];
@@ -282,4 +332,8 @@ export interface Results {
   gradeFinder: GradeFinderResult[];
   /** Stated assumptions: factors taken as 1, formulas chosen, and so on. */
   assumptions: string[];
+  /** A planetary stage only: the stage's kinematics and checks. */
+  planetary?: PlanetaryResult;
+  /** A planetary stage only: each mesh's results. */
+  meshes?: MeshResult[];
 }

@@ -4,7 +4,7 @@ import type { GearPairGeometry } from '../engine/geometry/types';
 import { analyseCase } from '../engine/mesh/analyseCase';
 import { ENGINE_VERSION } from '../engine/version';
 import { micrometres, radiansToDegrees, toMillimetres } from '../engine/units';
-import type { Review } from './schema';
+import { asPairReview, type PairReview, type Review } from './schema';
 import type { CaseResult, GearResult, Results } from './results';
 import { gearPairInput, materialOf } from './toEngine';
 import { caseToResult } from './caseResult';
@@ -15,6 +15,7 @@ import { dutyNeed } from './need';
 import { changeFindings } from './changes';
 import { cautionSummary } from './cautionSummary';
 import { engineDutyOf, enginePolicyOf } from './engineInputs';
+import { runPlanetary } from './planetary/runPlanetary';
 
 /**
  * Recompute a review: file → run() → results. Pure and deterministic; the same review gives
@@ -22,7 +23,16 @@ import { engineDutyOf, enginePolicyOf } from './engineInputs';
  * schema accepts but the physics cannot (impossible geometry, say).
  */
 export function run(review: Review): Results {
-  const geometry = gearPairGeometry(gearPairInput(review.gearPair));
+  const pair = asPairReview(review);
+  if (!pair) return runPlanetary(review, runPair);
+  return runPair(pair, gearPairGeometry(gearPairInput(pair.gearPair)));
+}
+
+/**
+ * The per-pair pipeline: every load case × oil through the engine's mesh analysis, the verdicts
+ * and the grade finder, for the given geometry (which a planetary stage computes per mesh).
+ */
+export function runPair(review: PairReview, geometry: GearPairGeometry): Results {
   const pinion = materialOf(review.gearPair.pinion.material);
   const wheel = materialOf(review.gearPair.wheel.material);
   const policy = enginePolicyOf(review.policy);
@@ -79,7 +89,7 @@ function inReviewTerms<T>(li: number, f: () => T): T {
 
 const LOAD_CASE_LIMITS = 'keep the speed from 0.1 to 100000 rpm, the torque from 0.001 to 1e8 N·m (or the power from 0.001 to 1e6 kW) and the face width from 0.5 to 5000 mm';
 
-function gearResult(g: GearPairGeometry): GearResult {
+export function gearResult(g: GearPairGeometry): GearResult {
   const mm = toMillimetres;
   return {
     workingPressureAngle_deg: radiansToDegrees(g.workingPressureAngle),
@@ -101,7 +111,7 @@ function gearResult(g: GearPairGeometry): GearResult {
   };
 }
 
-function assumptionsOf(review: Review): string[] {
+function assumptionsOf(review: PairReview): string[] {
   const gp = review.gearPair;
   const out = [
     `ISO 6336-2 factors not computed by Flankfilm are inputs: Kv = ${gp.dynamicFactorKv}, KHβ = ${gp.faceLoadFactorKHbeta}, KHα = ${gp.transverseLoadFactorKHalpha}${gp.dynamicFactorKv === 1 && gp.faceLoadFactorKHbeta === 1 && gp.transverseLoadFactorKHalpha === 1 ? ' (all taken as 1)' : ''}.`,

@@ -42,15 +42,26 @@ export const materialSchema = z.union([
 
 export const COMPONENTS = ['bronze-bushing', 'brass-cage', 'yellow-metal', 'backstop', 'clutch', 'food-contact', 'paint-or-seal-sensitive'] as const;
 
-const gearSchema = z.strictObject({
+/** Field help for the profile shift (the sign convention matters on a ring). */
+export const PROFILE_SHIFT_HELP =
+  'Profile shift coefficient x, sign as ISO 21771 gives it: x > 0 moves the basic rack towards the tooth tips and thickens the tooth at the reference circle. On an external gear that is away from the axis; on a ring (internal teeth) it is towards the axis, so the ring\'s inner (tip) diameter shrinks.';
+
+export const gearSchema = z.strictObject({
   teeth: z.number().int({ message: 'must be a whole number of teeth' }).gte(5, { message: 'must be at least 5 teeth' }).lte(1000, { message: 'must be at most 1000 teeth' }),
-  profileShift: finite().gte(-3).lte(3).optional(),
-  tipDiameter_mm: positive(20000, 'mm').optional(),
+  profileShift: finite().gte(-3).lte(3).optional().describe(PROFILE_SHIFT_HELP),
+  tipDiameter_mm: positive(20000, 'mm').optional().describe('Tip diameter da; for a ring, its inner diameter. Else d + 2 mn (1 + x), for a ring d − 2 mn (1 + x).'),
   roughnessRa_um: finite().gte(0.01, { message: 'must be at least 0.01 µm' }).lte(25, { message: 'must be at most 25 µm' }),
   material: materialSchema,
 });
 
+export const GEAR_PAIR_KINDS = ['external', 'internal'] as const;
+
 export const gearPairSchema = z.strictObject({
+  /**
+   * External pair (when absent), or internal: the wheel is a ring with internal teeth and the
+   * pinion runs inside it. No schema default, so reviews written before it keep their fingerprint.
+   */
+  kind: z.enum(GEAR_PAIR_KINDS).optional().describe('external (default) or internal: the wheel is a ring with internal teeth, its tip diameter is its inner diameter'),
   normalModule_mm: positive(100, 'mm').gte(0.1, { message: 'must be at least 0.1 mm' }),
   normalPressureAngle_deg: finite().gte(10).lte(35).default(20),
   helixAngle_deg: finite().gte(0).lte(45).default(0),
@@ -71,8 +82,13 @@ export const gearPairSchema = z.strictObject({
 export const loadCaseSchema = z
   .strictObject({
     name: line(120).min(1),
-    pinionSpeed_rpm: atLeast(0.1, 100000, 'rpm'),
+    /** Gear pair reviews. */
+    pinionSpeed_rpm: atLeast(0.1, 100000, 'rpm').optional(),
     pinionTorque_Nm: atLeast(0.001, 1e8, 'N·m').optional(),
+    /** Planetary reviews: the sun's speed (unless the sun is held), its torque or the power. */
+    sunSpeed_rpm: atLeast(0.1, 100000, 'rpm').optional().describe('Planetary stage: speed of the sun (not when the sun is held)'),
+    carrierSpeed_rpm: atLeast(0.1, 100000, 'rpm').optional().describe('Planetary stage with the sun held: speed of the carrier'),
+    sunTorque_Nm: atLeast(0.001, 1e8, 'N·m').optional().describe('Planetary stage: torque on the sun (driving or, when the sun is held, reaction)'),
     power_kW: atLeast(0.001, 1e6, 'kW').optional(),
     applicationFactor: finite().gte(1, { message: 'must be at least 1 (ISO 6336-1)' }).lte(4).default(1),
     oilTemperature_C: finite().gte(-40, { message: 'must be at least −40 °C' }).lte(200, { message: 'must be at most 200 °C' }),
@@ -80,11 +96,39 @@ export const loadCaseSchema = z
     timeShare: finite().gt(0).lte(1).default(1),
   })
   .superRefine((c, ctx) => {
-    const n = Number(c.pinionTorque_Nm !== undefined) + Number(c.power_kW !== undefined);
+    const n = Number(c.pinionTorque_Nm !== undefined) + Number(c.sunTorque_Nm !== undefined) + Number(c.power_kW !== undefined);
     if (n !== 1) {
-      ctx.addIssue({ code: 'custom', path: ['pinionTorque_Nm'], message: 'give exactly one of pinionTorque_Nm or power_kW' });
+      const path = c.sunTorque_Nm !== undefined || c.sunSpeed_rpm !== undefined || c.carrierSpeed_rpm !== undefined ? 'sunTorque_Nm' : 'pinionTorque_Nm';
+      ctx.addIssue({ code: 'custom', path: [path], message: `give exactly one of ${path} or power_kW` });
     }
   });
+
+export const HELD_MEMBERS = ['ring', 'carrier', 'sun'] as const;
+
+/** Help for Kγ, with guide values. */
+export const MESH_LOAD_FACTOR_HELP =
+  'Mesh load factor Kγ: the most loaded planet\'s share of the sun torque over the equal share (≥ 1). Default 1 (ideal sharing, e.g. a floating sun with few planets). Guide values for usual accuracy [memory, weak]: 3 planets about 1.1, 4 about 1.25, 5 about 1.35, 6 about 1.45; take the gearbox maker\'s figure where there is one.';
+
+/**
+ * A simple planetary stage: sun, equal planets on one carrier, ring; one member held. Geometry is
+ * common to the three members; each member has the gear fields of a pair.
+ */
+export const planetarySchema = z.strictObject({
+  normalModule_mm: positive(100, 'mm').gte(0.1, { message: 'must be at least 0.1 mm' }),
+  normalPressureAngle_deg: finite().gte(10).lte(35).default(20),
+  helixAngle_deg: finite().gte(0).lte(45).default(0),
+  faceWidth_mm: positive(5000, 'mm'),
+  planets: z.number().int({ message: 'must be a whole number of planets' }).gte(1, { message: 'must be at least 1 planet' }).lte(12, { message: 'must be at most 12 planets' }),
+  meshLoadFactorKgamma: finite().gte(1, { message: 'must be at least 1' }).lte(2, { message: 'must be at most 2' }).default(1).describe(MESH_LOAD_FACTOR_HELP),
+  held: z.enum(HELD_MEMBERS).describe('The member held still: ring (sun drives the carrier), carrier (sun drives the ring) or sun (carrier drives the ring)'),
+  sun: gearSchema,
+  planet: gearSchema,
+  ring: gearSchema.describe('The ring, with internal teeth: its tip diameter is its inner diameter'),
+  components: z.array(z.enum(COMPONENTS)).max(20).default([]),
+  dynamicFactorKv: finite().gte(1).lte(5).default(1),
+  faceLoadFactorKHbeta: finite().gte(1).lte(5).default(1),
+  transverseLoadFactorKHalpha: finite().gte(1).lte(5).default(1),
+});
 
 export const FZG_STAGES = [1, 2, 3, 4, 5, 6, 7, 8, 9, 10, 11, 12] as const;
 export const fzgStageSchema = z.union([z.number().int().gte(1).lte(12), z.literal('>12')]);
@@ -152,7 +196,9 @@ const reviewBodyShape = {
   date: z.iso.date().optional(),
   notes: prose(10000).optional(),
   displayUnits: z.enum(['si', 'us']).default('si'),
-  gearPair: gearPairSchema,
+  /** A gear pair, or (instead) a planetary stage. */
+  gearPair: gearPairSchema.optional(),
+  planetary: planetarySchema.optional(),
   loadCases: z.array(loadCaseSchema).min(1).max(20),
   oils: z.array(oilSchema).max(10),
   policy: policySchema.default(() => policySchema.parse({})),
@@ -185,12 +231,35 @@ export const signoffSchema = z.strictObject({
   history: z.array(earlierSignoffSchema).max(MAX_SIGNOFF_HISTORY).optional(),
 });
 
-export const reviewSchema = z.strictObject({
-  format: z.literal(REVIEW_FORMAT),
-  version: z.literal(REVIEW_VERSION),
-  ...reviewBodyShape,
-  signoff: signoffSchema.optional(),
-});
+export const reviewSchema = z
+  .strictObject({
+    format: z.literal(REVIEW_FORMAT),
+    version: z.literal(REVIEW_VERSION),
+    ...reviewBodyShape,
+    signoff: signoffSchema.optional(),
+  })
+  .superRefine((r, ctx) => {
+    if ((r.gearPair === undefined) === (r.planetary === undefined)) {
+      ctx.addIssue({ code: 'custom', path: [r.gearPair === undefined ? 'gearPair' : 'planetary'], message: 'give exactly one gear set: gearPair or planetary' });
+      return;
+    }
+    r.loadCases.forEach((c, i) => {
+      const need = (key: string, why: string) => ctx.addIssue({ code: 'custom', path: ['loadCases', i, key], message: why });
+      const forbid = (keys: readonly string[], why: string) => {
+        for (const k of keys) if ((c as Record<string, unknown>)[k] !== undefined) need(k, why);
+      };
+      if (r.gearPair) {
+        if (c.pinionSpeed_rpm === undefined) need('pinionSpeed_rpm', 'is required for a gear pair');
+        forbid(['sunSpeed_rpm', 'carrierSpeed_rpm', 'sunTorque_Nm'], 'belongs to a planetary stage; a gear pair gives pinionSpeed_rpm and pinionTorque_Nm or power_kW');
+      } else if (r.planetary) {
+        const sunHeld = r.planetary.held === 'sun';
+        if (sunHeld && c.carrierSpeed_rpm === undefined) need('carrierSpeed_rpm', 'is required when the sun is held');
+        if (!sunHeld && c.sunSpeed_rpm === undefined) need('sunSpeed_rpm', 'is required for a planetary stage');
+        forbid(sunHeld ? ['sunSpeed_rpm'] : ['carrierSpeed_rpm'], sunHeld ? 'must be absent: the sun is held' : 'is given only when the sun is held; give sunSpeed_rpm');
+        forbid(['pinionSpeed_rpm', 'pinionTorque_Nm'], 'belongs to a gear pair; a planetary stage gives sunSpeed_rpm and sunTorque_Nm or power_kW');
+      }
+    });
+  });
 
 /** A review as written in a file (defaults may be absent). */
 export type ReviewInput = z.input<typeof reviewSchema>;
@@ -200,6 +269,19 @@ export type Policy = z.output<typeof policySchema>;
 export type Oil = z.output<typeof oilSchema>;
 export type LoadCase = z.output<typeof loadCaseSchema>;
 export type GearPair = z.output<typeof gearPairSchema>;
+export type Planetary = z.output<typeof planetarySchema>;
+export type HeldMember = (typeof HELD_MEMBERS)[number];
+/** A load case of a gear pair review (the pinion speed is given). */
+export type PairLoadCase = LoadCase & { pinionSpeed_rpm: number };
+/** A review of a gear pair: what the per-pair pipeline runs (a planetary review runs it per mesh). */
+export type PairReview = Omit<Review, 'gearPair' | 'planetary' | 'loadCases'> & { gearPair: GearPair; planetary?: undefined; loadCases: PairLoadCase[] };
+
+/** The review as a gear pair review, or null when it is a planetary stage. */
+export function asPairReview(r: Review): PairReview | null {
+  if (!r.gearPair) return null;
+  // The schema requires pinionSpeed_rpm on every load case of a gear pair review.
+  return r as PairReview;
+}
 export type Signoff = z.output<typeof signoffSchema>;
 export type EarlierSignoff = z.output<typeof earlierSignoffSchema>;
 /** The inputs of a review without format, version and sign-off (what a sign-off keeps as signed). */

@@ -26,6 +26,7 @@ export function gearPairInput(gp: GearPair): GearPairInput {
     ...(x.tipDiameter_mm !== undefined ? { tipDiameter: millimetres(x.tipDiameter_mm) } : {}),
   });
   return {
+    kind: gp.kind ?? 'external',
     normalModule: millimetres(gp.normalModule_mm),
     normalPressureAngle: degreesToRadians(gp.normalPressureAngle_deg),
     helixAngle: degreesToRadians(gp.helixAngle_deg),

@@ -6,7 +6,7 @@
 import type { Regime } from '../engine/film/regime';
 import type { Decision, Oil } from './schema';
 import type { MaterialPreset } from '../engine/materials';
-import type { ChangeFindingCode, OilFit, ScuffingMethods, Shortfall, VerdictCode } from './results';
+import type { ChangeFindingCode, OilFit, PlanetaryMesh, PlanetaryResult, ScuffingMethods, Shortfall, VerdictCode } from './results';
 export { BASE_OIL_WORDS, CHEMISTRY_WORDS, METHOD_WORDS } from '../engine/verdict/words';
 
 export const VERDICT_WORDS: Readonly<Record<VerdictCode, string>> = {
@@ -20,6 +20,17 @@ export const VERDICT_SHORT: Readonly<Record<VerdictCode, string>> = {
   'aw-suffices': 'AW suffices',
   'ep-warranted': 'EP warranted',
   'beyond-oil': 'Beyond oil',
+};
+
+export const MESH_WORDS: Readonly<Record<PlanetaryMesh, string>> = {
+  'sun-planet': 'sun–planet',
+  'planet-ring': 'planet–ring',
+};
+
+export const HELD_WORDS: Readonly<Record<PlanetaryResult['held'], string>> = {
+  ring: 'ring held',
+  carrier: 'carrier held',
+  sun: 'sun held',
 };
 
 export const DECISION_WORDS: Readonly<Record<Decision, string>> = {

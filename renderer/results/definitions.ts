@@ -37,6 +37,8 @@ export const DEFINITIONS = {
   lineOfAction: d('gα', 'Path of contact', 'length', 'Length of the path of contact from A to E.', 'ISO 21771'),
   workingPressureAngle: d('αwt', 'Working pressure angle', 'none', 'Transverse working pressure angle, degrees.', 'ISO 21771'),
   gearRatio: d('u', 'Gear ratio', 'none', 'u = z2 / z1.', 'ISO 21771'),
+  stageRatio: d('i', 'Stage ratio', 'none', 'Speed of the driving member over the driven one: 1 + zR/zS with the ring held, −zR/zS with the carrier held, zR/(zS + zR) with the sun held.', 'Willis equation'),
+  planetTipGap: d('gap', 'Gap between planet tips', 'length', '2 a sin(π/planets) − da,planet: the room between neighbouring planets.', 'Assembly geometry'),
   viscosityIndex: d('VI', 'Viscosity index', 'none', 'From kv40 and kv100 unless the data sheet gives it.', 'ASTM D2270'),
   isoVG: d('ISO VG', 'Viscosity grade', 'none', 'ISO viscosity grade whose ±10 % band holds kv40.', 'ISO 3448'),
   lubricantFactor: d('XL', 'Lubricant factor', 'none', 'Base-oil factor in the friction and scuffing temperature.', 'ISO/TS 6336-20'),

@@ -1,5 +1,5 @@
 import { getIn, setIn, type FieldPath } from './paths';
-import { pinionTorqueOf } from '../../app/review/toEngine';
+import { caseKeys, gearSetRoot, powerFactor, withGearSet, withHeld, type GearSetKind } from './gearSet';
 
 /** The review being edited, as plain JSON (it may be invalid while the user types). */
 export type Draft = Record<string, unknown>;
@@ -24,6 +24,8 @@ export type DocAction =
   | { type: 'addItem'; list: 'loadCases' | 'oils'; item: Record<string, unknown> }
   | { type: 'removeItem'; list: 'loadCases' | 'oils'; index: number }
   | { type: 'toggleComponent'; component: string; on: boolean }
+  | { type: 'setGearSet'; kind: GearSetKind }
+  | { type: 'setHeld'; held: 'ring' | 'carrier' | 'sun' }
   | { type: 'saved'; handle: string; name: string };
 
 export function docReducer(state: DocState, action: DocAction): DocState {
@@ -46,8 +48,9 @@ function edit(draft: Draft, action: Exclude<DocAction, { type: 'load' | 'saved' 
       return Object.is(getIn(draft, action.path), action.value) ? draft : setIn(draft, action.path, action.value);
     case 'setDrive': {
       // A load case gives exactly one of torque and power; the one typed last is the one given.
-      const keep = action.given === 'torque' ? 'pinionTorque_Nm' : 'power_kW';
-      const drop = action.given === 'torque' ? 'power_kW' : 'pinionTorque_Nm';
+      const torque = caseKeys(draft).torque;
+      const keep = action.given === 'torque' ? torque : 'power_kW';
+      const drop = action.given === 'torque' ? 'power_kW' : torque;
       const next = setIn(draft, ['loadCases', action.index, drop], undefined);
       return setIn(next, ['loadCases', action.index, keep], action.value);
     }
@@ -60,31 +63,39 @@ function edit(draft: Draft, action: Exclude<DocAction, { type: 'load' | 'saved' 
       return setIn(draft, [action.list], list.filter((_, i) => i !== action.index));
     }
     case 'toggleComponent': {
-      const list = ((getIn(draft, ['gearPair', 'components']) as string[] | undefined) ?? []).filter((c) => c !== action.component);
-      return setIn(draft, ['gearPair', 'components'], action.on ? [...list, action.component] : list);
+      const root = gearSetRoot(draft);
+      const list = ((getIn(draft, [root, 'components']) as string[] | undefined) ?? []).filter((c) => c !== action.component);
+      return setIn(draft, [root, 'components'], action.on ? [...list, action.component] : list);
     }
+    case 'setGearSet':
+      return withGearSet(draft, action.kind);
+    case 'setHeld':
+      return withHeld(draft, action.held);
   }
 }
 
-/** The pinion torque of a load case in the draft, given or from the power; undefined if neither is a number. */
+/** Speed (rpm), torque and power of a load case in the draft, under the gear set's keys. */
+function driveOf(draft: Draft, index: number) {
+  const c = getIn(draft, ['loadCases', index]) as Record<string, unknown> | undefined;
+  const k = caseKeys(draft);
+  return c ? { speed: c[k.speed], torque: c[k.torque], power: c.power_kW, factor: powerFactor(draft) } : undefined;
+}
+
+/** The torque of a load case in the draft (the pinion's, or the sun's), given or from the power; undefined if neither is a number. */
 export function draftTorque(draft: Draft, index: number): number | undefined {
-  const c = getIn(draft, ['loadCases', index]) as { pinionTorque_Nm?: unknown; power_kW?: unknown; pinionSpeed_rpm?: unknown } | undefined;
+  const c = driveOf(draft, index);
   if (!c) return undefined;
-  if (typeof c.pinionTorque_Nm === 'number') return c.pinionTorque_Nm;
-  if (typeof c.power_kW === 'number' && typeof c.pinionSpeed_rpm === 'number' && c.pinionSpeed_rpm > 0) {
-    return pinionTorqueOf({ power_kW: c.power_kW, pinionSpeed_rpm: c.pinionSpeed_rpm });
-  }
+  if (typeof c.torque === 'number') return c.torque;
+  if (typeof c.power === 'number' && typeof c.speed === 'number' && c.speed > 0) return (c.power * 1000) / (c.factor * ((2 * Math.PI * c.speed) / 60));
   return undefined;
 }
 
-/** The power of a load case in the draft, given or from the torque (P = T1·ω1); undefined if neither is a number. */
+/** The power of a load case in the draft, given or from the torque (P = T·ω, see gearSet.ts powerFactor); undefined if neither is a number. */
 export function draftPower(draft: Draft, index: number): number | undefined {
-  const c = getIn(draft, ['loadCases', index]) as { pinionTorque_Nm?: unknown; power_kW?: unknown; pinionSpeed_rpm?: unknown } | undefined;
+  const c = driveOf(draft, index);
   if (!c) return undefined;
-  if (typeof c.power_kW === 'number') return c.power_kW;
-  if (typeof c.pinionTorque_Nm === 'number' && typeof c.pinionSpeed_rpm === 'number') {
-    return (c.pinionTorque_Nm * ((2 * Math.PI * c.pinionSpeed_rpm) / 60)) / 1000;
-  }
+  if (typeof c.power === 'number') return c.power;
+  if (typeof c.torque === 'number' && typeof c.speed === 'number') return (c.torque * c.factor * ((2 * Math.PI * c.speed) / 60)) / 1000;
   return undefined;
 }
 

@@ -3,6 +3,7 @@ import type { Draft } from './reviewState';
 
 /** A new load case: copies the last one so the user changes only what differs. */
 export function newLoadCase(previous: unknown, count: number): Record<string, unknown> {
+  // Copying the last case keeps the gear set's keys (pinion or sun speed and torque).
   const base = previous && typeof previous === 'object' ? { ...(previous as Record<string, unknown>) } : { pinionSpeed_rpm: 1500, pinionTorque_Nm: 500, applicationFactor: 1, oilTemperature_C: 60, lubrication: 'dip', timeShare: 1 };
   return { ...base, name: `Load case ${count + 1}` };
 }

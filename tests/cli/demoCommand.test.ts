@@ -10,7 +10,7 @@ describe('flankfilm demo DIR', () => {
     const first = await cli('demo', dir);
     expect(first.code).toBe(0);
     const files = first.out.trim().split('\n');
-    expect(files).toHaveLength(2);
+    expect(files).toHaveLength(3);
     for (const f of files) {
       expect(readFileSync(f, 'utf8')).toMatch(/INVENTED DEMO SCENARIO/);
       expect((await cli('review', f, '--json')).code).toBe(0);

@@ -31,7 +31,7 @@ describe('RecomputeClient (latest wins)', () => {
   it('an EngineInputError comes back with its field and message', async () => {
     const res = await new Promise<RecomputeResponse>((r) => {
       const client = new RecomputeClient(r);
-      client.request({ edition: 1, review: { ...review, gearPair: { ...review.gearPair, centerDistance_mm: 100 } } });
+      client.request({ edition: 1, review: { ...review, gearPair: { ...(review.gearPair as NonNullable<typeof review.gearPair>), centerDistance_mm: 100 } } });
     });
     expect(res.ok).toBe(false);
     if (!res.ok) {

@@ -12,7 +12,7 @@ import { parseReviewText, parseReviewValue } from '../../app/review/parse';
 import { COMPONENTS, DECISIONS, FILM_FORMULAS } from '../../app/review/schema';
 
 export const DEMO_DIR = 'assets/demo';
-export const DEMOS = ['harrow-creek-crusher-hs-pair.flankfilm.json', 'harrow-creek-conveyor-spur-pair.flankfilm.json'] as const;
+export const DEMOS = ['harrow-creek-crusher-hs-pair.flankfilm.json', 'harrow-creek-conveyor-spur-pair.flankfilm.json', 'harrow-creek-ball-mill-planetary.flankfilm.json'] as const;
 export const CRUSHER = join(DEMO_DIR, DEMOS[0]);
 
 export function parseOrThrow(text: string): Review {

@@ -1,7 +1,7 @@
 import { EngineInputError, type EngineWarning } from '../diagnostics';
 import type { Metres, Radians } from '../units';
 import { involute, inverseInvolute } from './involute';
-import type { GearPairGeometry, GearPairInput } from './types';
+import { DEFAULT_PAIR_NAMES, type GearPairGeometry, type GearPairInput, type PairNames } from './types';
 import { designChecks } from './designChecks';
 
 /** Addendum coefficient of the basic rack, haP* = 1 (ISO 53 profile A). */
@@ -13,31 +13,48 @@ const ADDENDUM_COEFFICIENT = 1;
  */
 const CENTRE_DISTANCE_TOLERANCE_PER_MODULE = 0.005;
 
-const F = {
-  a: 'gearPair.centerDistance_mm',
-  x1: 'gearPair.pinion.profileShift',
-  x2: 'gearPair.wheel.profileShift',
-  da1: 'gearPair.pinion.tipDiameter_mm',
-  da2: 'gearPair.wheel.tipDiameter_mm',
-} as const;
+const fieldsOf = (n: PairNames) =>
+  ({
+    a: `${n.pair}.centerDistance_mm`,
+    z2: `${n.wheel.field}.teeth`,
+    x1: `${n.pinion.field}.profileShift`,
+    x2: `${n.wheel.field}.profileShift`,
+    da1: `${n.pinion.field}.tipDiameter_mm`,
+    da2: `${n.wheel.field}.tipDiameter_mm`,
+  }) as const;
 
 /**
- * Geometry of an external involute cylindrical gear pair (spur or helical) per ISO 21771:
- * diameters, working pressure angle, centre distance, the points A–E on the line of action
- * (measured from T1) and the contact ratios, followed by the design checks.
+ * Geometry of an involute cylindrical gear pair (spur or helical, external or internal) per
+ * ISO 21771: diameters, working pressure angle, centre distance, the points A–E on the line of
+ * action (measured from T1) and the contact ratios, followed by the design checks.
+ *
+ * The internal pair is ISO 21771's external pair with the ring's tooth count, diameters and centre
+ * distance negative [memory]; here they stay positive and σ = −1 carries the sign:
+ * a = (d2 + σ d1)/2 · cos αt/cos αwt, inv αwt = inv αt + 2 tan αn (x1 + x2)/(z1 + σ z2),
+ * da2 = d2 + σ 2 mn (haP* + x2), T1A = σ (T1T2 − √(ra2² − rb2²)), dw1 = 2a/(u + σ).
+ * With zero shifts an internal pair has a = mn (z2 − z1)/(2 cos β).
  *
  * Either the centre distance or the profile shifts may be given; the other is derived.
- * If both are given, a centre distance above the no-backlash value of the shifts (by more than
- * 0.005·mn) is backlash: the given a sets αwt and a warning states the difference; one below it
- * would jam the teeth and raises an EngineInputError that names the field and the limit.
- * Impossible geometry (no contact, a tip inside its base circle) raises EngineInputError.
+ * If both are given, a centre distance on the loose side of the no-backlash value of the shifts
+ * (by more than 0.005·mn: larger on an external pair, smaller on an internal one) is backlash:
+ * the given a sets αwt and a warning states the difference; one on the tight side would jam the
+ * teeth and raises an EngineInputError that names the field and the limit.
+ * Impossible geometry (no contact, a tip inside its base circle, a ring no larger than its
+ * pinion) raises EngineInputError.
  */
 export function gearPairGeometry(g: GearPairInput): GearPairGeometry {
+  const kind = g.kind ?? 'external';
+  const names = g.names ?? DEFAULT_PAIR_NAMES;
+  const F = fieldsOf(names);
+  const sigma = kind === 'internal' ? -1 : 1;
   const mn = g.normalModule;
   const an = g.normalPressureAngle;
   const beta = g.helixAngle;
   const z1 = g.pinion.teeth;
   const z2 = g.wheel.teeth;
+  if (kind === 'internal' && !(z2 > z1)) {
+    throw new EngineInputError('geometry.ring-not-larger', F.z2, `> ${z1} teeth`, `The ${names.wheel.word} has ${z2} teeth, not more than the ${names.pinion.word}'s ${z1}: an internal gear must have more teeth than the gear inside it.`);
+  }
   const cosB = Math.cos(beta);
   const at = Math.atan(Math.tan(an) / cosB) as Radians;
   const betaB = Math.asin(Math.sin(beta) * Math.cos(an)) as Radians;
@@ -45,7 +62,8 @@ export function gearPairGeometry(g: GearPairInput): GearPairGeometry {
   const d2 = ((z2 * mn) / cosB) as Metres;
   const db1 = (d1 * Math.cos(at)) as Metres;
   const db2 = (d2 * Math.cos(at)) as Metres;
-  const a0 = (d1 + d2) / 2;
+  const a0 = (d2 + sigma * d1) / 2;
+  const zSum = z1 + sigma * z2;
   const invAt = involute(at);
   const notes: EngineWarning[] = [];
 
@@ -63,28 +81,30 @@ export function gearPairGeometry(g: GearPairInput): GearPairGeometry {
         'geometry.centre-distance-impossible',
         F.a,
         `> ${(a0 * Math.cos(at) * 1e3).toFixed(3)} mm`,
-        `${F.a} = ${(a * 1e3).toFixed(3)} mm is impossible: the base circles would overlap (it must exceed ${(a0 * Math.cos(at) * 1e3).toFixed(3)} mm).`,
+        `The centre distance ${(a * 1e3).toFixed(3)} mm is impossible: ${kind === 'internal' ? 'the base circles would not leave a line of action' : 'the base circles would overlap'} (it must exceed ${(a0 * Math.cos(at) * 1e3).toFixed(3)} mm, the ${kind === 'internal' ? 'difference' : 'sum'} of the base radii).`,
       );
     }
     awt = Math.acos(cosAwt) as Radians;
-    const sumX = ((involute(awt) - invAt) * (z1 + z2)) / (2 * Math.tan(an));
+    const sumX = ((involute(awt) - invAt) * zSum) / (2 * Math.tan(an));
     if (givenX1 !== undefined && givenX2 !== undefined) {
-      const impliedA = centreDistanceFromShifts(a0, at, an, z1, z2, givenX1 + givenX2);
+      const impliedA = centreDistanceFromShifts(a0, at, an, zSum, givenX1 + givenX2);
       const tol = CENTRE_DISTANCE_TOLERANCE_PER_MODULE * mn;
-      if (a < impliedA - tol) {
+      // Backlash opens as the pinion moves away from the wheel's teeth: a larger a outside, a smaller a inside a ring.
+      const loose = sigma * (a - impliedA);
+      if (loose < -tol) {
         throw new EngineInputError(
           'geometry.centre-distance-too-small',
           F.a,
-          `≥ ${(impliedA * 1e3).toFixed(3)} mm`,
-          `${F.a} = ${(a * 1e3).toFixed(3)} mm is below ${(impliedA * 1e3).toFixed(3)} mm, the no-backlash centre distance of the profile shifts x1 + x2 = ${(givenX1 + givenX2).toFixed(4)}: the teeth would jam. Increase the centre distance or reduce the profile shifts.`,
+          `${sigma > 0 ? '≥' : '≤'} ${(impliedA * 1e3).toFixed(3)} mm`,
+          `The centre distance ${(a * 1e3).toFixed(3)} mm is ${sigma > 0 ? 'below' : 'above'} ${(impliedA * 1e3).toFixed(3)} mm, the no-backlash centre distance of the profile shifts x1 + x2 = ${(givenX1 + givenX2).toFixed(4)}: the teeth would jam. ${sigma > 0 ? 'Increase' : 'Reduce'} the centre distance or reduce the profile shifts.`,
         );
       }
-      if (a > impliedA + tol) {
+      if (loose > tol) {
         notes.push({
           code: 'geometry.backlash',
           severity: 'warning',
           field: F.a,
-          message: `The centre distance ${(a * 1e3).toFixed(3)} mm is ${((a - impliedA) * 1e3).toFixed(3)} mm above ${(impliedA * 1e3).toFixed(3)} mm, the no-backlash value of the profile shifts x1 + x2 = ${(givenX1 + givenX2).toFixed(4)}: the difference is backlash. The working pressure angle is taken from the given centre distance.`,
+          message: `The centre distance ${(a * 1e3).toFixed(3)} mm is ${(loose * 1e3).toFixed(3)} mm ${sigma > 0 ? 'above' : 'below'} ${(impliedA * 1e3).toFixed(3)} mm, the no-backlash value of the profile shifts x1 + x2 = ${(givenX1 + givenX2).toFixed(4)}: the difference is backlash. The working pressure angle is taken from the given centre distance.`,
         });
       }
       x1 = givenX1;
@@ -116,21 +136,23 @@ export function gearPairGeometry(g: GearPairInput): GearPairGeometry {
         message: 'No centre distance and no profile shift given: x = 0 assumed for the missing shift.',
       });
     }
-    const invAwt = invAt + (2 * Math.tan(an) * (x1 + x2)) / (z1 + z2);
+    const invAwt = invAt + (2 * Math.tan(an) * (x1 + x2)) / zSum;
     if (!(invAwt > 0)) {
-      throw new EngineInputError('geometry.profile-shift-impossible', F.x1, 'x1 + x2 > −(z1+z2) inv αt / (2 tan αn)', `The profile shifts x1 + x2 = ${(x1 + x2).toFixed(4)} give no working pressure angle.`);
+      const limit = kind === 'internal' ? 'x1 + x2 < (z2 − z1) inv αt / (2 tan αn)' : 'x1 + x2 > −(z1+z2) inv αt / (2 tan αn)';
+      throw new EngineInputError('geometry.profile-shift-impossible', F.x1, limit, `The profile shifts x1 + x2 = ${(x1 + x2).toFixed(4)} give no working pressure angle.`);
     }
     awt = inverseInvolute(invAwt);
     a = ((a0 * Math.cos(at)) / Math.cos(awt)) as Metres;
   }
 
   const da1 = g.pinion.tipDiameter ?? ((d1 + 2 * mn * (ADDENDUM_COEFFICIENT + x1)) as Metres);
-  const da2 = g.wheel.tipDiameter ?? ((d2 + 2 * mn * (ADDENDUM_COEFFICIENT + x2)) as Metres);
+  const da2 = g.wheel.tipDiameter ?? ((d2 + sigma * 2 * mn * (ADDENDUM_COEFFICIENT + x2)) as Metres);
   if (!(da1 > db1)) {
-    throw new EngineInputError('geometry.tip-inside-base-circle', F.da1, `> ${(db1 * 1e3).toFixed(3)} mm`, `${F.da1} = ${(da1 * 1e3).toFixed(3)} mm is not larger than the base diameter ${(db1 * 1e3).toFixed(3)} mm: the pinion has no involute flank.`);
+    throw new EngineInputError('geometry.tip-inside-base-circle', F.da1, `> ${(db1 * 1e3).toFixed(3)} mm`, `The ${names.pinion.word}'s tip diameter ${(da1 * 1e3).toFixed(3)} mm is not larger than its base diameter ${(db1 * 1e3).toFixed(3)} mm: it has no involute flank.`);
   }
   if (!(da2 > db2)) {
-    throw new EngineInputError('geometry.tip-inside-base-circle', F.da2, `> ${(db2 * 1e3).toFixed(3)} mm`, `${F.da2} = ${(da2 * 1e3).toFixed(3)} mm is not larger than the base diameter ${(db2 * 1e3).toFixed(3)} mm: the wheel has no involute flank.`);
+    const what = kind === 'internal' ? `inner (tip) diameter` : 'tip diameter';
+    throw new EngineInputError('geometry.tip-inside-base-circle', F.da2, `> ${(db2 * 1e3).toFixed(3)} mm`, `The ${names.wheel.word}'s ${what} ${(da2 * 1e3).toFixed(3)} mm is not larger than its base diameter ${(db2 * 1e3).toFixed(3)} mm: its tip lies below the base circle, where there is no involute flank.`);
   }
 
   const rb1 = db1 / 2;
@@ -139,7 +161,7 @@ export function gearPairGeometry(g: GearPairInput): GearPairGeometry {
   const ra2 = da2 / 2;
   const T1T2 = (a * Math.sin(awt)) as Metres;
   const T1E = Math.sqrt(ra1 * ra1 - rb1 * rb1) as Metres;
-  const T1A = (T1T2 - Math.sqrt(ra2 * ra2 - rb2 * rb2)) as Metres;
+  const T1A = (sigma * (T1T2 - Math.sqrt(ra2 * ra2 - rb2 * rb2))) as Metres;
   const T1C = (rb1 * Math.tan(awt)) as Metres;
   const pbt = ((Math.PI * mn * Math.cos(at)) / cosB) as Metres;
   const T1B = (T1E - pbt) as Metres;
@@ -147,9 +169,11 @@ export function gearPairGeometry(g: GearPairInput): GearPairGeometry {
   const epsAlpha = (T1E - T1A) / pbt;
   const epsBeta = (g.faceWidth * Math.sin(beta)) / (Math.PI * mn);
   const u = z2 / z1;
-  const dw1 = ((2 * a) / (1 + u)) as Metres;
+  const dw1 = ((2 * a) / (u + sigma)) as Metres;
 
   const geometry: GearPairGeometry = {
+    kind,
+    names,
     z1,
     z2,
     u,
@@ -185,9 +209,9 @@ export function gearPairGeometry(g: GearPairInput): GearPairGeometry {
   return { ...geometry, checks };
 }
 
-/** a = a0 cos αt / cos αwt with inv αwt = inv αt + 2 tan αn Σx/(z1+z2) (ISO 21771). */
-function centreDistanceFromShifts(a0: number, at: Radians, an: Radians, z1: number, z2: number, sumX: number): number {
-  const invAwt = involute(at) + (2 * Math.tan(an) * sumX) / (z1 + z2);
+/** a = a0 cos αt / cos αwt with inv αwt = inv αt + 2 tan αn Σx/(z1 + σ z2) (ISO 21771). */
+function centreDistanceFromShifts(a0: number, at: Radians, an: Radians, zSum: number, sumX: number): number {
+  const invAwt = involute(at) + (2 * Math.tan(an) * sumX) / zSum;
   if (!(invAwt > 0)) return -1; // no working angle: cannot equal a real centre distance
   return (a0 * Math.cos(at)) / Math.cos(inverseInvolute(invAwt));
 }

@@ -1,16 +1,57 @@
 import type { Metres, Radians } from '../units';
 import type { EngineWarning } from '../diagnostics';
 
-/** One gear of an external cylindrical pair, as given. */
+/**
+ * External pair: both gears have external teeth and turn in opposite senses. Internal pair: the
+ * wheel is a ring with internal teeth, the pinion runs inside it and both turn in the same sense.
+ */
+export type GearPairKind = 'external' | 'internal';
+
+/**
+ * One gear of a cylindrical pair, as given. Tooth counts are positive for both kinds; the kind of
+ * pair says that the wheel of an internal pair has internal teeth.
+ */
 export interface GearInput {
   readonly teeth: number;
-  /** Profile shift coefficient x (dimensionless); derived from the centre distance when absent. */
+  /**
+   * Profile shift coefficient x (dimensionless); derived from the centre distance when absent.
+   * Sign as ISO 21771 gives it for signed tooth counts [memory]: x > 0 moves the basic rack
+   * profile towards the tooth tips and thickens the tooth at the reference circle — away from the
+   * axis on an external gear, towards the axis on a ring (its inner, tip circle shrinks).
+   */
   readonly profileShift?: number;
-  /** Tip diameter da; else d + 2 mn (haP* + x) with haP* = 1. */
+  /**
+   * Tip diameter da; else d + 2 mn (haP* + x) with haP* = 1. For a ring this is its inner
+   * diameter, else d − 2 mn (haP* + x).
+   */
   readonly tipDiameter?: Metres;
 }
 
+/** How messages name a gear: its review path (`gearPair.wheel`) and its word (`wheel`). */
+export interface MemberName {
+  readonly field: string;
+  readonly word: string;
+}
+
+/** Names used in errors and checks, so a planetary stage can say `planetary.ring` and "ring". */
+export interface PairNames {
+  /** Review path of the pair, e.g. `gearPair`. */
+  readonly pair: string;
+  readonly pinion: MemberName;
+  readonly wheel: MemberName;
+}
+
+export const DEFAULT_PAIR_NAMES: PairNames = {
+  pair: 'gearPair',
+  pinion: { field: 'gearPair.pinion', word: 'pinion' },
+  wheel: { field: 'gearPair.wheel', word: 'wheel' },
+};
+
 export interface GearPairInput {
+  /** Default `external`. */
+  readonly kind?: GearPairKind;
+  /** Default {@link DEFAULT_PAIR_NAMES}. */
+  readonly names?: PairNames;
   readonly normalModule: Metres;
   readonly normalPressureAngle: Radians;
   readonly helixAngle: Radians;
@@ -21,7 +62,11 @@ export interface GearPairInput {
   readonly wheel: GearInput;
 }
 
-/** Positions on the line of action, measured from T1 (the pinion base-circle tangent point). */
+/**
+ * Positions on the line of action, measured from T1 (the pinion base-circle tangent point). On an
+ * internal pair T2 lies beyond T1, on the far side from C, so every point is at a positive s and
+ * the ring's radius of curvature is s + T1T2.
+ */
 export interface PathPoints {
   /** Start of active contact (wheel tip). */
   readonly A: Metres;
@@ -36,9 +81,11 @@ export interface PathPoints {
 }
 
 export interface GearPairGeometry {
+  readonly kind: GearPairKind;
+  readonly names: PairNames;
   readonly z1: number;
   readonly z2: number;
-  /** Gear ratio u = z2/z1. */
+  /** Gear ratio u = z2/z1 (positive for both kinds; ISO 21771 writes it negative for an internal pair). */
   readonly u: number;
   readonly normalModule: Metres;
   readonly normalPressureAngle: Radians;
@@ -60,7 +107,7 @@ export interface GearPairGeometry {
   readonly centerDistance: Metres;
   /** Transverse base pitch pbt. */
   readonly transverseBasePitch: Metres;
-  /** Length T1T2 of the line of action between the base-circle tangent points. */
+  /** Length T1T2 between the base-circle tangent points (a sin αwt for both kinds). */
   readonly lineOfAction: Metres;
   readonly points: PathPoints;
   /** εα */

@@ -19,14 +19,17 @@ export interface FlankVelocities {
 
 /**
  * Flank velocities at a contact point s from T1 on the transverse line of action (ISO/TS 6336-20
- * kinematics): ρ1 = s, ρ2 = T1T2 − s, v = ω ρ. Writes into `out` to keep the hot loop allocation-free.
- * @param s - position from T1, 0 < s < T1T2, m
+ * kinematics): ρ1 = s, v = ω ρ, and ρ2 = T1T2 − s on an external pair, ρ2 = s + T1T2 on an
+ * internal one (T2 lies behind T1; both flanks move the same way along the line). At C both give
+ * v1 = v2. Writes into `out` to keep the hot loop allocation-free.
+ * @param s - position from T1, m (0 < s < T1T2 on an external pair, s > 0 on an internal one)
  * @param lineOfAction - T1T2, m
- * @param omega1 - pinion angular speed, rad/s; omega2 - wheel angular speed, rad/s
+ * @param omega1 - pinion angular speed, rad/s; omega2 - wheel angular speed, rad/s (both as magnitudes)
+ * @param internal - the wheel is a ring with internal teeth
  */
-export function flankVelocities(s: Metres, lineOfAction: Metres, omega1: RadiansPerSecond, omega2: RadiansPerSecond, out: FlankVelocities): FlankVelocities {
+export function flankVelocities(s: Metres, lineOfAction: Metres, omega1: RadiansPerSecond, omega2: RadiansPerSecond, out: FlankVelocities, internal = false): FlankVelocities {
   const v1 = omega1 * s;
-  const v2 = omega2 * (lineOfAction - s);
+  const v2 = omega2 * (internal ? s + lineOfAction : lineOfAction - s);
   const sum = v1 + v2;
   out.v1 = v1 as MetresPerSecond;
   out.v2 = v2 as MetresPerSecond;

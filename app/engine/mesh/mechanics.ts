@@ -3,7 +3,7 @@ import { samplePath } from '../kinematics/pathSampling';
 import { emptyFlankVelocities, flankVelocities } from '../kinematics/flankVelocities';
 import { loadShare } from '../load/loadSharing';
 import { toothForces, type ToothForces } from '../load/toothForces';
-import { contactModulus, hertzLinePressure, hertzSemiWidth, reducedRadius } from '../stress/hertz';
+import { conformalReducedRadius, contactModulus, hertzLinePressure, hertzSemiWidth, reducedRadius } from '../stress/hertz';
 import { nominalContactStress, type NominalContactStress } from '../stress/iso6336Nominal';
 import type { Material } from '../materials';
 import type { EngineDuty } from './types';
@@ -49,8 +49,19 @@ export interface MeshMechanics {
 }
 
 /**
+ * Reduced radius in the normal plane at s from T1: ρn = ρ/cos βb, with ρ1 = s and ρ2 = T1T2 − s
+ * (external, convex–convex) or ρ2 = s + T1T2 (internal, conformal: ρred = ρ1 ρ2/(ρ2 − ρ1)).
+ */
+export function normalReducedRadius(g: GearPairGeometry, s: number, cosBb: number = Math.cos(g.baseHelixAngle)): Metres {
+  return g.kind === 'internal'
+    ? conformalReducedRadius((s / cosBb) as Metres, ((s + g.lineOfAction) / cosBb) as Metres)
+    : reducedRadius((s / cosBb) as Metres, ((g.lineOfAction - s) / cosBb) as Metres);
+}
+
+/**
  * Kinematics, load sharing and Hertz stress at `n` points along A…E (ISO 21771 geometry,
- * ISO/TS 6336-20 load sharing, Hertz line contact in the normal plane, ρn = ρ/cos βb).
+ * ISO/TS 6336-20 load sharing, Hertz line contact in the normal plane, ρn = ρ/cos βb), for an
+ * external or an internal pair.
  */
 export function meshMechanics(g: GearPairGeometry, pinion: Material, wheel: Material, duty: MeshDuty, n: number): MeshMechanics {
   const position = samplePath(g.points, n);
@@ -62,6 +73,7 @@ export function meshMechanics(g: GearPairGeometry, pinion: Material, wheel: Mate
   const omega1 = duty.pinionSpeed;
   const omega2 = (omega1 / g.u) as RadiansPerSecond;
   const cosBb = Math.cos(g.baseHelixAngle);
+  const internal = g.kind === 'internal';
   // One load along the whole path (stress, film, flash): KA Kv KHβ KHα Fbt/b, as ISO/TS 6336-20 loads
   // its flash temperature; with Kv = KHβ = KHα = 1 (the defaults) this is METHODS' KA Fbt/b.
   const nominalLoad = forces.lineLoad * duty.applicationFactor * duty.dynamicFactor * duty.faceLoadFactor * duty.transverseLoadFactor;
@@ -72,13 +84,13 @@ export function meshMechanics(g: GearPairGeometry, pinion: Material, wheel: Mate
     if (s === g.points.C) pitchIndex = i;
     const share = loadShare(s, g.points, g.transverseContactRatio, g.overlapRatio);
     const load = (share * nominalLoad) as NewtonsPerMetre;
-    const rho = reducedRadius((s / cosBb) as Metres, ((g.lineOfAction - s) / cosBb) as Metres);
+    const rho = normalReducedRadius(g, s, cosBb);
     xg[i] = share;
     w[i] = load;
     rr[i] = rho;
     pH[i] = hertzLinePressure(load, rho, eStar);
     bH[i] = hertzSemiWidth(load, rho, eStar);
-    flankVelocities(s, g.lineOfAction, omega1, omega2, fv);
+    flankVelocities(s, g.lineOfAction, omega1, omega2, fv, internal);
     v1[i] = fv.v1;
     v2[i] = fv.v2;
     vs[i] = fv.sum;
@@ -87,7 +99,7 @@ export function meshMechanics(g: GearPairGeometry, pinion: Material, wheel: Mate
     z1[i] = fv.specificSliding1;
     z2[i] = fv.specificSliding2;
   }
-  const rhoC = reducedRadius((g.points.C / cosBb) as Metres, ((g.lineOfAction - g.points.C) / cosBb) as Metres);
+  const rhoC = normalReducedRadius(g, g.points.C, cosBb);
   const nominal = nominalContactStress(g, forces.tangential, eStar, {
     kA: duty.applicationFactor,
     kv: duty.dynamicFactor,

@@ -1,3 +1,4 @@
+import { EngineInputError } from '../diagnostics';
 import type { Metres, NewtonsPerMetre, Pascals } from '../units';
 
 /**
@@ -12,6 +13,19 @@ export function contactModulus(e1: Pascals, nu1: number, e2: Pascals, nu2: numbe
 /** Reduced radius of curvature 1/ρred = 1/ρ1 + 1/ρ2 (convex–convex). */
 export function reducedRadius(rho1: Metres, rho2: Metres): Metres {
   return ((rho1 * rho2) / (rho1 + rho2)) as Metres;
+}
+
+/**
+ * Reduced radius of a conformal (convex–concave) contact, 1/ρred = 1/ρ1 − 1/ρ2, i.e.
+ * ρred = ρ1 ρ2/(ρ2 − ρ1): a pinion flank (convex, ρ1) inside a ring flank (concave, ρ2 > ρ1),
+ * as on an internal gear pair (Johnson, Contact Mechanics, §4.2, with the concave radius negative).
+ * ρ2 ≤ ρ1 is no contact of this kind and throws EngineInputError.
+ */
+export function conformalReducedRadius(rho1: Metres, rho2: Metres): Metres {
+  if (!(rho2 > rho1) || !(rho1 > 0)) {
+    throw new EngineInputError('stress.conformal-radii', 'gearPair.wheel', 'ρ2 > ρ1 > 0', `A concave flank of radius ${(rho2 * 1e3).toFixed(3)} mm cannot hold a convex one of radius ${(rho1 * 1e3).toFixed(3)} mm.`);
+  }
+  return ((rho1 * rho2) / (rho2 - rho1)) as Metres;
 }
 
 /**

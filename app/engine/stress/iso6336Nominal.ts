@@ -57,13 +57,17 @@ export interface NominalContactStress {
   readonly sigmaH: Pascals;
 }
 
-/** Nominal contact stress at the pitch point by ISO 6336-2 (method B form, ZB = ZD = 1). */
+/**
+ * Nominal contact stress at the pitch point by ISO 6336-2 (method B form, ZB = ZD = 1). For an
+ * internal pair ISO 6336 takes u negative [memory], so (u + 1)/u becomes (|u| − 1)/|u|.
+ */
 export function nominalContactStress(g: GearPairGeometry, ft: Newtons, eStar: Pascals, k: NominalContactStressFactors): NominalContactStress {
   const zH = zoneFactor(g);
   const zE = elasticityFactor(eStar);
   const zEpsilon = contactRatioFactor(g.transverseContactRatio, g.overlapRatio);
   const zBeta = helixAngleFactor(g);
-  const sigmaH0 = zH * zE * zEpsilon * zBeta * Math.sqrt((ft * (g.u + 1)) / (g.referenceDiameter1 * g.faceWidth * g.u));
+  const uSum = g.kind === 'internal' ? g.u - 1 : g.u + 1;
+  const sigmaH0 = zH * zE * zEpsilon * zBeta * Math.sqrt((ft * uSum) / (g.referenceDiameter1 * g.faceWidth * g.u));
   const sigmaH = sigmaH0 * Math.sqrt(k.kA * k.kv * k.kHbeta * k.kHalpha);
   return { zH, zE, zEpsilon, zBeta, sigmaH0: sigmaH0 as Pascals, sigmaH: sigmaH as Pascals };
 }

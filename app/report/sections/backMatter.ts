@@ -2,6 +2,7 @@ import { FINGERPRINT_SCHEME } from '../../review/fingerprint';
 import type { RecordContext } from '../context';
 import { drawStatusIcon, STATUS_COLOURS } from '../icons';
 import { basisTag, METHODS } from '../../review/methods';
+import { MESH_WORDS } from '../../review/vocabulary';
 import { caseTitle } from './caseResults';
 import { DECISION_WORDS, GREY, STATUS_LABELS } from '../words';
 import { revisionHistory, type Signing } from '../../review/audit/history';
@@ -36,10 +37,14 @@ export function drawMethods(ctx: RecordContext): void {
 export function drawWarnings(ctx: RecordContext): void {
   const { layout: L, results } = ctx;
   L.heading('Warnings and validity notes', 1);
+  // A planetary stage: the stage's checks, then each mesh's geometry checks and case warnings.
+  const meshes = results.meshes ?? [{ mesh: null, gear: results.gear, cases: results.cases }];
+  const where = (mesh: string | null, what: string) => (mesh ? `${MESH_WORDS[mesh as keyof typeof MESH_WORDS]} mesh: ${what}` : what);
   const rows: string[][] = [
-    ...results.gear.checks.map((c) => ['Gear pair', c.severity, c.code, c.message]),
+    ...(results.planetary?.checks ?? []).map((c) => ['Planetary stage', c.severity, c.code, c.message]),
+    ...meshes.flatMap((m) => m.gear.checks.map((c) => [where(m.mesh, 'Gear pair'), c.severity, c.code, c.message])),
     ...results.oils.flatMap((o) => o.warnings.map((w) => [`Oil: ${o.name}`, w.severity, `${w.code} (${w.field})`, w.message])),
-    ...results.cases.flatMap((c) => c.warnings.map((w) => [caseTitle(c), w.severity, `${w.code} (${w.field})`, w.message])),
+    ...meshes.flatMap((m) => m.cases.flatMap((c) => c.warnings.map((w) => [where(m.mesh, caseTitle(c)), w.severity, `${w.code} (${w.field})`, w.message]))),
   ];
   if (rows.length === 0) {
     L.para('The engine raised no warnings: every formula was used inside its stated validity range, and the gear pair passed its design checks.', { size: 9 });

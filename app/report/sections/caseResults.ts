@@ -18,7 +18,7 @@ function drawCase(ctx: RecordContext, c: CaseResult, index: number): void {
   const { layout: L, units: u } = ctx;
   const doc = L.doc;
   L.newPage();
-  L.heading(`Results ${index + 1} of ${ctx.results.cases.length}: ${caseTitle(c)}`);
+  L.heading(`${ctx.meshLabel ? `${ctx.meshLabel.replace(/^./, (x) => x.toUpperCase())}, results` : 'Results'} ${index + 1} of ${ctx.results.cases.length}: ${caseTitle(c)}`);
   if (c.verdict) {
     const top = L.y;
     drawVerdictIcon(doc, c.verdict.code, L.left, top, 13);

@@ -8,7 +8,7 @@ import { GREY, VERDICT_WORDS } from '../words';
 export function drawComparison(ctx: RecordContext): void {
   const { layout: L, review, results } = ctx;
   L.newPage();
-  L.heading('Side by side: oils × load cases');
+  L.heading(`Side by side: oils × load cases${ctx.meshLabel ? `, ${ctx.meshLabel}` : ''}`);
   if (results.verdicts.length === 0) {
     L.para('No oils in scope.', { size: 9 });
   } else {

@@ -51,14 +51,11 @@ export function drawCover(ctx: RecordContext): void {
 /** The job in one paragraph, with the scope and what was not assessed. */
 function drawJob(ctx: RecordContext): void {
   const { layout: L, review, results } = ctx;
-  const gp = review.gearPair;
-  const kind = gp.helixAngle_deg > 0 ? `helical (β = ${gp.helixAngle_deg}°)` : 'spur';
   const oils = review.oils.map((o) => `“${o.name}” (${ROLE_WORDS[o.role].toLowerCase()})`).join(', ');
   const cases = review.loadCases.map((c) => `“${c.name}”`).join(', ');
   L.heading('The job', 2);
   L.para(
-    `This review checks the lubrication of one external ${kind} gear pair, z1/z2 = ${gp.pinion.teeth}/${gp.wheel.teeth}, ` +
-      `mn = ${ctx.units.fmt(gp.normalModule_mm, 'length')}, b = ${ctx.units.fmt(gp.faceWidth_mm, 'length')}, ` +
+    `This review checks the lubrication of ${gearSetWords(ctx)}, ` +
       `under ${review.loadCases.length} load case${review.loadCases.length === 1 ? '' : 's'} (${cases})` +
       (review.oils.length ? `, for ${review.oils.length} candidate oil${review.oils.length === 1 ? '' : 's'}: ${oils}. ` : ', with no oil in scope. ') +
       'Along the line of action from A to E it computes the geometry (ISO 21771), the load sharing and Hertz contact stress (ISO 6336-2, ISO/TS 6336-20), ' +
@@ -76,6 +73,24 @@ function drawJob(ctx: RecordContext): void {
   L.para(`Not assessed: ${notAssessed.join('; ')}.`, { size: 9 });
   if (review.notes) L.para(`Notes: ${review.notes}`, { size: 8.5, color: GREY });
   if (results.title !== review.title) L.para(`Results title: ${results.title}`, { size: 8, color: GREY });
+}
+
+/** The gear set in words: the pair and its kind, or the planetary stage and its meshes. */
+function gearSetWords(ctx: RecordContext): string {
+  const { review, units } = ctx;
+  const gs = review.gearPair ?? review.planetary;
+  if (!gs) return 'no gear set';
+  const kind = gs.helixAngle_deg > 0 ? `helical (β = ${gs.helixAngle_deg}°)` : 'spur';
+  const size = `mn = ${units.fmt(gs.normalModule_mm, 'length')}, b = ${units.fmt(gs.faceWidth_mm, 'length')}`;
+  if (review.gearPair) {
+    const gp = review.gearPair;
+    return `one ${gp.kind === 'internal' ? 'internal (pinion in a ring)' : 'external'} ${kind} gear pair, z1/z2 = ${gp.pinion.teeth}/${gp.wheel.teeth}, ${size}`;
+  }
+  const p = review.planetary as NonNullable<typeof review.planetary>;
+  return (
+    `one ${kind} planetary stage, sun/planet/ring zS/zP/zR = ${p.sun.teeth}/${p.planet.teeth}/${p.ring.teeth} with ${p.planets} planet${p.planets === 1 ? '' : 's'}, the ${p.held} held, ${size}; ` +
+    'each of its two meshes (sun–planet, external; planet–ring, internal) is reviewed as a pair in the carrier frame and the verdict is that of the mesh that governs'
+  );
 }
 
 export function cautionBox(ctx: RecordContext, text: string): void {

@@ -1,8 +1,9 @@
-import { MATERIALS, type MaterialPreset } from '../../engine/materials';
 import type { GearPair, Review } from '../../review/schema';
 import type { RecordContext } from '../context';
+import { drawPlanetaryInputs } from './planetaryInputs';
+import { materialName, materialRow, shift, tip } from './inputHelpers';
 import { formatNumber, type Units } from '../units';
-import { BASE_OIL_WORDS, MATERIAL_WORDS, ROLE_WORDS } from '../../review/vocabulary';
+import { BASE_OIL_WORDS, ROLE_WORDS } from '../../review/vocabulary';
 
 const CHEMISTRY_WORDS: Readonly<Record<Review['oils'][number]['chemistry'], string>> = { 'r-and-o': 'R&O', 'anti-wear': 'AW', 'extreme-pressure': 'EP' };
 
@@ -10,23 +11,55 @@ const yesNo = (b: boolean): string => (b ? 'yes' : 'no');
 
 /** Inputs: gear pair, materials, duty, oils and policy, in the review's unit system. */
 export function drawInputs(ctx: RecordContext): void {
-  const { layout: L, review, results, units: u } = ctx;
+  const { layout: L, review, units: u } = ctx;
   L.newPage();
   L.heading(`Inputs (${u.system === 'us' ? 'US customary units' : 'SI units'})`);
-  const gp = review.gearPair;
-  const g = results.gear;
+  if (review.gearPair) drawPairInputs(ctx, review.gearPair);
+  else if (review.planetary) drawPlanetaryInputs(ctx, review.planetary);
 
-  L.heading('Gear pair', 2);
+  L.heading('Duty', 2);
+  const planetary = review.planetary;
+  const speedHeader = planetary ? (planetary.held === 'sun' ? 'n carrier' : 'n sun') : 'n1';
+  L.table(
+    [
+      { header: 'Load case', width: 0.27 },
+      { header: speedHeader, width: 0.09, align: 'right' },
+      { header: planetary ? 'T sun or P (input)' : 'T1 or P (input)', width: 0.16, align: 'right' },
+      { header: 'KA', width: 0.07, align: 'right' },
+      { header: 'θoil', width: 0.11, align: 'right' },
+      { header: 'Lubrication', width: 0.12 },
+      { header: 'Time share', width: 0.1, align: 'right' },
+    ],
+    review.loadCases.map((c) => [
+      c.name,
+      u.fmt((planetary ? (planetary.held === 'sun' ? c.carrierSpeed_rpm : c.sunSpeed_rpm) : c.pinionSpeed_rpm) ?? null, 'speed'),
+      c.pinionTorque_Nm !== undefined ? `T1 = ${u.fmt(c.pinionTorque_Nm, 'torque')}` : c.sunTorque_Nm !== undefined ? `T sun = ${u.fmt(c.sunTorque_Nm, 'torque')}` : `P = ${u.fmt(c.power_kW, 'power')}`,
+      formatNumber(c.applicationFactor, 3),
+      u.fmt(c.oilTemperature_C, 'temperature'),
+      c.lubrication === 'dip' ? 'dip' : 'spray',
+      `${formatNumber(c.timeShare * 100, 3)} %`,
+    ]),
+    { zebra: true, fontSize: 8 },
+  );
+  drawOils(ctx);
+}
+
+function drawPairInputs(ctx: RecordContext, gp: GearPair): void {
+  const { layout: L, results, units: u } = ctx;
+  const g = results.gear;
+  const wheel = gp.kind === 'internal' ? 'Ring' : 'Wheel';
+
+  L.heading(gp.kind === 'internal' ? 'Gear pair (internal: the wheel is a ring)' : 'Gear pair', 2);
   L.table(
     [
       { header: 'Quantity', width: 0.46 },
       { header: 'Pinion', width: 0.27, align: 'right' },
-      { header: 'Wheel', width: 0.27, align: 'right' },
+      { header: wheel, width: 0.27, align: 'right' },
     ],
     [
       ['Number of teeth z', String(gp.pinion.teeth), String(gp.wheel.teeth)],
       ['Profile shift coefficient x (input → used)', shift(gp.pinion.profileShift, g.profileShift.pinion), shift(gp.wheel.profileShift, g.profileShift.wheel)],
-      ['Tip diameter da (input → used)', tip(u, gp.pinion.tipDiameter_mm, g.tipDiameter_mm.pinion), tip(u, gp.wheel.tipDiameter_mm, g.tipDiameter_mm.wheel)],
+      [gp.kind === 'internal' ? 'Tip diameter da, ring: inner (input → used)' : 'Tip diameter da (input → used)', tip(u, gp.pinion.tipDiameter_mm, g.tipDiameter_mm.pinion), tip(u, gp.wheel.tipDiameter_mm, g.tipDiameter_mm.wheel)],
       ['Flank roughness Ra', u.fmt(gp.pinion.roughnessRa_um, 'roughness'), u.fmt(gp.wheel.roughnessRa_um, 'roughness')],
       ['Material', materialName(gp.pinion.material), materialName(gp.wheel.material)],
       ['Reference diameter d (computed)', u.fmt(g.referenceDiameter_mm.pinion, 'length'), u.fmt(g.referenceDiameter_mm.wheel, 'length')],
@@ -52,29 +85,10 @@ export function drawInputs(ctx: RecordContext): void {
     { zebra: true, fontSize: 8 },
   );
 
-  L.heading('Duty', 2);
-  L.table(
-    [
-      { header: 'Load case', width: 0.27 },
-      { header: 'n1', width: 0.09, align: 'right' },
-      { header: 'T1 or P (input)', width: 0.16, align: 'right' },
-      { header: 'KA', width: 0.07, align: 'right' },
-      { header: 'θoil', width: 0.11, align: 'right' },
-      { header: 'Lubrication', width: 0.12 },
-      { header: 'Time share', width: 0.1, align: 'right' },
-    ],
-    review.loadCases.map((c) => [
-      c.name,
-      u.fmt(c.pinionSpeed_rpm, 'speed'),
-      c.pinionTorque_Nm !== undefined ? `T1 = ${u.fmt(c.pinionTorque_Nm, 'torque')}` : `P = ${u.fmt(c.power_kW, 'power')}`,
-      formatNumber(c.applicationFactor, 3),
-      u.fmt(c.oilTemperature_C, 'temperature'),
-      c.lubrication === 'dip' ? 'dip' : 'spray',
-      `${formatNumber(c.timeShare * 100, 3)} %`,
-    ]),
-    { zebra: true, fontSize: 8 },
-  );
+}
 
+function drawOils(ctx: RecordContext): void {
+  const { layout: L, review, results, units: u } = ctx;
   L.heading('Oils', 2);
   if (review.oils.length === 0) L.para('No oils in scope.', { size: 9 });
   else
@@ -107,42 +121,6 @@ export function drawInputs(ctx: RecordContext): void {
 
   L.heading('Policy', 2);
   L.keyValues(policyRows(u, review), { pairs: 2, labelShare: 0.64, size: 7.5, valueAlign: 'right' });
-}
-
-function shift(input: number | undefined, used: number): string {
-  return `${input === undefined ? '(derived)' : formatNumber(input, 4)} → ${formatNumber(used, 4)}`;
-}
-
-function tip(u: Units, input: number | undefined, used: number): string {
-  return `${input === undefined ? '(derived)' : u.fmt(input, 'length', 5)} → ${u.fmt(used, 'length', 5)}`;
-}
-
-function materialName(m: GearPair['pinion']['material']): string {
-  return typeof m === 'string' ? MATERIAL_WORDS[m] : 'custom (see Materials)';
-}
-
-function materialRow(u: Units, member: 'pinion' | 'wheel', m: GearPair['pinion']['material']): string[] {
-  if (typeof m === 'string') {
-    const p = MATERIALS[m as MaterialPreset];
-    return [
-      `${member}: ${MATERIAL_WORDS[m]}`,
-      u.fmt(p.youngsModulus / 1e9, 'modulus'),
-      formatNumber(p.poissonRatio, 3),
-      u.fmt(p.thermalConductivity, 'conductivity', 3),
-      u.fmt(p.density, 'density'),
-      u.fmt(p.specificHeat, 'specificHeat', 3),
-      formatNumber(p.structuralFactorXW, 3),
-    ];
-  }
-  return [
-    `${member}: custom`,
-    u.fmt(m.youngsModulus_GPa, 'modulus'),
-    formatNumber(m.poissonRatio, 3),
-    u.fmt(m.thermalConductivity_WmK, 'conductivity', 3),
-    u.fmt(m.density_kgm3, 'density'),
-    u.fmt(m.specificHeat_JkgK, 'specificHeat', 3),
-    formatNumber(m.structuralFactorXW, 3),
-  ];
 }
 
 function pairRows(u: Units, gp: GearPair, results: RecordContext['results']): Array<[string, string]> {

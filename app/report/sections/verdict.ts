@@ -18,7 +18,7 @@ export function drawVerdict(ctx: RecordContext): void {
     L.y += 2;
     L.para(v.summary, { size: 9 });
 
-    for (const c of results.cases.filter((x) => x.oil === v.oil)) {
+    for (const c of governingCases(ctx, v.oil).filter((x) => x.oil === v.oil)) {
       if (!c.verdict) continue;
       L.ensure(50);
       const t = L.y + 3;
@@ -51,3 +51,10 @@ export function drawVerdict(ctx: RecordContext): void {
   L.y += 4;
   cautionBox(ctx, DEFER_TEXT);
 }
+
+/** The cases behind an oil's verdict: a pair's, or those of the planetary mesh that governs for the oil. */
+function governingCases(ctx: RecordContext, oil: string): RecordContext['results']['cases'] {
+  const mesh = ctx.results.planetary?.governingMesh.find((g) => g.oil === oil)?.mesh;
+  return ctx.results.meshes?.find((m) => m.mesh === mesh)?.cases ?? ctx.results.cases;
+}
+

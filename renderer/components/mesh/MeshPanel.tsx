@@ -1,5 +1,6 @@
 import { memo, useEffect, useId, useMemo, useState } from 'react';
-import type { Results } from '../../../app/review/results';
+import type { PlanetaryMesh, Results } from '../../../app/review/results';
+import { MESH_WORDS } from '../../../app/review/vocabulary';
 import type { Review } from '../../../app/review/schema';
 import type { EhlPointRequest, EhlPointSpec } from '../../../app/review/ehlPoint';
 import { FilmDetail } from '../film/FilmDetail';
@@ -17,7 +18,7 @@ interface Props {
   readonly units: UnitSystem;
 }
 
-/** Charts along the path of contact, A to E, for one load case × oil. */
+/** The points at which Film detail can solve the film. */
 const FILM_POINTS: ReadonlyArray<{ value: EhlPointSpec & string; label: string }> = [
   { value: 'lambda-min', label: 'least λ' },
   { value: 'A', label: 'A' },
@@ -27,52 +28,72 @@ const FILM_POINTS: ReadonlyArray<{ value: EhlPointSpec & string; label: string }
   { value: 'E', label: 'E' },
 ];
 
+/** Charts along the path of contact, A to E, for one load case × oil (and, on a planetary stage, one mesh). */
 function MeshPanelView({ results, review = null, limits, units }: Props) {
   const [picked, setPicked] = useState(0);
+  const [pickedMesh, setPickedMesh] = useState<PlanetaryMesh | null>(null);
   const [filmAt, setFilmAt] = useState<EhlPointSpec & string>('lambda-min');
   const [film, setFilm] = useState<EhlPointRequest | null>(null);
   const selectId = useId();
+  const meshSelectId = useId();
   const pointId = useId();
-  const cases = results?.cases ?? [];
+  const meshes = results?.meshes ?? null;
+  const mesh = meshes ? (meshes.find((m) => m.mesh === pickedMesh) ?? meshes.find((m) => m.mesh === results?.planetary?.shownMesh) ?? meshes[0]) : null;
+  const cases = mesh?.cases ?? results?.cases ?? [];
+  const gear = mesh?.gear ?? results?.gear;
   const index = picked < cases.length ? picked : 0;
   const c = cases[index];
-  const specs = useMemo(() => (c && results ? meshCharts(c, results.gear, limits, units) : []), [c, results, limits, units]);
+  const specs = useMemo(() => (c && gear ? meshCharts(c, gear, limits, units) : []), [c, gear, limits, units]);
   // The charts (children) have drawn their new data by now: the end of the edit-to-chart latency.
   useEffect(() => {
     if (specs.length) performance.mark('chart-updated');
   }, [specs]);
   if (!results || !c) return <Panel id="mesh" title="Mesh"><p className="note">No results yet.</p></Panel>;
-  const stem = `flankfilm-mesh-${index + 1}`;
+  const stem = `flankfilm-mesh-${mesh ? `${mesh.mesh}-` : ''}${index + 1}`;
   return (
     <Panel
       id="mesh"
       title="Mesh"
       actions={
-        <span className="field field--inline">
-          <label htmlFor={selectId}>Case</label>
-          <select id={selectId} value={index} onChange={(e) => setPicked(Number(e.target.value))} data-testid="mesh-case">
-            {cases.map((x, i) => (
-              <option key={i} value={i}>
-                {x.loadCase} — {x.oil ?? 'no oil'}
-              </option>
-            ))}
-          </select>
-          {review && c?.oil ? (
-            <>
-              <label htmlFor={pointId}>Film at</label>
-              <select id={pointId} value={filmAt} onChange={(e) => setFilmAt(e.target.value as EhlPointSpec & string)} data-testid="film-point">
-                {FILM_POINTS.map((p) => (
-                  <option key={p.value} value={p.value}>
-                    {p.label}
+        <>
+          {meshes && mesh ? (
+            <span className="field field--inline">
+              <label htmlFor={meshSelectId}>Mesh</label>
+              <select id={meshSelectId} value={mesh.mesh} onChange={(e) => setPickedMesh(e.target.value as PlanetaryMesh)} data-testid="mesh-mesh">
+                {meshes.map((m) => (
+                  <option key={m.mesh} value={m.mesh}>
+                    {MESH_WORDS[m.mesh]}
                   </option>
                 ))}
               </select>
-              <button type="button" onClick={() => setFilm({ caseName: c.loadCase, oilName: c.oil as string, at: filmAt })} data-testid="film-open">
-                Film detail…
-              </button>
-            </>
+            </span>
           ) : null}
-        </span>
+          <span className="field field--inline">
+            <label htmlFor={selectId}>Case</label>
+            <select id={selectId} value={index} onChange={(e) => setPicked(Number(e.target.value))} data-testid="mesh-case">
+              {cases.map((x, i) => (
+                <option key={i} value={i}>
+                  {x.loadCase} — {x.oil ?? 'no oil'}
+                </option>
+              ))}
+            </select>
+            {review && c?.oil && !meshes ? (
+              <>
+                <label htmlFor={pointId}>Film at</label>
+                <select id={pointId} value={filmAt} onChange={(e) => setFilmAt(e.target.value as EhlPointSpec & string)} data-testid="film-point">
+                  {FILM_POINTS.map((p) => (
+                    <option key={p.value} value={p.value}>
+                      {p.label}
+                    </option>
+                  ))}
+                </select>
+                <button type="button" onClick={() => setFilm({ caseName: c.loadCase, oilName: c.oil as string, at: filmAt })} data-testid="film-open">
+                  Film detail…
+                </button>
+              </>
+            ) : null}
+          </span>
+        </>
       }
     >
       <dl className="qlist qlist--row">

@@ -1,42 +1,44 @@
-import type { GearResult } from '../../../app/review/results';
+import type { Results } from '../../../app/review/results';
 import { COMPONENTS } from '../../../app/review/schema';
 import { COMPONENT_WORDS, fieldLabel } from '../../../app/review/inputLabels';
+import { inputProps } from '../fields/inputProps';
 import { useSheet } from '../../state/context';
+import { gearSetKind, gearSetRoot, type GearSetKind } from '../../state/gearSet';
 import { getIn } from '../../state/paths';
 import { CheckField } from '../fields/CheckField';
 import { NumberField } from '../fields/NumberField';
-import { inputProps } from '../fields/inputProps';
+import { SelectField } from '../fields/SelectField';
 import { TextField } from '../fields/TextField';
-import { QuantityRow } from '../Quantity';
+import { DerivedGeometry } from './DerivedGeometry';
 import { GearMember } from './GearMember';
 import { Panel } from './Panel';
+import { PlanetaryDerived, PlanetaryFields } from './PlanetaryFields';
 
-/** Geometry and materials of pinion and wheel, with the derived geometry beside them. */
-export function GearPairPanel({ gear, stale }: { readonly gear: GearResult | null; readonly stale: boolean }) {
+const KINDS: readonly (readonly [GearSetKind, string])[] = [
+  ['external', 'External pair'],
+  ['internal', 'Internal pair (pinion in a ring)'],
+  ['planetary', 'Planetary stage (sun, planets, ring)'],
+];
+
+/** The gear set, its kind chosen first: a pair (external or internal) or a planetary stage, with the derived geometry. */
+export function GearPairPanel({ results, stale }: { readonly results: Results | null; readonly stale: boolean }) {
   const { draft, dispatch, units } = useSheet();
-  const components = (getIn(draft, ['gearPair', 'components']) as string[] | undefined) ?? [];
-  const gp = ['gearPair'] as const;
+  const kind = gearSetKind(draft);
+  const root = gearSetRoot(draft);
+  const components = (getIn(draft, [root, 'components']) as string[] | undefined) ?? [];
+  const gp = [root] as const;
+  const gear = results?.gear ?? null;
   return (
-    <Panel id="gear-pair" title="Gear pair">
+    <Panel id="gear-pair" title="Gear set">
       <TextField path={['title']} {...inputProps('title')} wide />
-      <div className="grid-fields">
-        <NumberField path={[...gp, 'normalModule_mm']} {...inputProps('gearPair.normalModule_mm')} />
-        <NumberField path={[...gp, 'normalPressureAngle_deg']} {...inputProps('gearPair.normalPressureAngle_deg')} />
-        <NumberField path={[...gp, 'helixAngle_deg']} {...inputProps('gearPair.helixAngle_deg')} />
-        <NumberField path={[...gp, 'faceWidth_mm']} {...inputProps('gearPair.faceWidth_mm')} />
-        <NumberField path={[...gp, 'centerDistance_mm']} {...inputProps('gearPair.centerDistance_mm')} optional hint="Leave empty to take it from the profile shifts" />
-        <NumberField path={[...gp, 'pinionMeshes']} {...inputProps('gearPair.pinionMeshes')} />
-      </div>
-      <div className="members">
-        <GearMember member="pinion" title="Pinion" />
-        <GearMember member="wheel" title="Wheel" />
-      </div>
+      <SelectField path={['gearSet']} label="Kind of gear set" options={KINDS} value={kind} onValue={(k) => dispatch({ type: 'setGearSet', kind: k })} />
+      {kind === 'planetary' ? <PlanetaryFields /> : <PairFields internal={kind === 'internal'} />}
       <fieldset className="subgroup">
         <legend>ISO 6336-2 factors (inputs)</legend>
         <div className="grid-fields">
-          <NumberField path={[...gp, 'dynamicFactorKv']} {...inputProps('gearPair.dynamicFactorKv')} />
-          <NumberField path={[...gp, 'faceLoadFactorKHbeta']} {...inputProps('gearPair.faceLoadFactorKHbeta')} />
-          <NumberField path={[...gp, 'transverseLoadFactorKHalpha']} {...inputProps('gearPair.transverseLoadFactorKHalpha')} />
+          <NumberField path={[...gp, 'dynamicFactorKv']} {...inputProps(`${root}.dynamicFactorKv`)} />
+          <NumberField path={[...gp, 'faceLoadFactorKHbeta']} {...inputProps(`${root}.faceLoadFactorKHbeta`)} />
+          <NumberField path={[...gp, 'transverseLoadFactorKHalpha']} {...inputProps(`${root}.transverseLoadFactorKHalpha`)} />
         </div>
       </fieldset>
       <fieldset className="subgroup">
@@ -47,29 +49,29 @@ export function GearPairPanel({ gear, stale }: { readonly gear: GearResult | nul
           ))}
         </div>
       </fieldset>
-      {gear ? (
-        <div className="derived" aria-label="Derived geometry">
-          <h3>Derived geometry{stale ? <span className="note"> — of the last valid entry</span> : null}</h3>
-          <dl className="qlist">
-            <QuantityRow def="centerDistance" value={gear.centerDistance_mm} units={units} sig={5} />
-            <QuantityRow def="gearRatio" value={gear.gearRatio} units={units} sig={4} />
-            <QuantityRow def="workingPressureAngle" value={gear.workingPressureAngle_deg} units={units} sig={4} />
-            <QuantityRow def="transverseContactRatio" value={gear.transverseContactRatio} units={units} sig={3} />
-            <QuantityRow def="overlapRatio" value={gear.overlapRatio} units={units} sig={3} />
-            <QuantityRow def="totalContactRatio" value={gear.totalContactRatio} units={units} sig={3} />
-            <QuantityRow def="lineOfAction" value={gear.lineOfAction_mm} units={units} sig={4} />
-          </dl>
-          {gear.checks.length ? (
-            <ul className="checks-list">
-              {gear.checks.map((c) => (
-                <li key={c.code} className={`note note--${c.severity}`}>
-                  {c.message}
-                </li>
-              ))}
-            </ul>
-          ) : null}
-        </div>
-      ) : null}
+      {results?.planetary ? <PlanetaryDerived results={results} stale={stale} /> : null}
+      {gear && !results?.planetary ? <DerivedGeometry gear={gear} title="Derived geometry" stale={stale} units={units} /> : null}
     </Panel>
+  );
+}
+
+/** The inputs of a pair, external or internal (the wheel a ring). */
+function PairFields({ internal }: { readonly internal: boolean }) {
+  const gp = ['gearPair'] as const;
+  return (
+    <>
+      <div className="grid-fields">
+        <NumberField path={[...gp, 'normalModule_mm']} {...inputProps('gearPair.normalModule_mm')} />
+        <NumberField path={[...gp, 'normalPressureAngle_deg']} {...inputProps('gearPair.normalPressureAngle_deg')} />
+        <NumberField path={[...gp, 'helixAngle_deg']} {...inputProps('gearPair.helixAngle_deg')} />
+        <NumberField path={[...gp, 'faceWidth_mm']} {...inputProps('gearPair.faceWidth_mm')} />
+        <NumberField path={[...gp, 'centerDistance_mm']} {...inputProps('gearPair.centerDistance_mm')} optional hint="Leave empty to take it from the profile shifts" />
+        <NumberField path={[...gp, 'pinionMeshes']} {...inputProps('gearPair.pinionMeshes')} />
+      </div>
+      <div className="members">
+        <GearMember member="pinion" title="Pinion" />
+        <GearMember member="wheel" title={internal ? 'Ring (internal teeth)' : 'Wheel'} internal={internal} />
+      </div>
+    </>
   );
 }

@@ -3,6 +3,7 @@ import { getIn } from '../../state/paths';
 import { draftPower, draftTorque } from '../../state/reviewState';
 import { NumberField } from '../fields/NumberField';
 import { inputProps } from '../fields/inputProps';
+import { caseKeys } from '../../state/gearSet';
 import { LUBRICATION_WORDS } from '../../../app/review/inputLabels';
 import { SelectField } from '../fields/SelectField';
 import { TextField } from '../fields/TextField';
@@ -15,17 +16,18 @@ export function LoadCaseEditor({ index, canRemove }: { readonly index: number; r
   const { draft, dispatch } = useSheet();
   const p = ['loadCases', index] as const;
   const name = getIn(draft, [...p, 'name']);
-  const givesTorque = getIn(draft, [...p, 'pinionTorque_Nm']) !== undefined;
+  const k = caseKeys(draft);
+  const givesTorque = getIn(draft, [...p, k.torque]) !== undefined;
   const legend = typeof name === 'string' && name ? name : `Load case ${index + 1}`;
   return (
     <fieldset className="item" data-testid={`load-case-${index}`}>
       <legend>{legend}</legend>
       <div className="grid-fields">
         <TextField path={[...p, 'name']} {...inputProps('loadCases[].name')} wide />
-        <NumberField path={[...p, 'pinionSpeed_rpm']} {...inputProps('loadCases[].pinionSpeed_rpm')} />
+        <NumberField path={[...p, k.speed]} {...inputProps(`loadCases[].${k.speed}`)} />
         <NumberField
-          path={[...p, 'pinionTorque_Nm']}
-          {...inputProps('loadCases[].pinionTorque_Nm')}
+          path={[...p, k.torque]}
+          {...inputProps(`loadCases[].${k.torque}`)}
           note={givesTorque ? undefined : 'from the power'}
           value={draftTorque(draft, index)}
           derived={!givesTorque}

@@ -1,3 +1,4 @@
+import { MESH_WORDS } from '../../../app/review/vocabulary';
 import { useId, useMemo, useState } from 'react';
 import type { Results, VerdictCode } from '../../../app/review/results';
 import type { LoadCase, Review } from '../../../app/review/schema';
@@ -101,6 +102,7 @@ export function MapPanel({ review, edition, results, units }: Props) {
         {sweep && policy && maps.length ? (
           <>
             <ul className="map-findings" data-testid="map-findings">
+              {maps[0]?.mesh ? <li>The map sweeps the governing mesh of the stage, the {MESH_WORDS[maps[0].mesh]} mesh.</li> : null}
               {sentences.map((s) => (
                 <li key={s}>{s}</li>
               ))}

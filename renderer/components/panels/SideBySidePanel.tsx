@@ -1,5 +1,6 @@
 import { memo } from 'react';
 import type { CaseResult, LimitCheck, Results } from '../../../app/review/results';
+import { MESH_WORDS } from '../../../app/review/vocabulary';
 import type { UnitSystem } from '../../units/units';
 import { Quantity } from '../Quantity';
 import { VerdictBadge } from '../VerdictBadge';
@@ -19,11 +20,16 @@ function Mark({ check: k }: { readonly check: LimitCheck | null }) {
   );
 }
 
-/** Oils (rows) × load cases (columns): λmin, SB, SintS against their limits, the FZG stage needed and what the case needs. */
+/**
+ * Oils (rows) × load cases (columns): λmin, SB, SintS against their limits, the FZG stage needed and
+ * what the case needs. On a planetary stage each oil has a row per mesh, with a mesh column.
+ */
 function SideBySidePanelView({ results, units }: { readonly results: Results | null; readonly units: UnitSystem }) {
   if (!results) return <Panel id="side-by-side" title="Side by side"><p className="note">No results yet.</p></Panel>;
   const loadCases = [...new Set(results.cases.map((c) => c.loadCase))];
   const oils = [...new Set(results.cases.map((c) => c.oil))];
+  const meshes: ReadonlyArray<{ mesh: string | null; cases: readonly CaseResult[] }> = results.meshes ? results.meshes.map((m) => ({ mesh: MESH_WORDS[m.mesh], cases: m.cases })) : [{ mesh: null, cases: results.cases }];
+  const rows = oils.flatMap((oil) => meshes.map((m) => ({ oil, ...m })));
   return (
     <Panel id="side-by-side" title="Side by side">
       <div className="table-scroll" tabIndex={0} role="region" aria-label="Oils by load cases">
@@ -32,6 +38,7 @@ function SideBySidePanelView({ results, units }: { readonly results: Results | n
           <thead>
             <tr>
               <th scope="col">Oil</th>
+              {results.meshes ? <th scope="col">Mesh</th> : null}
               {loadCases.map((lc) => (
                 <th key={lc} scope="col">
                   {lc}
@@ -40,11 +47,12 @@ function SideBySidePanelView({ results, units }: { readonly results: Results | n
             </tr>
           </thead>
           <tbody>
-            {oils.map((oil) => (
-              <tr key={oil ?? '-'}>
+            {rows.map(({ oil, mesh, cases }) => (
+              <tr key={`${oil ?? '-'}|${mesh ?? ''}`}>
                 <th scope="row">{oil ?? '(no oil)'}</th>
+                {mesh ? <td>{mesh}</td> : null}
                 {loadCases.map((lc) => {
-                  const c = results.cases.find((x) => x.loadCase === lc && x.oil === oil);
+                  const c = cases.find((x) => x.loadCase === lc && x.oil === oil);
                   if (!c) return <td key={lc}>—</td>;
                   return (
                     <td key={lc} data-testid="sbs-cell">

@@ -25,6 +25,11 @@ function VerdictPanelView({ results, units }: { readonly results: Results | null
     const k = c.oil ?? '(no oil)';
     byOil.set(k, [...(byOil.get(k) ?? []), c]);
   }
+  // A planetary stage: each oil's cases are those of the mesh that governs for it.
+  for (const g of results.planetary?.governingMesh ?? []) {
+    const cases = results.meshes?.find((m) => m.mesh === g.mesh)?.cases.filter((c) => c.oil === g.oil);
+    if (cases?.length) byOil.set(g.oil, cases);
+  }
   const caseCount = new Set(results.cases.map((c) => c.loadCase)).size;
   return (
     <Panel id="verdict" title="Verdict">

@@ -14,6 +14,7 @@ import { gearPairInput, materialOf } from '../../../app/review/toEngine';
 import { engineDutyOf, enginePolicyOf } from '../../../app/review/engineInputs';
 import { oilModelsOf } from '../../../app/review/oils';
 import { micrometres } from '../../../app/engine/units';
+import { asPairReview, type PairReview } from '../../../app/review/schema';
 
 /** The log-space film loop of mesh/film.ts against the one-formula reference modules of film/. */
 describe('film kernel = the reference film functions', () => {
@@ -23,7 +24,7 @@ describe('film kernel = the reference film functions', () => {
       raw.policy.filmFormula = formula;
       const p = parseReviewValue(raw);
       if (!p.ok) throw new Error('demo invalid');
-      const r = p.review;
+      const r = asPairReview(p.review) as PairReview;
       const oil = oilModelsOf(r.oils)[0] as ReturnType<typeof oilModelsOf>[number];
       const ra1 = micrometres(r.gearPair.pinion.roughnessRa_um);
       const ra2 = micrometres(r.gearPair.wheel.roughnessRa_um);

@@ -10,11 +10,12 @@ import { engineDutyOf, enginePolicyOf } from '../../../app/review/engineInputs';
 import { oilModelsOf } from '../../../app/review/oils';
 import { decideVerdict } from '../../../app/engine/verdict/decide';
 import { run } from '../../../app/review/run';
+import { asPairReview, type PairReview } from '../../../app/review/schema';
 
 const raw = JSON.parse(readFileSync('assets/demo/harrow-creek-crusher-hs-pair.flankfilm.json', 'utf8'));
 const p = parseReviewValue(raw);
 if (!p.ok) throw new Error('demo invalid');
-const r = p.review;
+const r = asPairReview(p.review) as PairReview;
 const oils = oilModelsOf(r.oils);
 const input = (li: number, oi: number) => ({
   geometry: gearPairGeometry(gearPairInput(r.gearPair)),

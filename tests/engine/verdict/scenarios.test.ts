@@ -3,7 +3,7 @@ import { decideVerdict } from '../../../app/engine/verdict/decide';
 import type { VerdictFacts, VerdictPolicy } from '../../../app/engine/verdict/types';
 
 /** Policy defaults: AW floor FZG 10 (DIN 51524-2 HLP), EP floor FZG 12 (DIN 51517-3 CLP), SB,min 1.5, SintS,min 1.8. */
-const policy: VerdictPolicy = { lambdaTarget: 1, scuffingSafetyMin: 1.5, integralSafetyMin: 1.8, antiWearOilFzgStage: 10, epOilFzgStage: 12, shockApplicationFactor: 1.75, scuffingMethods: 'both' };
+const policy: VerdictPolicy = { lambdaTarget: 1, scuffingSafetyMin: 1.5, integralSafetyMin: 1.8, antiWearOilFzgStage: 10, epOilFzgStage: 12, shockApplicationFactor: 1.75, scuffingMethods: 'both', micropittingSafetyMin: 1 };
 
 // Synthetic facts for the rule logic, not a gear: the expected codes follow from the published
 // floors above (and common practice where a rule says so), which is what these tests check.
@@ -32,6 +32,7 @@ const base: VerdictFacts = {
   requiredStage: 7,
   requiredStageIntegral: 6,
   scuffingProbability: 0.001,
+  micropitting: null,
   components: [],
   otherOils: [],
   role: 'proposed',

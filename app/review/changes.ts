@@ -1,4 +1,4 @@
-import { micropittingStageNumber as mpNumber, micropittingStageWords } from './micropittingResult';
+import { micropittingNeedWords, micropittingStageNumber as mpNumber } from './micropittingResult';
 import { casesOfOil, SHORTFALL_WORDS } from './overall';
 import type { CaseResult, ChangeFinding, ChangeFindingCode, ChangeSide, MicropittingStageNeeded, Shortfall } from './results';
 import type { Review } from './schema';
@@ -53,7 +53,7 @@ export function changeFindings(review: Review, cases: readonly CaseResult[]): Ch
           ? [
               ...(filmShort.length > 0 ? [`The film stays below the λ target (${review.policy.lambdaTarget}) in ${quoted(filmShort)}: a heavier grade, a cooler sump or smoother flanks would raise it; EP chemistry does not.`] : []),
               ...(mpUnknown.length > 0
-                ? [`The proposed oil's micropitting failure stage (FVA 54, C-GF gear) is not given: obtain it before the change; the duty needs stage ${micropittingStageWords(mpNeeded > 10 ? '>10' : mpNeeded)} in ${quoted(mpUnknown.map((x) => x.c.loadCase))}. Some EP additive systems lower micropitting resistance.`]
+                ? [`The proposed oil's micropitting failure stage (FVA 54, C-GF gear) is not given: obtain it before the change; the duty needs stage ${micropittingNeedWords(mpNeeded > 10 ? '>10' : mpNeeded)} in ${quoted(mpUnknown.map((x) => x.c.loadCase))}. Some EP additive systems lower micropitting resistance.`]
                 : []),
             ]
           : [];

@@ -70,7 +70,9 @@ export function resultsSummary(results: Results): Record<string, unknown> {
       scuffingSafety: roundOrNull(c.scuffingSafety),
       integralSafety: roundOrNull(c.integralSafety),
       requiredFzgStage: c.requiredFzgStage,
-      verdict: c.verdict ? { code: c.verdict.code, oilFit: c.verdict.oilFit, rules: c.verdict.reasons.map((r) => r.rule) } : null,
+      micropittingSafety: roundOrNull(c.micropitting?.safety ?? null),
+      requiredMicropittingStage: c.micropitting?.requiredFailureStage ?? null,
+      verdict: c.verdict ? { code: c.verdict.code, oilFit: c.verdict.oilFit, micropitting: c.verdict.micropitting, rules: c.verdict.reasons.map((r) => r.rule) } : null,
     })),
     verdicts: results.verdicts.map((v) => ({
       oil: v.oil,

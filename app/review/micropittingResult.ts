@@ -7,6 +7,8 @@ import type { Policy } from './schema';
 
 /** A micropitting stage in words. */
 export const micropittingStageWords = (s: MicropittingStageNeeded): string => (s === '>10' ? 'above 10' : String(s));
+/** A stage the duty needs, in words: stage 5 is the test's first stage, so a need of 5 means 5 or below. */
+export const micropittingNeedWords = (s: MicropittingStageNeeded): string => (s === 5 ? '5 or below (the test\'s first stage)' : micropittingStageWords(s));
 /** A micropitting stage as a number for comparisons: '>10' counts as 11. */
 export const micropittingStageNumber = (s: MicropittingStageNeeded | null): number => (s === null ? 0 : s === '>10' ? 11 : s);
 
@@ -36,7 +38,7 @@ export function micropittingResult(a: CaseAnalysis, p: Policy, finding: Micropit
   const mp = a.micropitting;
   if (!mp) return null;
   const f2 = (x: number) => x.toFixed(2);
-  const need = `the duty needs failure stage ${micropittingStageWords(mp.requiredStage)} for Sλ ≥ ${p.micropittingSafetyMin}`;
+  const need = `the duty needs failure stage ${micropittingNeedWords(mp.requiredStage)} for Sλ ≥ ${p.micropittingSafetyMin}`;
   const note =
     mp.safety === null || mp.lambdaGFP === null
       ? `λGF,min = ${f2(mp.lambdaGFMin)}; the oil's micropitting failure stage is not given, so Sλ is unknown; ${need}.${mp.lambdaGFMin < 1 ? ' Screen: λGF,min < 1, micropitting is possible (common practice).' : ''}`

@@ -1,7 +1,7 @@
 import { METHOD_WORDS } from '../engine/verdict/words';
 import { governingCase } from './margin';
 import { micropittingOverCases, mostDemandingChemistry, stageNumber, stageOf, stageWords } from './overall';
-import { micropittingStageWords } from './micropittingResult';
+import { micropittingNeedWords } from './micropittingResult';
 import type { CaseResult, ChemistryNeed, DutyNeed, GradeFinderResult } from './results';
 import type { Review } from './schema';
 
@@ -33,7 +33,7 @@ export function dutyNeed(review: Review, cases: readonly CaseResult[], grades: r
   const vgs = grades.map((g) => g.recommendedVG);
   const isoVG = vgs.length > 0 && vgs.every((v): v is number => v !== null) ? Math.max(...vgs) : null;
   const mp = micropittingOverCases(withVerdict).needed;
-  const mpPart = mp !== null ? `; against micropitting, an oil of FVA 54 failure stage ${micropittingStageWords(mp)} for Sλ ≥ ${review.policy.micropittingSafetyMin} (a matter of the additive system, not of EP)` : '';
+  const mpPart = mp !== null ? `; against micropitting, an oil of FVA 54 failure stage ${micropittingNeedWords(mp)} for Sλ ≥ ${review.policy.micropittingSafetyMin} (a matter of the additive system, not of EP)` : '';
   const gv = gov.c.verdict as NonNullable<CaseResult['verdict']>;
   const stagePart = [flash !== null ? `FZG stage ${stageWords(flash)} by the flash temperature method` : null, integral !== null ? `${stageWords(integral)} by the integral temperature method` : null]
     .filter((x): x is string => x !== null)

@@ -1,5 +1,5 @@
 import { CHEMISTRY_WORDS } from '../engine/verdict/words';
-import { micropittingStageNumber, micropittingStageWords } from './micropittingResult';
+import { micropittingNeedWords, micropittingStageNumber, micropittingStageWords } from './micropittingResult';
 import type { CaseResult, ChemistryNeed, FzgStageNeeded, LimitCheck, MicropittingFinding, MicropittingStageNeeded, OverallVerdict, Shortfall } from './results';
 import type { Review } from './schema';
 import { VERDICT_WORDS } from './vocabulary';
@@ -84,9 +84,9 @@ export function overallVerdicts(review: Review, cases: readonly CaseResult[]): O
     const mpStage = oil.micropittingFailureStage ?? null;
     const mpWords =
       mp.finding === 'unknown'
-        ? `; micropitting failure stage not given${mp.needed !== null ? ` (${micropittingStageWords(mp.needed)} needed)` : ''}`
+        ? `; micropitting failure stage not given${mp.needed !== null ? ` (${micropittingNeedWords(mp.needed)} needed)` : ''}`
         : mp.finding === 'meets' && mpStage !== null && mp.needed !== null
-          ? `, micropitting failure stage ${micropittingStageWords(mpStage)} against ${micropittingStageWords(mp.needed)} needed`
+          ? `, micropitting failure stage ${micropittingStageWords(mpStage)} against ${micropittingNeedWords(mp.needed)} needed`
           : '';
     out.push({
       oil: oil.name,

@@ -147,6 +147,7 @@ export const oilStageRule: Rule = (f, p) => {
 };
 
 const mpStageWords = (s: number | '>10') => (s === '>10' ? 'above 10 (beyond the test\'s scale)' : String(s));
+const mpNeedWords = (s: number | '>10') => (s === 5 ? '5 or below (the test\'s first stage)' : mpStageWords(s));
 
 /** The micropitting finding of ISO/TS 6336-22: Sλ against Sλ,min, or unknown without the oil's failure stage. */
 export function micropittingFinding(f: VerdictFacts, p: VerdictPolicy): MicropittingFinding {
@@ -166,7 +167,7 @@ export const micropittingRule: Rule = (f, p) => {
   const mp = f.micropitting;
   if (mp === null) return null;
   const finding = micropittingFinding(f, p);
-  const need = `the duty needs a micropitting failure stage of ${mpStageWords(mp.requiredStage)} (FVA 54, C-GF gear) for Sλ ≥ ${p.micropittingSafetyMin}`;
+  const need = `the duty needs a micropitting failure stage of ${mpNeedWords(mp.requiredStage)} (FVA 54, C-GF gear) for Sλ ≥ ${p.micropittingSafetyMin}`;
   const chemistry = 'An oil\'s micropitting resistance comes from its additive system, not its grade, and some EP additive systems lower it: an EP oil must show its micropitting class too; EP chemistry is no answer to micropitting.';
   const figures = mp.lambdaGFP === null || mp.safety === null ? '' : `Sλ = λGF,min/λGFP = ${n2(mp.lambdaGFMin)}/${n2(mp.lambdaGFP)} = ${mp.safetyAtLeast ? 'at least ' : ''}${n2(mp.safety)}`;
   const text =

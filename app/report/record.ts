@@ -25,6 +25,7 @@ import { drawCaseResults } from './sections/caseResults';
 import { drawComparison } from './sections/comparison';
 import { drawVerdict } from './sections/verdict';
 import { drawOperatingMaps } from './sections/operatingMap';
+import { drawMicropitting } from './sections/micropitting';
 import type { OperatingMapResult } from '../review/operatingMaps';
 import { drawMethods, drawSignoff, drawWarnings } from './sections/backMatter';
 
@@ -127,6 +128,7 @@ export async function renderRecord(review: Review, results: Results, options: Re
   drawCover(ctx);
   drawInputs(ctx);
   drawCaseResults(ctx);
+  drawMicropitting(ctx);
   drawComparison(ctx);
   if (options.maps) drawOperatingMaps(ctx, options.maps);
   drawVerdict(ctx);

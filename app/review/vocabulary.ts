@@ -60,3 +60,10 @@ export const REGIME_COLOURS: Readonly<Record<Regime, string>> = {
   mixed: OKABE_ITO.orange,
   boundary: OKABE_ITO.vermillion,
 };
+
+/** The micropitting finding as a short label (ISO/TS 6336-22). */
+export const MICROPITTING_LABELS: Readonly<Record<'meets' | 'short' | 'unknown', string>> = {
+  meets: 'meets',
+  short: 'short: a higher micropitting class is needed',
+  unknown: 'unknown: micropitting stage not given',
+};

@@ -26,6 +26,7 @@ export function summaryText(r: Results, state?: { status: ReviewStatus; review: 
     lines.push(`  v ${f(c.pitchLineVelocity_mps)} m/s; σH ${f(c.nominalContactStress_MPa, 0)} MPa (ISO 6336-2); pH,max ${f(c.maxHertzStress_MPa, 0)} MPa; pC (whole load) ${f(c.pitchHertzStress_MPa, 0)} MPa`);
     if (c.oil) {
       lines.push(`  λmin ${f(c.lambdaMin)} (${c.regime}); θB,max ${f(c.maxContactTemperature_C, 0)} °C vs θS ${f(c.scuffingTemperature_C, 0)} °C; SB ${f(c.scuffingSafety)}; SintS ${f(c.integralSafety)}; FZG stage needed ${stage(c.requiredFzgStage)}`);
+      if (c.micropitting) lines.push(`  Micropitting (ISO/TS 6336-22): ${c.micropitting.note}`);
       if (c.verdict) lines.push(`  → ${VERDICT_WORDS[c.verdict.code]}; oil ${c.verdict.oilFit}`);
     }
   }

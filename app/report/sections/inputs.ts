@@ -45,7 +45,7 @@ export function drawInputs(ctx: RecordContext): void {
       { header: 'k', width: 0.16, align: 'right' },
       { header: 'ρ', width: 0.13, align: 'right' },
       { header: 'c', width: 0.19, align: 'right' },
-      { header: 'XW', width: 0.08, align: 'right' },
+      { header: 'XW / WW', width: 0.08, align: 'right' },
     ],
     (['pinion', 'wheel'] as const).map((m) => materialRow(u, m, gp[m].material)),
     { zebra: true, fontSize: 8 },
@@ -85,7 +85,7 @@ export function drawInputs(ctx: RecordContext): void {
         { header: 'VI', width: 0.11, align: 'right' },
         { header: 'ρ15', width: 0.1, align: 'right' },
         { header: 'Base, chemistry', width: 0.13 },
-        { header: 'FZG stage', width: 0.07, align: 'right' },
+        { header: 'FZG / micro-pitting stage', width: 0.07, align: 'right' },
         { header: 'α', width: 0.12, align: 'right' },
       ],
       review.oils.map((o, i) => {
@@ -97,7 +97,7 @@ export function drawInputs(ctx: RecordContext): void {
           s ? `${formatNumber(s.viscosityIndex, 3)} (${s.viscosityIndexSource})` : formatNumber(o.viscosityIndex ?? null),
           u.fmt(o.density15_kgm3, 'density'),
           `${o.baseOil}, ${CHEMISTRY_WORDS[o.chemistry]}${s?.isoVG ? `, ISO VG ${s.isoVG}` : ''}`,
-          String(o.fzgFailureStage),
+          `${String(o.fzgFailureStage)} / ${o.micropittingFailureStage === undefined ? 'not given' : String(o.micropittingFailureStage)}`,
           o.pressureViscosity_1perGPa !== undefined ? u.fmt(o.pressureViscosity_1perGPa, 'pressureViscosity') : 'from ISO/TR 15144-1',
         ];
       }),
@@ -130,7 +130,7 @@ function materialRow(u: Units, member: 'pinion' | 'wheel', m: GearPair['pinion']
       u.fmt(p.thermalConductivity, 'conductivity', 3),
       u.fmt(p.density, 'density'),
       u.fmt(p.specificHeat, 'specificHeat', 3),
-      formatNumber(p.structuralFactorXW, 3),
+      `${formatNumber(p.structuralFactorXW, 3)} / ${formatNumber(p.micropittingFactorWW ?? 1, 3)}`,
     ];
   }
   return [
@@ -140,7 +140,7 @@ function materialRow(u: Units, member: 'pinion' | 'wheel', m: GearPair['pinion']
     u.fmt(m.thermalConductivity_WmK, 'conductivity', 3),
     u.fmt(m.density_kgm3, 'density'),
     u.fmt(m.specificHeat_JkgK, 'specificHeat', 3),
-    formatNumber(m.structuralFactorXW, 3),
+    `${formatNumber(m.structuralFactorXW, 3)} / ${formatNumber(m.micropittingFactorWW ?? 1, 3)}`,
   ];
 }
 
@@ -171,6 +171,7 @@ function policyRows(u: Units, review: Review): Array<[string, string]> {
     ['λ target', formatNumber(p.lambdaTarget, 3)],
     ['Scuffing safety SB,min', formatNumber(p.scuffingSafetyMin, 3)],
     ['Integral safety SintS,min', formatNumber(p.integralSafetyMin, 3)],
+    ['Micropitting safety Sλ,min', formatNumber(p.micropittingSafetyMin, 3)],
     ['FZG floor, anti-wear oils', `stage ${p.antiWearOilFzgStage}`],
     ['FZG floor, EP oils', `stage ${p.epOilFzgStage}`],
     ['Temperature range', `${u.fmt(p.temperatureRange_C[0], 'temperature')} to ${u.fmt(p.temperatureRange_C[1], 'temperature')}`],

@@ -1,5 +1,6 @@
 import { memo, useEffect, useId, useMemo, useState } from 'react';
-import type { Results } from '../../../app/review/results';
+import type { CaseResult, Results } from '../../../app/review/results';
+import { MICROPITTING_LABELS } from '../../../app/review/vocabulary';
 import type { UnitSystem } from '../../units/units';
 import { Panel } from '../panels/Panel';
 import { QuantityRow } from '../Quantity';
@@ -52,6 +53,8 @@ function MeshPanelView({ results, limits, units }: Props) {
         <QuantityRow def="maxFlashTemperature" value={c.maxFlashTemperature_K} units={units} sig={3} />
         <QuantityRow def="maxContactTemperature" value={c.maxContactTemperature_C} units={units} sig={3} />
         <QuantityRow def="scuffingTemperature" value={c.scuffingTemperature_C} units={units} sig={3} />
+        <QuantityRow def="micropittingSafety" value={c.micropitting?.safety ?? null} units={units} sig={3} testId="mesh-micropitting-safety" />
+        <QuantityRow def="micropittingFinding" value={micropittingWords(c)} units={units} testId="mesh-micropitting-finding" />
       </dl>
       <div className="mesh-grid">
         {specs.map((s) => (
@@ -60,6 +63,14 @@ function MeshPanelView({ results, limits, units }: Props) {
       </div>
     </Panel>
   );
+}
+
+/** Pass or fail against Sλ,min, in words (never colour alone). */
+export function micropittingWords(c: CaseResult): string | null {
+  const m = c.micropitting;
+  if (!m) return null;
+  const limit = m.safety === null ? '' : ` (Sλ ${m.safety >= m.safetyMin ? '≥' : '<'} ${m.safetyMin})`;
+  return `${MICROPITTING_LABELS[m.finding]}${limit}`;
 }
 
 /** Re-renders only when its results or units change, not on every keystroke in the inputs. */

@@ -41,6 +41,7 @@ export function GearMember({ member, title }: { readonly member: 'pinion' | 'whe
           <NumberField path={[...p, 'material', 'density_kgm3']} label="Density ρ" kind="density" />
           <NumberField path={[...p, 'material', 'specificHeat_JkgK']} label="Specific heat c" unit="J/(kg·K)" />
           <NumberField path={[...p, 'material', 'structuralFactorXW']} label="Structural factor XW" />
+          <NumberField path={[...p, 'material', 'micropittingFactorWW']} label="Micropitting material factor WW" optional hint="Empty: 1, case-carburized steel; through-hardened 0.5, nitrided 1.5 (ISO/TS 6336-22, recalled)" />
         </div>
       ) : null}
     </fieldset>

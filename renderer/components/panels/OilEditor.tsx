@@ -23,6 +23,8 @@ const CHEMISTRY_WORDS: Readonly<Record<(typeof CHEMISTRIES)[number], string>> = 
   'extreme-pressure': 'EP (extreme pressure)',
 };
 const STAGES: readonly (readonly [FzgStage, string])[] = [...FZG_STAGES.map((s) => [s, String(s)] as const), ['>12', 'above 12'] as const];
+/** FVA 54 micropitting stages on the C-GF gear, and "not given" (the field left out). */
+const MICROPITTING_STAGES: readonly (readonly [number | string, string])[] = [['', 'not given'], ...[5, 6, 7, 8, 9, 10].map((s) => [s, String(s)] as const), ['>10', 'above 10']];
 
 /** One candidate oil. */
 export function OilEditor({ index, summary }: { readonly index: number; readonly summary: OilSummary | null }) {
@@ -51,6 +53,14 @@ export function OilEditor({ index, summary }: { readonly index: number; readonly
         <SelectField path={[...p, 'baseOil']} label="Base oil" options={BASE_OILS.map((b) => [b, BASE_WORDS[b]] as const)} />
         <SelectField path={[...p, 'chemistry']} label="Additive chemistry" options={CHEMISTRIES.map((c) => [c, CHEMISTRY_WORDS[c]] as const)} />
         <SelectField path={[...p, 'fzgFailureStage']} label="FZG A/8.3/90 failure stage" options={STAGES} />
+        <SelectField
+          path={[...p, 'micropittingFailureStage']}
+          label="Micropitting failure stage (FVA 54, C-GF)"
+          hint="Data sheets' micropitting classes: low ≤ 7, medium 8–9, high ≥ 10 (common practice)"
+          options={MICROPITTING_STAGES}
+          value={(getIn(draft, [...p, 'micropittingFailureStage']) as number | string | undefined) ?? ''}
+          onValue={(v) => dispatch({ type: 'set', path: [...p, 'micropittingFailureStage'], value: v === '' ? undefined : v })}
+        />
         <NumberField path={[...p, 'pressureViscosity_1perGPa']} label="Pressure–viscosity α" unit="1/GPa" optional hint="Empty: estimated from the base oil" />
       </div>
       {summary ? (

@@ -34,6 +34,7 @@ export function PolicyPanel() {
         <NumberField path={[...p, 'temperatureRange_C', 0]} label="Temperature range, low" kind="temperature" />
         <NumberField path={[...p, 'temperatureRange_C', 1]} label="Temperature range, high" kind="temperature" />
         <NumberField path={[...p, 'shockApplicationFactor']} label="Shock duty from KA" />
+        <NumberField path={[...p, 'micropittingSafetyMin']} label="Sλ,min (micropitting)" hint="ISO/TS 6336-22; default 1 (recalled, weak)" />
       </div>
       <fieldset className="subgroup">
         <legend>Film and friction</legend>

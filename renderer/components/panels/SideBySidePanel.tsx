@@ -3,10 +3,11 @@ import type { Results } from '../../../app/review/results';
 import type { UnitSystem } from '../../units/units';
 import { Quantity } from '../Quantity';
 import { VerdictBadge } from '../VerdictBadge';
+import { micropittingWords } from '../mesh/MeshPanel';
 import { GradeFinder } from './GradeFinder';
 import { Panel } from './Panel';
 
-/** Oils (rows) × load cases (columns): λmin, SB, SintS, FZG stage needed and the verdict. */
+/** Oils (rows) × load cases (columns): λmin, SB, SintS, FZG stage needed, micropitting Sλ and the verdict. */
 function SideBySidePanelView({ results, units }: { readonly results: Results | null; readonly units: UnitSystem }) {
   if (!results) return <Panel id="side-by-side" title="Side by side"><p className="note">No results yet.</p></Panel>;
   const loadCases = [...new Set(results.cases.map((c) => c.loadCase))];
@@ -46,6 +47,10 @@ function SideBySidePanelView({ results, units }: { readonly results: Results | n
                         <dd><Quantity def="requiredFzgStage" value={c.requiredFzgStage === null ? null : String(c.requiredFzgStage)} units={units} testId="sbs-fzg" /></dd>
                         <dt>FZG needed, integral</dt>
                         <dd><Quantity def="requiredFzgStageIntegral" value={c.requiredFzgStageIntegral === null ? null : String(c.requiredFzgStageIntegral)} units={units} testId="sbs-fzg-int" /></dd>
+                        <dt>Sλ micropitting</dt>
+                        <dd><Quantity def="micropittingSafety" value={c.micropitting?.safety ?? null} units={units} sig={3} testId="sbs-micropitting" /> <Quantity def="micropittingFinding" value={micropittingWords(c)} units={units} testId="sbs-micropitting-finding" /></dd>
+                        <dt>Micropitting stage needed</dt>
+                        <dd><Quantity def="requiredMicropittingStage" value={c.micropitting ? (c.micropitting.requiredFailureStage === '>10' ? 'above 10' : String(c.micropitting.requiredFailureStage)) : null} units={units} testId="sbs-micropitting-stage" /></dd>
                       </dl>
                       {c.verdict ? <VerdictBadge code={c.verdict.code} compact /> : null}
                     </td>

@@ -50,6 +50,7 @@ const testMechanics = new Map<string, MeshMechanics>();
  * λGF,min of the C-GF test gear with the case's oil at a micropitting load stage: the test run through
  * the same chain as the duty (mechanics, friction and Blok flash temperature, bulk temperature θM, oil
  * at θM, ISO/TR 15144-1 local film, the least λGF in A…B and D…E), so the method reproduces its test.
+ * The policy travels with it: a μ the policy gives applies to the test gear too (the same chain).
  */
 export function testGearLambdaGF(input: CaseInput, stage: MicropittingFailureStage, sink: WarningSink): number {
   const steel = MATERIALS['steel-carburized'];

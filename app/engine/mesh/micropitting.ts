@@ -53,6 +53,26 @@ const testMechanics = new Map<string, MeshMechanics>();
  * The policy travels with it: a μ the policy gives applies to the test gear too (the same chain).
  */
 export function testGearLambdaGF(input: CaseInput, stage: MicropittingFailureStage, sink: WarningSink): number {
+  // The test depends on the oil and the policy's μ and path points only, not on the case: kept per oil model.
+  const oil = input.oil as NonNullable<CaseInput['oil']>;
+  const key = `${String(stage)}|${input.policy.pathPoints}|${String(input.policy.frictionCoefficient)}`;
+  let perOil = testResults.get(oil.model);
+  if (!perOil) testResults.set(oil.model, (perOil = new Map()));
+  const known = perOil.get(key);
+  if (known) {
+    for (const w of known.warnings) sink.add(w);
+    return known.value;
+  }
+  const own = new WarningSink();
+  const value = computeTestGearLambdaGF(input, stage, own);
+  for (const w of own.items) sink.add(w);
+  perOil.set(key, { value, warnings: own.items });
+  return value;
+}
+
+const testResults = new WeakMap<object, Map<string, { value: number; warnings: readonly EngineWarning[] }>>();
+
+function computeTestGearLambdaGF(input: CaseInput, stage: MicropittingFailureStage, sink: WarningSink): number {
   const steel = MATERIALS['steel-carburized'];
   const geometry = testGeometry();
   const torque = cGfPinionTorque(stage);

@@ -35,6 +35,7 @@ describe('record: micropitting section', () => {
     for (const h of ['λGF,min', 'λGFT', 'λGFP', 'Stage', 'Finding']) expect(text).toContain(h);
     expect(text).toMatch(/some EP additive\s+systems lower micropitting\s+resistance/);
     expect(text).toMatch(/not given/); // the in-service oil has no stage
+    expect(text).toMatch(/Test gear C-GF/); // the geometry used, with its source
   });
   it('draws the λGF chart per case with the λGFP line of the oil that has a stage', () => {
     expect(text).toMatch(/λGF along the path/);

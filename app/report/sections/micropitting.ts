@@ -22,6 +22,7 @@ export function drawMicropitting(ctx: RecordContext): void {
     `Sλ = λGF,min / λGFP with λGFP = 1.4 · WW · λGFT. λGF,min is the least λGF = hY/Ra,avg in the area at risk (A to B and D to E); λGFT is λGF,min of the C-GF test gear with the same oil at its FVA 54 failure stage (90 °C, 8.3 m/s), computed by the same chain. Minimum Sλ,min = ${formatNumber(review.policy.micropittingSafetyMin, 3)} (policy). Micropitting is a finding of its own: it is no reason for EP chemistry, and some EP additive systems lower micropitting resistance, so an EP oil must show its micropitting class too.`,
     { size: 8.5 },
   );
+  L.para('Test gear C-GF: the FZG type C geometry of ISO 14635-1 (z 16/24, mn 4.5 mm, a 91.5 mm, b 14 mm, x 0.1817 / 0.1715, da 82.46 / 118.36 mm; Höhn et al. 2008, Table 1), ground to Ra 0.5 µm, case-carburized, dip-lubricated, at the ISO 14635-1 load-stage torques (stage 5: 94.1 N·m … stage 10: 372.6 N·m) [memory].', { size: 7.5, color: GREY });
   const rows: Cell[][] = withMp.map((c) => {
     const m = c.micropitting;
     return [

@@ -1,5 +1,5 @@
 import type { CaseResult, ChangeSide, GearResult, LimitCheck, PlanetaryResult, Results, Shortfall } from '../review/results';
-import { DECISION_WORDS, HELD_WORDS, MESH_WORDS, OIL_FIT_WORDS, REGIME_WORDS, SHORTFALL_SHORT, VERDICT_WORDS } from '../review/vocabulary';
+import { DECISION_WORDS, SHORTFALL_ORDER, HELD_WORDS, MESH_WORDS, OIL_FIT_WORDS, REGIME_WORDS, SHORTFALL_SHORT, VERDICT_WORDS } from '../review/vocabulary';
 import type { ReviewStatus } from '../review/results';
 import type { Review } from '../review/schema';
 import { STATUS_WORDS } from '../review/status';
@@ -8,8 +8,7 @@ const f = (x: number | null | undefined, d = 2) => (x === null || x === undefine
 const stage = (s: CaseResult['requiredFzgStage'] | number) => (s === null ? '—' : s === '>12' || s > 12 ? 'above 12' : String(s));
 const pct = (x: number | null) => (x === null ? '—' : x < 1e-4 ? '< 0.01 %' : `${(100 * x).toFixed(x < 0.01 ? 2 : 1)} %`);
 
-const ORDER: readonly Shortfall[] = ['chemistry', 'fzg-stage', 'film'];
-const shortfallList = (xs: readonly Shortfall[]) => ORDER.filter((s) => xs.includes(s)).map((s) => SHORTFALL_SHORT[s]).join(', ');
+const shortfallList = (xs: readonly Shortfall[]) => SHORTFALL_ORDER.filter((s) => xs.includes(s)).map((s) => SHORTFALL_SHORT[s]).join(', ');
 
 /** A figure against its limit, with the word that says pass or fail (never colour alone). */
 export function checkText(k: LimitCheck): string {
@@ -83,6 +82,7 @@ function caseLines(cases: readonly CaseResult[], indent: string): string[] {
     lines.push(`${indent}  v ${f(c.pitchLineVelocity_mps)} m/s; σH ${f(c.nominalContactStress_MPa, 0)} MPa (${c.nominalContactStressEdition}); pH,max ${f(c.maxHertzStress_MPa, 0)} MPa; pC (whole load) ${f(c.pitchHertzStress_MPa, 0)} MPa`);
     if (c.oil) {
       lines.push(`${indent}  λmin ${f(c.lambdaMin)} (${c.regime ? REGIME_WORDS[c.regime] : '—'}); θB,max ${f(c.maxContactTemperature_C, 0)} °C against θS ${f(c.scuffingTemperature_C, 0)} °C; FZG stage needed ${stage(c.verdict?.neededFzgStage ?? null)}`);
+      if (c.micropitting) lines.push(`${indent}  Micropitting (ISO/TS 6336-22): ${c.micropitting.note}`);
       if (c.verdict) {
         lines.push(`${indent}  ${c.verdict.checks.map(checkText).join('; ')}`);
         lines.push(`${indent}  → ${VERDICT_WORDS[c.verdict.code]}; the oil ${c.verdict.shortfalls.length ? `is short on ${shortfallList(c.verdict.shortfalls)}` : 'meets the need'}`);

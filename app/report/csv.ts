@@ -4,7 +4,7 @@
  * (so spreadsheet programs read σ, θ and µ correctly), '.' as the decimal sign, and an empty
  * cell where the engine gives no value (no oil, so no film). Pure.
  */
-import type { PointResult, Results } from '../review/results';
+import type { CaseResult, PointResult, Results } from '../review/results';
 import { unitsFor, type Quantity, type UnitSystem } from './units';
 import { textCell } from '../review/csvCell';
 
@@ -35,6 +35,15 @@ const COLUMNS: readonly CsvColumn[] = [
   { name: 'contact temperature θB', quantity: 'temperature', get: (p) => p.contactTemperature_C },
 ];
 
+/** Per case × oil, repeated on each of its rows: micropitting by ISO/TS 6336-22 (empty where not known). */
+const CASE_COLUMNS: ReadonlyArray<{ name: string; get: (c: CaseResult) => number | string | null }> = [
+  { name: 'λGF,min in the area at risk (–)', get: (c) => c.micropitting?.lambdaGFMin ?? null },
+  { name: 'λGFT of the C-GF test (–)', get: (c) => c.micropitting?.lambdaGFT ?? null },
+  { name: 'λGFP permissible (–)', get: (c) => c.micropitting?.lambdaGFP ?? null },
+  { name: 'micropitting safety Sλ (–)', get: (c) => c.micropitting?.safety ?? null },
+  { name: 'micropitting failure stage needed', get: (c) => (c.micropitting ? String(c.micropitting.requiredFailureStage) : null) },
+];
+
 function quote(s: string): string {
   return /[",\r\n]/.test(s) ? `"${s.replace(/"/g, '""')}"` : s;
 }
@@ -52,7 +61,7 @@ function csvNumber(x: number): string {
 export function resultsToCsv(results: Results, system: UnitSystem = 'si'): string {
   const u = unitsFor(system);
   const meshes = results.meshes ?? null;
-  const header = [...(meshes ? ['mesh'] : []), 'load case', 'oil', 'point', ...COLUMNS.map((c) => (c.quantity ? `${c.name} (${u.unit(c.quantity) || '–'})` : c.name))];
+  const header = [...(meshes ? ['mesh'] : []), 'load case', 'oil', 'point', ...COLUMNS.map((c) => (c.quantity ? `${c.name} (${u.unit(c.quantity) || '–'})` : c.name)), ...CASE_COLUMNS.map((c) => c.name)];
   const lines = [header.map(quote).join(',')];
   const blocks = meshes ? meshes.map((m) => ({ lead: [m.mesh], cases: m.cases })) : [{ lead: [] as string[], cases: results.cases }];
   for (const { lead, cases } of blocks) for (const c of cases) {
@@ -63,6 +72,10 @@ export function resultsToCsv(results: Results, system: UnitSystem = 'si'): strin
         if (v === null) cells.push('');
         else if (typeof v === 'string') cells.push(textCell(v));
         else cells.push(csvNumber(col.quantity ? u.value(v, col.quantity) : v));
+      }
+      for (const col of CASE_COLUMNS) {
+        const v = col.get(c);
+        cells.push(v === null ? '' : typeof v === 'string' ? v : csvNumber(v));
       }
       lines.push(cells.map(quote).join(','));
     });

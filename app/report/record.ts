@@ -29,6 +29,7 @@ import { drawCaseResults } from './sections/caseResults';
 import { drawComparison } from './sections/comparison';
 import { drawVerdict } from './sections/verdict';
 import { drawOperatingMaps } from './sections/operatingMap';
+import { drawMicropitting } from './sections/micropitting';
 import type { OperatingMapResult } from '../review/operatingMaps';
 import { drawMethods, drawSignoff, drawWarnings } from './sections/backMatter';
 
@@ -153,6 +154,7 @@ export async function renderRecord(review: Review, results: Results, options: Re
   drawInputs(ctx);
   const perMesh = meshContexts(ctx, MESH_WORDS);
   for (const m of perMesh) drawCaseResults(m);
+  for (const m of perMesh) drawMicropitting(m);
   for (const m of perMesh) drawComparison(m);
   if (options.maps) drawOperatingMaps(ctx, options.maps);
   if (options.films) drawFilmDetail(ctx, options.films);

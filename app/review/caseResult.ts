@@ -4,6 +4,7 @@ import { decideVerdict } from '../engine/verdict/decide';
 import { NOMINAL_STRESS_EDITION } from '../engine/stress/iso6336Nominal';
 import type { VerdictFacts } from '../engine/verdict/types';
 import { kelvinToCelsius, toMegapascals, toMicrometres, toMillimetres, type Kelvin, type Metres, type Pascals } from '../engine/units';
+import { micropittingFacts, micropittingResult } from './micropittingResult';
 import type { ReviewOil } from './oils';
 import type { CaseResult, LimitCheck, PointResult } from './results';
 import type { PairLoadCase, PairReview, Policy } from './schema';
@@ -68,6 +69,7 @@ function verdictFacts(review: PairReview, lc: PairLoadCase, oil: ReviewOil, all:
     requiredStage: sc.requiredStage,
     requiredStageIntegral: sc.requiredStageIntegral,
     scuffingProbability: sc.probability,
+    micropitting: micropittingFacts(a),
     components: review.gearPair.components,
     otherOils: all.filter((o) => o !== oil).map((o) => ({ chemistry: o.chemistry, baseOil: o.baseOil, role: o.role })),
     role: oil.role,
@@ -137,7 +139,8 @@ export function caseToResult(review: PairReview, lc: PairLoadCase, oil: ReviewOi
     requiredFzgStageIntegral: sc ? sc.requiredStageIntegral : null,
     scuffingProbability: sc ? orNull(sc.probability) : null,
     lambdaGFMin: film ? film.lambdaGFMin : null,
-    micropittingAdvisory: film ? micropittingAdvisory(film.lambdaGFMin) : null,
+    micropittingAdvisory: film ? micropittingAdvisory(film.lambdaGFMin, a.micropitting?.failureStage ?? null) : null,
+    micropitting: verdict ? micropittingResult(a, review.policy, verdict.micropitting) : null,
     verdict: verdict
       ? {
           code: verdict.code,
@@ -146,7 +149,8 @@ export function caseToResult(review: PairReview, lc: PairLoadCase, oil: ReviewOi
           chemistryNeed: verdict.chemistryNeed ?? 'beyond-oil',
           neededFzgStage: verdict.neededStage > 12 ? '>12' : verdict.neededStage,
           governingMethod: verdict.governingMethod,
-          checks: limitChecks(review.policy, sc?.safety ?? null, sc?.integralSafety ?? null, film?.lambdaMin ?? null),
+          checks: limitChecks(review.policy, sc?.safety ?? null, sc?.integralSafety ?? null, film?.lambdaMin ?? null, a.micropitting?.safety ?? null),
+          micropitting: verdict.micropitting,
           reasons: verdict.reasons,
           cautions: verdict.cautions,
         }
@@ -155,8 +159,8 @@ export function caseToResult(review: PairReview, lc: PairLoadCase, oil: ReviewOi
   };
 }
 
-/** SB, SintS (for the methods the policy uses) and λmin against their policy limits. */
-export function limitChecks(p: Policy, sb: number | null, sInt: number | null, lambdaMin: number | null): LimitCheck[] {
+/** SB, SintS (for the methods the policy uses), λmin and Sλ (micropitting) against their policy limits. */
+export function limitChecks(p: Policy, sb: number | null, sInt: number | null, lambdaMin: number | null, sLambda: number | null = null): LimitCheck[] {
   const check = (quantity: LimitCheck['quantity'], symbol: string, value: number | null, limit: number): LimitCheck => ({
     quantity,
     symbol,
@@ -168,14 +172,16 @@ export function limitChecks(p: Policy, sb: number | null, sInt: number | null, l
   if (p.scuffingMethods !== 'integral') out.push(check('scuffingSafety', 'SB', sb, p.scuffingSafetyMin));
   if (p.scuffingMethods !== 'flash') out.push(check('integralSafety', 'SintS', sInt, p.integralSafetyMin));
   out.push(check('lambdaMin', 'λmin', lambdaMin, p.lambdaTarget));
+  out.push(check('micropittingSafety', 'Sλ', sLambda, p.micropittingSafetyMin));
   return out;
 }
 
 /**
- * ISO/TS 6336-22 compares λGF,min with a permissible λGFP from the oil's micropitting test,
- * which a data sheet rarely gives; without it we screen at λGF,min < 1 (common practice).
+ * The screen on the whole path: without the oil's micropitting failure stage (which a data sheet
+ * rarely gives) ISO/TS 6336-22 cannot give Sλ, and we screen at λGF,min < 1 (common practice).
  */
-function micropittingAdvisory(lambdaGFMin: number): string {
+function micropittingAdvisory(lambdaGFMin: number, stage: number | '>10' | null): string {
+  if (stage !== null) return `λGF,min = ${lambdaGFMin.toFixed(2)} along the whole path; the oil's micropitting failure stage ${stage === '>10' ? 'above 10' : stage} gives Sλ by ISO/TS 6336-22 (see Micropitting).`;
   return lambdaGFMin < 1
     ? `λGF,min = ${lambdaGFMin.toFixed(2)} < 1: micropitting is possible; ask for the oil's micropitting test class and check λGF,min against λGFP by ISO/TS 6336-22 (screen: common practice).`
     : `λGF,min = ${lambdaGFMin.toFixed(2)} ≥ 1: no micropitting flag by the screen λGF,min < 1 (common practice; ISO/TS 6336-22 needs the oil's λGFP for a safety factor).`;

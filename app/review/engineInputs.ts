@@ -18,6 +18,7 @@ export function enginePolicyOf(p: Policy): EnginePolicy {
     scuffingTemperatureSpread: p.scuffingTemperatureSpread,
     shockApplicationFactor: p.shockApplicationFactor,
     scuffingMethods: p.scuffingMethods,
+    micropittingSafetyMin: p.micropittingSafetyMin,
   };
 }
 

@@ -86,7 +86,9 @@ function caseSummary(c: Results['cases'][number]): Record<string, unknown> {
     scuffingSafety: roundOrNull(c.scuffingSafety),
     integralSafety: roundOrNull(c.integralSafety),
     requiredFzgStage: c.requiredFzgStage,
-    verdict: c.verdict ? { code: c.verdict.code, oilFit: c.verdict.oilFit, rules: c.verdict.reasons.map((r) => r.rule) } : null,
+    micropittingSafety: roundOrNull(c.micropitting?.safety ?? null),
+    requiredMicropittingStage: c.micropitting?.requiredFailureStage ?? null,
+    verdict: c.verdict ? { code: c.verdict.code, oilFit: c.verdict.oilFit, micropitting: c.verdict.micropitting, rules: c.verdict.reasons.map((r) => r.rule) } : null,
   };
 }
 

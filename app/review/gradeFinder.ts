@@ -58,7 +58,7 @@ export function gradeFinder(review: PairReview, geometry: GearPairGeometry, pini
 function gradeTable(review: PairReview, cases: readonly SweepCase[], oil: ReviewOil, tHigh: number): GradeFinderRow[] {
   const vi = oil.model.viscosityIndex.value;
   const table: GradeFinderRow[] = [];
-  const cell: CellResult = { lambdaMin: 0, scuffingSafety: 0, integralSafety: 0, verdict: 0 };
+  const cell: CellResult = { lambdaMin: 0, scuffingSafety: 0, integralSafety: 0, verdict: 0, lambdaGFMin: 0, micropittingSafety: 0 };
   for (const vg of CANDIDATE_GRADES) {
     let kv100: SquareMetresPerSecond;
     try {
@@ -69,7 +69,7 @@ function gradeTable(review: PairReview, cases: readonly SweepCase[], oil: Review
     const model = makeOilModel({ kv40: centistokes(vg), kv100, density15: oil.source.density15_kgm3 as KilogramsPerCubicMetre, baseOil: oil.baseOil }, oil.field);
     let lambdaMin = Infinity;
     cases.forEach((sc, li) => {
-      const so = prepareSweepOil(sc, { ...oil, model });
+      const so = prepareSweepOil(sc, { ...oil, model, micropittingFailureStage: null }); // the grade finder reads λ only
       // The film thins as the oil warms, so the hotter of the case's own temperature and the top of the range governs.
       const t = Math.max(review.loadCases[li]?.oilTemperature_C ?? tHigh, tHigh);
       evaluateCell(sc, so, t, 1, cell);

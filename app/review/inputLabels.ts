@@ -83,6 +83,7 @@ const member = (n: 1 | 2 | 'S' | 'P' | 'R', internal = false): Readonly<Record<s
   'material.density_kgm3': { label: 'Density ρ', kind: 'density' },
   'material.specificHeat_JkgK': { label: 'Specific heat c', unit: 'J/(kg·K)' },
   'material.structuralFactorXW': { label: 'Structural factor XW' },
+  'material.micropittingFactorWW': { label: 'Micropitting material factor WW' },
 });
 
 const prefixed = (prefix: string, t: Readonly<Record<string, InputLabel>>) => Object.fromEntries(Object.entries(t).map(([k, v]) => [`${prefix}.${k}`, v]));
@@ -145,6 +146,7 @@ export const INPUT_LABELS: Readonly<Record<string, InputLabel>> = {
   'oils[].baseOil': { label: 'Base oil', words: BASE_OIL_WORDS },
   'oils[].chemistry': { label: 'Additive chemistry', words: CHEMISTRY_WORDS },
   'oils[].fzgFailureStage': { label: 'FZG A/8.3/90 failure stage', words: { '>12': 'above 12' } },
+  'oils[].micropittingFailureStage': { label: 'Micropitting failure stage (FVA 54, C-GF)', words: { '>10': 'above 10' } },
   'oils[].pressureViscosity_1perGPa': { label: 'Pressure–viscosity α', unit: '1/GPa' },
   'policy.lambdaTarget': { label: 'λ target' },
   'policy.scuffingSafetyMin': { label: 'SB,min (flash)' },
@@ -160,6 +162,7 @@ export const INPUT_LABELS: Readonly<Record<string, InputLabel>> = {
   'policy.frictionCoefficient': { label: 'Friction coefficient μ' },
   'policy.scuffingTemperatureSpread': { label: 'Spread of θS (σ/θS)' },
   'policy.pathPoints': { label: 'Points along the path' },
+  'policy.micropittingSafetyMin': { label: 'Sλ,min (micropitting)' },
   'policy.scuffingMethods': { label: 'Scuffing methods', words: SCUFFING_METHOD_CHOICES },
   'policy.thermalFilmCorrection': { label: 'Inlet shear heating correction (Murch–Wilson)', words: ON_OFF },
 };

@@ -1,6 +1,7 @@
 import { METHOD_WORDS } from '../engine/verdict/words';
 import { governingCase } from './margin';
-import { mostDemandingChemistry, stageNumber, stageOf, stageWords } from './overall';
+import { micropittingOverCases, mostDemandingChemistry, stageNumber, stageOf, stageWords } from './overall';
+import { micropittingNeedWords } from './micropittingResult';
 import type { CaseResult, ChemistryNeed, DutyNeed, GradeFinderResult } from './results';
 import type { Review } from './schema';
 import { CANDIDATE_GRADES } from './gradeFinder';
@@ -16,7 +17,8 @@ export const CHEMISTRY_NEED_WORDS: Readonly<Record<ChemistryNeed, string>> = {
 
 /**
  * What the duty needs, stated once and apart from what any oil offers: the chemistry class, the
- * FZG A/8.3/90 stage by each method in use, the lowest ISO VG for the λ target, and the governing
+ * FZG A/8.3/90 stage by each method in use, the lowest ISO VG for the λ target, the micropitting
+ * failure stage (ISO/TS 6336-22), and the governing
  * case and method. Friction and film depend a little on the oil, so each figure is the most
  * demanding over the oils reviewed (each oil's own need stands in its verdict).
  */
@@ -33,6 +35,8 @@ export function dutyNeed(review: Review, cases: readonly CaseResult[], grades: r
   const chemistry = mostDemandingChemistry(withVerdict.map((x) => x.c.verdict?.chemistryNeed ?? 'r-and-o'));
   const vgs = grades.map((g) => g.recommendedVG);
   const isoVG = vgs.length > 0 && vgs.every((v): v is number => v !== null) ? Math.max(...vgs) : null;
+  const mp = micropittingOverCases(withVerdict).needed;
+  const mpPart = mp !== null ? `; against micropitting, an oil of FVA 54 failure stage ${micropittingNeedWords(mp)} for Sλ ≥ ${review.policy.micropittingSafetyMin} (a matter of the additive system, not of EP)` : '';
   const gv = gov.c.verdict as NonNullable<CaseResult['verdict']>;
   const stagePart = [flash !== null ? `FZG stage ${stageWords(flash)} by the flash temperature method` : null, integral !== null ? `${stageWords(integral)} by the integral temperature method` : null]
     .filter((x): x is string => x !== null)
@@ -58,12 +62,13 @@ export function dutyNeed(review: Review, cases: readonly CaseResult[], grades: r
     fzgStageFlash: flash,
     fzgStageIntegral: integral,
     isoVG,
+    micropittingStage: mp,
     governingLoadCase: gov.c.loadCase,
     governingMethod: gv.governingMethod,
     methods,
     statement:
       chemistry === 'beyond-oil'
         ? `No oil in scope gives the duty its scuffing margin: ${stagePart} needed against an EP floor of ${review.policy.epOilFzgStage}; change the design or the duty. Governed by "${gov.c.loadCase}" and the ${METHOD_WORDS[gv.governingMethod]}.`
-        : `${capitalise(CHEMISTRY_NEED_WORDS[chemistry])}, because ${chemistryReason}; ${stagePart}; ${vgPart}. Governed by "${gov.c.loadCase}" and the ${METHOD_WORDS[gv.governingMethod]}.`,
+        : `${capitalise(CHEMISTRY_NEED_WORDS[chemistry])}, because ${chemistryReason}; ${stagePart}; ${vgPart}. Governed by "${gov.c.loadCase}" and the ${METHOD_WORDS[gv.governingMethod]}.${mpPart}`,
   };
 }

@@ -24,7 +24,7 @@ export function oilModelsOf(oils: readonly Oil[]): ReviewOil[] {
       },
       field,
     );
-    return { name: o.name, field, model, baseOil: o.baseOil, chemistry: o.chemistry, fzgFailureStage: o.fzgFailureStage, role: o.role, source: o };
+    return { name: o.name, field, model, baseOil: o.baseOil, chemistry: o.chemistry, fzgFailureStage: o.fzgFailureStage, micropittingFailureStage: o.micropittingFailureStage ?? null, role: o.role, source: o };
   });
 }
 

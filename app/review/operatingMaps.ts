@@ -34,6 +34,12 @@ export interface OperatingMapResult {
   scuffingSafety: (number | null)[][];
   integralSafety: (number | null)[][];
   verdict: VerdictCode[][];
+  /** λGF,min in the area at risk (ISO/TS 6336-22). */
+  lambdaGFMin: number[][];
+  /** Sλ; null when the oil's micropitting failure stage is not given. */
+  micropittingSafety: number[][] | null;
+  /** The oil's λGFP (null: stage not given), for a λGF,min = λGFP line. */
+  lambdaGFP: number | null;
 }
 
 const DEFAULT_CELLS = 60;
@@ -70,6 +76,9 @@ export function operatingMaps(whole: Review, options: MapOptions = {}): Operatin
         scuffingSafety: grid((k) => finiteOrNull(map.scuffingSafety[k] as number)),
         integralSafety: grid((k) => finiteOrNull(map.integralSafety[k] as number)),
         verdict: grid((k) => VERDICT_CODES[map.verdict[k] as number] as VerdictCode),
+        lambdaGFMin: grid((k) => map.lambdaGFMin[k] as number),
+        micropittingSafety: map.micropittingSafety ? grid((k) => (map.micropittingSafety as Float64Array)[k] as number) : null,
+        lambdaGFP: map.lambdaGFP,
       });
       if (options.progress?.(out.length, total) === false) return null;
     }
@@ -91,11 +100,11 @@ function sweptPair(whole: Review): { review: PairReview; geometry: GearPairGeome
 export function operatingMapsCsv(maps: readonly OperatingMapResult[]): string {
   const q = (s: string) => `"${s.replace(/"/g, '""')}"`;
   const num = (x: number | null) => (x === null ? '' : String(x));
-  const lines = ['load case,oil,oil temperature (°C),load (% of case torque),lambda_min (-),S_B (-),S_intS (-),verdict'];
+  const lines = ['load case,oil,oil temperature (°C),load (% of case torque),lambda_min (-),S_B (-),S_intS (-),verdict,lambda_GF_min (-),S_lambda micropitting (-)'];
   for (const m of maps) {
     m.temperatures_C.forEach((t, r) => {
       m.loadPercent.forEach((l, c) => {
-        lines.push([q(textCell(m.loadCase)), q(textCell(m.oil)), num(t), num(l), num(m.lambdaMin[r]?.[c] ?? null), num(m.scuffingSafety[r]?.[c] ?? null), num(m.integralSafety[r]?.[c] ?? null), m.verdict[r]?.[c] ?? ''].join(','));
+        lines.push([q(textCell(m.loadCase)), q(textCell(m.oil)), num(t), num(l), num(m.lambdaMin[r]?.[c] ?? null), num(m.scuffingSafety[r]?.[c] ?? null), num(m.integralSafety[r]?.[c] ?? null), m.verdict[r]?.[c] ?? '', num(m.lambdaGFMin[r]?.[c] ?? null), num(m.micropittingSafety?.[r]?.[c] ?? null)].join(','));
       });
     });
   }

@@ -1,15 +1,16 @@
 import { CHEMISTRY_WORDS } from '../engine/verdict/words';
-import type { CaseResult, ChemistryNeed, FzgStageNeeded, LimitCheck, OverallVerdict, Shortfall } from './results';
+import { micropittingNeedWords, micropittingStageNumber, micropittingStageWords } from './micropittingResult';
+import type { CaseResult, ChemistryNeed, FzgStageNeeded, LimitCheck, MicropittingFinding, MicropittingStageNeeded, OverallVerdict, Shortfall } from './results';
 import type { Review } from './schema';
-import { VERDICT_WORDS } from './vocabulary';
+import { SHORTFALL_ORDER, VERDICT_WORDS } from './vocabulary';
 import { governingCase } from './margin';
 
 const WORDS = VERDICT_WORDS;
-const SHORTFALL_ORDER: readonly Shortfall[] = ['chemistry', 'fzg-stage', 'film'];
 export const SHORTFALL_WORDS: Readonly<Record<Shortfall, string>> = {
   chemistry: 'chemistry',
   'fzg-stage': 'its FZG stage',
   film: 'film thickness (λ below target: a viscosity-grade matter)',
+  micropitting: 'micropitting (a higher micropitting class is needed)',
 };
 const CHEMISTRY_NEED_ORDER: readonly ChemistryNeed[] = ['r-and-o', 'anti-wear', 'extreme-pressure', 'beyond-oil'];
 
@@ -29,6 +30,20 @@ export function casesOfOil(review: Review, cases: readonly CaseResult[], oil: st
   return cases
     .map((c, i) => ({ c, share: review.loadCases[Math.floor(i / Math.max(1, review.oils.length))]?.timeShare ?? 0 }))
     .filter(({ c }) => c.oil === oil && c.verdict !== null);
+}
+
+const FINDING_SEVERITY: Readonly<Record<MicropittingFinding, number>> = { meets: 0, unknown: 1, short: 2 };
+
+/** The worst micropitting finding over the cases (short, then unknown, then meets) and the highest stage needed. */
+export function micropittingOverCases(mine: ReadonlyArray<{ c: CaseResult }>): { finding: MicropittingFinding; needed: MicropittingStageNeeded | null } {
+  let finding: MicropittingFinding = 'meets';
+  let needed = 0;
+  for (const { c } of mine) {
+    const f = c.verdict?.micropitting ?? 'unknown';
+    if (FINDING_SEVERITY[f] > FINDING_SEVERITY[finding]) finding = f;
+    needed = Math.max(needed, micropittingStageNumber(c.micropitting?.requiredFailureStage ?? null));
+  }
+  return { finding, needed: needed === 0 ? null : needed > 10 ? '>10' : needed };
 }
 
 /** The worst value of each limit check over the cases (the least value against its limit). */
@@ -64,6 +79,14 @@ export function overallVerdicts(review: Review, cases: readonly CaseResult[]): O
     const shortfalls = SHORTFALL_ORDER.filter((s) => mine.some((x) => x.c.verdict?.shortfalls.includes(s)));
     const short = total > 0 ? 1 - met / total : 1;
     const needed = stageOf(Math.max(...mine.map((x) => stageNumber(x.c.verdict?.neededFzgStage ?? null))));
+    const mp = micropittingOverCases(mine);
+    const mpStage = oil.micropittingFailureStage ?? null;
+    const mpWords =
+      mp.finding === 'unknown'
+        ? `; micropitting failure stage not given${mp.needed !== null ? ` (${micropittingNeedWords(mp.needed)} needed)` : ''}`
+        : mp.finding === 'meets' && mpStage !== null && mp.needed !== null
+          ? `, micropitting failure stage ${micropittingStageWords(mpStage)} against ${micropittingNeedWords(mp.needed)} needed`
+          : '';
     out.push({
       oil: oil.name,
       code,
@@ -74,6 +97,9 @@ export function overallVerdicts(review: Review, cases: readonly CaseResult[]): O
       oilFzgStage: oil.fzgFailureStage,
       chemistryNeed: mostDemandingChemistry(mine.map((x) => x.c.verdict?.chemistryNeed ?? 'r-and-o')),
       oilChemistry: CHEMISTRY_WORDS[oil.chemistry],
+      micropitting: mp.finding,
+      neededMicropittingStage: mp.needed,
+      oilMicropittingStage: mpStage,
       checks: worstChecks(mine),
       dutyShareMet: total > 0 ? met / total : 0,
       shortfalls,
@@ -81,7 +107,7 @@ export function overallVerdicts(review: Review, cases: readonly CaseResult[]): O
         code === 'beyond-oil'
           ? `${WORDS[code]} (governing case: ${gov.c.loadCase}): no oil in scope gives the margin; change the design or the duty.`
           : fit === 'meets'
-            ? `Meets the need in every load case: FZG stage ${stageWords(oil.fzgFailureStage)} against ${stageWords(needed)} needed, ${CHEMISTRY_WORDS[oil.chemistry]} chemistry.`
+            ? `Meets the need in every load case: FZG stage ${stageWords(oil.fzgFailureStage)} against ${stageWords(needed)} needed, ${CHEMISTRY_WORDS[oil.chemistry]} chemistry${mpWords}.`
             : `Short on ${shortfalls.map((s) => SHORTFALL_WORDS[s]).join(', ')} for ${(100 * short).toFixed(0)} % of the duty by time share (governing case: ${gov.c.loadCase}).`,
     });
   }

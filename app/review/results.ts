@@ -62,7 +62,7 @@ export interface Caution {
   kind: 'standing' | 'triggered';
 }
 
-export type Shortfall = 'film' | 'fzg-stage' | 'chemistry';
+export type Shortfall = 'film' | 'fzg-stage' | 'chemistry' | 'micropitting';
 export type ScuffingMethod = 'flash' | 'integral';
 export type ScuffingMethods = ScuffingMethod | 'both';
 /** The chemistry class a duty needs; `beyond-oil` when no oil in scope gives the margin. */
@@ -70,13 +70,44 @@ export type ChemistryNeed = 'r-and-o' | 'anti-wear' | 'extreme-pressure' | 'beyo
 
 /** One figure against its policy limit: SB ≥ SB,min, SintS ≥ SintS,min, λmin ≥ λ target. */
 export interface LimitCheck {
-  quantity: 'scuffingSafety' | 'integralSafety' | 'lambdaMin';
-  /** The symbol as a person reads it: SB, SintS, λmin. */
+  quantity: 'scuffingSafety' | 'integralSafety' | 'lambdaMin' | 'micropittingSafety';
+  /** The symbol as a person reads it: SB, SintS, λmin, Sλ. */
   symbol: string;
   value: number | null;
   limit: number;
   /** null when the figure is not defined (no temperature rise). */
   pass: boolean | null;
+}
+
+/** A micropitting failure stage (FVA 54, C-GF gear): 5 … 10, or beyond the test's scale. */
+export type MicropittingStageNeeded = number | '>10';
+/** The micropitting finding: the oil meets Sλ,min, falls short (a higher class is needed), or its stage is unknown. */
+export type MicropittingFinding = 'meets' | 'short' | 'unknown';
+
+/** Micropitting by ISO/TS 6336-22, per case × oil. */
+export interface MicropittingResult {
+  /** The duty's least λGF in the area at risk (A…B and D…E). */
+  lambdaGFMin: number;
+  lambdaGFMinPosition_mm: number;
+  /** λGF,min of the C-GF test gear with this oil at its failure stage (null: stage unknown). */
+  lambdaGFT: number | null;
+  /** λGFP = 1.4 WW λGFT (null: stage unknown). */
+  lambdaGFP: number | null;
+  /** Sλ = λGF,min/λGFP (null: stage unknown). */
+  safety: number | null;
+  /** True for an oil rated ">10": Sλ is computed at stage 10 and is a lower bound. */
+  safetyAtLeast: boolean;
+  safetyMin: number;
+  materialFactorWW: number;
+  /** The oil's FVA 54 failure stage, null when not given. */
+  failureStage: MicropittingStageNeeded | null;
+  /** The smallest failure stage with Sλ ≥ Sλ,min. */
+  requiredFailureStage: MicropittingStageNeeded;
+  /** λGFT of the test gear with this oil per stage 5 … 10. */
+  lambdaGFTByStage: Array<{ stage: number; lambdaGFT: number }>;
+  finding: MicropittingFinding;
+  /** One sentence, in words. */
+  note: string;
 }
 
 export interface CaseVerdict {
@@ -92,6 +123,8 @@ export interface CaseVerdict {
   governingMethod: ScuffingMethod;
   /** Each figure against its policy limit, for the methods in use. */
   checks: LimitCheck[];
+  /** The micropitting finding (ISO/TS 6336-22): not a reason for EP chemistry. */
+  micropitting: MicropittingFinding;
   reasons: VerdictReason[];
   cautions: Caution[];
 }
@@ -143,6 +176,8 @@ export interface CaseResult {
   scuffingProbability: number | null;
   lambdaGFMin: number | null;
   micropittingAdvisory: string | null;
+  /** Micropitting by ISO/TS 6336-22 (null without an oil). */
+  micropitting: MicropittingResult | null;
   verdict: CaseVerdict | null;
   warnings: EngineWarning[];
 }
@@ -173,6 +208,11 @@ export interface OverallVerdict {
   oilFzgStage: number | '>12';
   chemistryNeed: ChemistryNeed;
   oilChemistry: string;
+  /** The worst micropitting finding over the cases. */
+  micropitting: MicropittingFinding;
+  /** The micropitting failure stage the duty needs with this oil (most demanding case). */
+  neededMicropittingStage: MicropittingStageNeeded | null;
+  oilMicropittingStage: MicropittingStageNeeded | null;
   /** The worst figure over the cases against its limit. */
   checks: Array<LimitCheck & { loadCase: string }>;
   /** Time-share-weighted fraction of duty for which the oil meets the need. */
@@ -225,6 +265,8 @@ export interface DutyNeed {
   fzgStageIntegral: FzgStageNeeded | null;
   /** The lowest ISO VG that meets the λ target in every case (null: none up to VG 3200, or no oils). */
   isoVG: number | null;
+  /** The FVA 54 micropitting failure stage for Sλ ≥ Sλ,min in every case (most demanding over the oils). */
+  micropittingStage: MicropittingStageNeeded | null;
   governingLoadCase: string;
   governingMethod: ScuffingMethod;
   methods: ScuffingMethods;
@@ -241,6 +283,10 @@ export interface ChangeSide {
   scuffingProbability: number | null;
   neededFzgStage: FzgStageNeeded | null;
   oilFzgStage: number | '>12';
+  micropittingSafety: number | null;
+  neededMicropittingStage: MicropittingStageNeeded | null;
+  oilMicropittingStage: MicropittingStageNeeded | null;
+  micropitting: MicropittingFinding | null;
   meets: boolean;
 }
 

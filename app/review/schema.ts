@@ -37,6 +37,8 @@ export const materialSchema = z.union([
     density_kgm3: positive(30000, 'kg/m³'),
     specificHeat_JkgK: positive(10000, 'J/(kg·K)'),
     structuralFactorXW: positive(3, ''),
+    /** Micropitting material factor WW (ISO/TS 6336-22): 1 case-carburized, 0.5 through-hardened, 0.65 induction-hardened, 1.5 nitrided steel [memory]. */
+    micropittingFactorWW: positive(3, '').optional(),
   }),
 ]);
 
@@ -130,6 +132,15 @@ export const planetarySchema = z.strictObject({
   transverseLoadFactorKHalpha: finite().gte(1).lte(5).default(1),
 });
 
+/** FVA 54 micropitting failure load stage on the C-GF gear (90 °C, 8.3 m/s): a whole number 5…10, or ">10". */
+export const micropittingStageSchema = z.union(
+  [
+    z.number({ message: 'must be a whole number from 5 to 10, or ">10" (FVA 54 micropitting load stage)' }).int({ message: 'must be a whole number from 5 to 10, or ">10" (FVA 54 micropitting load stage)' }).gte(5, { message: 'must be at least 5 (the FVA 54 micropitting test starts at load stage 5), or ">10"' }).lte(10, { message: 'must be at most 10; an oil that passed stage 10 is ">10"' }),
+    z.literal('>10'),
+  ],
+  { message: 'must be a whole number from 5 to 10, or ">10" (FVA 54 micropitting load stage)' },
+);
+
 export const FZG_STAGES = [1, 2, 3, 4, 5, 6, 7, 8, 9, 10, 11, 12] as const;
 export const fzgStageSchema = z.union([z.number().int().gte(1).lte(12), z.literal('>12')]);
 
@@ -144,6 +155,8 @@ export const oilSchema = z
     baseOil: z.enum(BASE_OILS),
     chemistry: z.enum(CHEMISTRIES),
     fzgFailureStage: fzgStageSchema,
+    /** FVA 54 micropitting failure load stage (C-GF gear, 90 °C, 8.3 m/s); absent when unknown. */
+    micropittingFailureStage: micropittingStageSchema.optional(),
     pressureViscosity_1perGPa: positive(100, '1/GPa').optional(),
   })
   .superRefine((o, ctx) => {
@@ -175,6 +188,8 @@ export const policySchema = z
     shockApplicationFactor: finite().gte(1).lte(4).default(1.75),
     /** Scuffing methods the verdict uses: flash (ISO/TS 6336-20), integral (ISO/TS 6336-21) or both (the more demanding governs). */
     scuffingMethods: z.enum(SCUFFING_METHODS).default('both'),
+    /** Sλ,min of the micropitting method, ISO/TS 6336-22 (default 1 [memory, weak]). */
+    micropittingSafetyMin: finite().gt(0).lte(5).default(1),
   })
   .superRefine((p, ctx) => {
     if (p.temperatureRange_C[0] >= p.temperatureRange_C[1]) ctx.addIssue({ code: 'custom', path: ['temperatureRange_C'], message: 'the lower end must be below the upper end' });

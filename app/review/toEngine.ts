@@ -15,6 +15,7 @@ export function materialOf(m: MaterialEntry): Material {
     density: m.density_kgm3 as Material['density'],
     specificHeat: m.specificHeat_JkgK as Material['specificHeat'],
     structuralFactorXW: m.structuralFactorXW,
+    ...(m.micropittingFactorWW !== undefined ? { micropittingFactorWW: m.micropittingFactorWW } : {}),
   };
 }
 

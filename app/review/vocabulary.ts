@@ -78,7 +78,11 @@ export const SHORTFALL_SHORT: Readonly<Record<Shortfall, string>> = {
   chemistry: 'chemistry',
   'fzg-stage': 'FZG stage',
   film: 'film (a grade matter)',
+  micropitting: 'micropitting class',
 };
+
+/** The order in which shortfalls are named. */
+export const SHORTFALL_ORDER: readonly Shortfall[] = ['chemistry', 'fzg-stage', 'film', 'micropitting'];
 
 export const METHODS_WORDS: Readonly<Record<ScuffingMethods, string>> = {
   both: 'flash and integral temperature methods (the more demanding governs)',
@@ -108,4 +112,11 @@ export const REGIME_COLOURS: Readonly<Record<Regime, string>> = {
   'full-film': OKABE_ITO.bluishGreen,
   mixed: OKABE_ITO.orange,
   boundary: OKABE_ITO.vermillion,
+};
+
+/** The micropitting finding as a short label (ISO/TS 6336-22). */
+export const MICROPITTING_LABELS: Readonly<Record<'meets' | 'short' | 'unknown', string>> = {
+  meets: 'meets',
+  short: 'short: a higher micropitting class is needed',
+  unknown: 'unknown: micropitting stage not given',
 };

@@ -94,9 +94,16 @@ describe('change findings on the FZG A gear (flash method; the need follows from
     expect(ch?.byCase[0]?.before.oilFzgStage).toBe(6);
     expect(ch?.byCase[0]?.after.oilFzgStage).toBe(12);
   });
-  it('with a λ target the film meets, the same change is supported without conditions', () => {
-    const r = fzgReviewWithTarget(302, [RO6, EP12], 0.05);
+  it('with a λ target the film meets and a micropitting stage that meets the need, the same change is supported without conditions', () => {
+    const r = fzgReviewWithTarget(302, [RO6, { ...EP12, micropittingFailureStage: 10 }], 0.05);
+    expect(r.cases[1]?.verdict?.micropitting).toBe('meets');
     expect(r.changes[0]?.finding).toBe('supported');
+  });
+  it('the same change with the proposed oil\'s micropitting stage not given, where the screen flags micropitting (λGF,min < 1): supported with a condition that asks for it', () => {
+    const r = fzgReviewWithTarget(302, [RO6, EP12], 0.05);
+    expect(r.cases[1]?.micropitting?.lambdaGFMin).toBeLessThan(1);
+    expect(r.changes[0]?.finding).toBe('supported-with-conditions');
+    expect(r.changes[0]?.conditions.join(' ')).toMatch(/micropitting failure stage .* not given/);
   });
   it('the reverse change, EP FZG 12 → R&O FZG 6, is not supported: short on chemistry and FZG stage', () => {
     const r = fzgReview(302, [{ ...EP12, role: 'in-service' }, { ...RO6, role: 'proposed' }], 'flash');

@@ -42,6 +42,22 @@ describe('iso-lines as polylines', () => {
   });
 });
 
+describe('the micropitting line λGF,min = λGFP (ISO/TS 6336-22)', () => {
+  it('is absent without the oil\'s micropitting stage (the demo oils give none); with stage 8 the hard-rock map of the oil in service crosses λGFP', () => {
+    expect(mapContours(hard[0] as OperatingMapResult, SB_MIN, review.policy.lambdaTarget).micropitting).toEqual([]);
+    const withStage = { ...review, oils: review.oils.map((o) => ({ ...o, micropittingFailureStage: 8 })) };
+    const m = (operatingMaps(withStage, { temperatures: 24, loads: 24 }) as OperatingMapResult[])[HARD * review.oils.length] as OperatingMapResult;
+    expect(m.lambdaGFP).not.toBeNull();
+    const lgfp = m.lambdaGFP as number;
+    const all = m.lambdaGFMin.flat();
+    const segs = mapContours(m, SB_MIN, review.policy.lambdaTarget).micropitting;
+    expect(Math.min(...all)).toBeLessThan(lgfp); // measured: λGF,min 0.23 … 8.7 on this map against λGFP 0.25
+    expect(Math.max(...all)).toBeGreaterThan(lgfp);
+    expect(segs.length).toBeGreaterThan(0);
+    for (const row of m.micropittingSafety ?? []) for (const v of row) expect(Number.isFinite(v)).toBe(true);
+  });
+});
+
 describe('the case point and the read-out', () => {
   it('sits at its oil temperature and 100 % on the evenly spaced axes (mapAxes: policy range, 10–150 %)', () => {
     const m = hard[0] as OperatingMapResult;

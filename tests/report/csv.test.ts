@@ -43,6 +43,7 @@ describe('resultsToCsv', () => {
   it('starts with a UTF-8 byte-order mark and a header of names with units', () => {
     expect(csv.startsWith('\uFEFF')).toBe(true);
     expect(header.slice(0, 3)).toEqual(['load case', 'oil', 'point']);
+    for (const h of ['micropitting safety Sλ (–)', 'λGF,min in the area at risk (–)', 'micropitting failure stage needed']) expect(header).toContain(h);
     for (const h of ['Hertz stress σH (MPa)', 'sliding velocity vg (m/s)', 'sum velocity vΣ (m/s)', 'film thickness hmin (µm)', 'specific film λ (–)', 'contact temperature θB (°C)', 'flash temperature θfl (K)']) expect(header).toContain(h);
   });
 

@@ -51,7 +51,7 @@ describe('governing case', () => {
   });
   it('with the flash method alone no integral figure is checked, and the need has no integral stage', () => {
     const r = run(review({ scuffingMethods: 'flash' }));
-    expect(r.cases[0]?.verdict?.checks.map((k) => k.symbol)).toEqual(['SB', 'λmin']);
+    expect(r.cases[0]?.verdict?.checks.map((k) => k.symbol)).toEqual(['SB', 'λmin', 'Sλ']);
     expect(r.need?.fzgStageIntegral).toBeNull();
     expect(r.need?.methods).toBe('flash');
   });

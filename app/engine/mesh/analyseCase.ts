@@ -3,17 +3,12 @@ import { meshMechanics, type MeshMechanics } from './mechanics';
 import { temperaturesAlongPath, type TemperaturesAlongPath } from './temperatures';
 import { filmAlongPath, type FilmAlongPath } from './film';
 import { scuffingAssessment, type ScuffingAssessment } from './scuffing';
+import { micropittingAssessment, type MicropittingAssessment } from './micropitting';
+import { oilState, type OilState } from './oilState';
 import type { CaseInput } from './types';
-import type { Kelvin, KelvinDifference, PascalSeconds, PerKelvin, PerPascal, SquareMetresPerSecond, KilogramsPerCubicMetre } from '../units';
+import type { KelvinDifference } from '../units';
 
-export interface OilState {
-  readonly temperature: Kelvin;
-  readonly kinematicViscosity: SquareMetresPerSecond;
-  readonly dynamicViscosity: PascalSeconds;
-  readonly density: KilogramsPerCubicMetre;
-  readonly pressureViscosity: PerPascal;
-  readonly temperatureViscosity: PerKelvin;
-}
+export { oilState, type OilState };
 
 export interface CaseAnalysis {
   readonly input: CaseInput;
@@ -24,6 +19,8 @@ export interface CaseAnalysis {
   /** The oil at the temperature the film is computed at (the bulk temperature θM). */
   readonly oilAtFilmTemperature: OilState | null;
   readonly scuffing: ScuffingAssessment | null;
+  /** Micropitting by ISO/TS 6336-22 (null without an oil). */
+  readonly micropitting: MicropittingAssessment | null;
   readonly warnings: EngineWarning[];
 }
 
@@ -31,7 +28,7 @@ export interface CaseAnalysis {
  * One load case with one oil, along the whole path of contact:
  * mechanics (geometry, kinematics, XΓ, Hertz) → friction and Blok flash temperature → bulk
  * temperature θM → oil at θM → EHL film, λ and regime → scuffing safety (flash and integral
- * temperature methods) and the FZG stage the duty needs.
+ * temperature methods) and the FZG stage the duty needs → micropitting (ISO/TS 6336-22).
  * The film is computed at θM, the flank temperature at the contact inlet (as ISO/TR 15144-1 and
  * AGMA 925 do), so it sees the heat of the mesh; friction uses the oil temperature (ISO/TS 6336-20).
  */
@@ -39,7 +36,7 @@ export function analyseCase(input: CaseInput): CaseAnalysis {
   const sink = new WarningSink();
   const mechanics = meshMechanics(input.geometry, input.pinion, input.wheel, input.duty, input.policy.pathPoints);
   const oil = input.oil;
-  if (!oil) return { input, mechanics, heat: null, film: null, oilAtFilmTemperature: null, scuffing: null, warnings: sink.items };
+  if (!oil) return { input, mechanics, heat: null, film: null, oilAtFilmTemperature: null, scuffing: null, micropitting: null, warnings: sink.items };
   const tField = `${input.caseField}.oilTemperature_C`;
   const heat = temperaturesAlongPath(input, mechanics, sink);
   // A bulk temperature past the oil model's range means the duty is far beyond scuffing anyway; the
@@ -57,20 +54,10 @@ export function analyseCase(input: CaseInput): CaseAnalysis {
   const state = oilState(input, tFilm, tField);
   const film = filmAlongPath(input, mechanics, state, sink);
   const scuffing = scuffingAssessment(input, mechanics, heat, sink);
+  const micropitting = micropittingAssessment(input, mechanics, film, sink);
   for (const w of oil.model.warnings) sink.add(w);
-  return { input, mechanics, heat, film, oilAtFilmTemperature: state, scuffing, warnings: sink.items };
+  return { input, mechanics, heat, film, oilAtFilmTemperature: state, scuffing, micropitting, warnings: sink.items };
 }
 
-export function oilState(input: CaseInput, t: Kelvin, field: string): OilState {
-  const m = (input.oil as NonNullable<CaseInput['oil']>).model;
-  return {
-    temperature: t,
-    kinematicViscosity: m.kinematicViscosity(t, field),
-    dynamicViscosity: m.dynamicViscosity(t, field),
-    density: m.density(t, field),
-    pressureViscosity: m.pressureViscosity(t, field),
-    temperatureViscosity: m.temperatureViscosity(t, field),
-  };
-}
 
 export type { KelvinDifference };

@@ -5,7 +5,7 @@ import { RQ_PER_RA_GAUSSIAN } from '../film/specificFilm';
 import { MINERAL_OIL_CONDUCTIVITY, MURCH_WILSON_L_MAX } from '../film/thermalCorrection';
 import { tribofilmNote } from '../film/tribofilmNote';
 import type { Metres } from '../units';
-import type { OilState } from './analyseCase';
+import type { OilState } from './oilState';
 import type { MeshMechanics } from './mechanics';
 import type { CaseInput } from './types';
 

@@ -4,6 +4,7 @@ import type { OilModel } from '../oil/oilModel';
 import type { BaseOil, Chemistry } from '../oil/types';
 import type { RegimeThresholds } from '../film/regime';
 import type { FzgFailureStage } from '../heat/scuffingTemperature';
+import type { MicropittingFailureStage } from '../micropitting/failureStage';
 import type { Kelvin, Metres, NewtonMetres, RadiansPerSecond } from '../units';
 
 export type FilmFormula = 'dowson-higginson' | 'pan-hamrock';
@@ -29,6 +30,8 @@ export interface EnginePolicy {
   readonly shockApplicationFactor: number;
   /** Which scuffing methods the verdict uses; with both, the more demanding governs. */
   readonly scuffingMethods: ScuffingMethods;
+  /** Sλ,min of the micropitting method (ISO/TS 6336-22), default 1 [memory, weak]. */
+  readonly micropittingSafetyMin: number;
 }
 
 /** One load case, in SI. */
@@ -54,6 +57,8 @@ export interface EngineOil {
   readonly baseOil: BaseOil;
   readonly chemistry: Chemistry;
   readonly fzgFailureStage: FzgFailureStage;
+  /** FVA 54 micropitting failure load stage on the C-GF gear (5…10, '>10'); absent or null when unknown. */
+  readonly micropittingFailureStage?: MicropittingFailureStage | null;
 }
 
 export interface CaseInput {

@@ -11,6 +11,11 @@ import { MINERAL_OIL_CONDUCTIVITY } from '../film/thermalCorrection';
 import { RQ_PER_RA_GAUSSIAN } from '../film/specificFilm';
 import { materialContactCoefficient } from '../materials';
 import { meshMechanics } from '../mesh/mechanics';
+import { testGearLambdaGF } from '../mesh/micropitting';
+import { WarningSink } from '../diagnostics';
+import { micropittingStageNumber, MICROPITTING_STAGE_MAX } from '../micropitting/failureStage';
+import { pairMaterialFactorWW } from '../micropitting/materialFactor';
+import { permissibleSpecificFilm } from '../micropitting/permissibleFilm';
 import type { CaseInput, EngineOil } from '../mesh/types';
 import type { FzgStageNeed } from '../mesh/scuffing';
 import { verdictCodeOf } from '../verdict/code';
@@ -36,6 +41,12 @@ export interface OperatingMap {
   readonly integralSafety: Float64Array;
   /** Index into VERDICT_CODES. */
   readonly verdict: Uint8Array;
+  /** λGF,min in the area at risk (ISO/TS 6336-22). */
+  readonly lambdaGFMin: Float64Array;
+  /** Sλ = λGF,min/λGFP; null when the oil's micropitting failure stage is unknown. */
+  readonly micropittingSafety: Float64Array | null;
+  /** λGFP of the oil (null when unknown): the λGF,min = λGFP line of the map. */
+  readonly lambdaGFP: number | null;
 }
 
 export function mapAxes(temperatureRange_C: readonly [number, number], nTemperature: number, nLoad: number, loadRange: readonly [number, number] = [0.1, 1.5]): MapAxes {
@@ -71,6 +82,8 @@ export interface SweepCase {
   readonly rhoC: Metres;
   /** Integral method: calibrated θfla,E · Xε per unit μ at 100 % load, K. */
   readonly intFlashPerMu: number;
+  /** 1 where the point lies in the area at risk of micropitting (s ≤ B or s ≥ D), as micropitting/lambdaGFAtRisk.ts. */
+  readonly atRisk: Uint8Array;
 }
 
 /** Per-oil constants of a sweep: scuffing temperatures per stage for this oil's XL and the pair's XW. */
@@ -82,6 +95,8 @@ export interface SweepOil {
   /** θintS(S), °C, index 1…12. */
   readonly thetaIntSOf: Float64Array;
   readonly oilStage: number;
+  /** λGFP = 1.4 WW λGFT at the oil's micropitting failure stage; null when unknown. */
+  readonly lambdaGFP: number | null;
 }
 
 export interface CellResult {
@@ -89,6 +104,9 @@ export interface CellResult {
   scuffingSafety: number;
   integralSafety: number;
   verdict: number;
+  lambdaGFMin: number;
+  /** Sλ; +∞ when the oil's micropitting stage is unknown (the map then has no Sλ grid). */
+  micropittingSafety: number;
 }
 
 /**
@@ -114,6 +132,14 @@ export function prepareSweep(input: Omit<CaseInput, 'oil'>): SweepCase {
   const lnWPoint = new Float64Array(n);
   const lnUbar = new Float64Array(n);
   const radius = new Float64Array(n);
+  const atRisk = new Uint8Array(n);
+  let anyAtRisk = false;
+  for (let i = 0; i < n; i++) {
+    const s = m.position[i] as number;
+    atRisk[i] = s <= g.points.B || s >= g.points.D ? 1 : 0;
+    anyAtRisk ||= atRisk[i] === 1;
+  }
+  if (!anyAtRisk) atRisk.fill(1); // no two-pair zone (εα ≤ 1): the whole path, as lambdaGFAtRisk does
   let flashPerMuMax = 0;
   for (let i = 0; i < n; i++) {
     const v1 = m.v1[i] as number, v2 = m.v2[i] as number;
@@ -155,6 +181,7 @@ export function prepareSweep(input: Omit<CaseInput, 'oil'>): SweepCase {
     vSumC: m.sumVelocity[m.pitchIndex] as MetresPerSecond,
     rhoC: m.reducedRadius[m.pitchIndex] as Metres,
     intFlashPerMu: flashEPerMu * xEps,
+    atRisk,
   };
 }
 
@@ -166,7 +193,15 @@ export function prepareSweepOil(sc: SweepCase, oil: EngineOil): SweepOil {
     thetaSOf[s] = scuffingTemperature(s, sc.xW, xL).value;
     thetaIntSOf[s] = kelvinToCelsius(integralScuffingTemperature(FZG_A_PINION_TORQUE[s - 1] as NewtonMetres, xL, sc.xW));
   }
-  return { oil, thetaS: scuffingTemperature(oil.fzgFailureStage, sc.xW, xL).value, thetaSOf, thetaIntSOf, oilStage: oil.fzgFailureStage === '>12' ? 12 : oil.fzgFailureStage };
+  const mpStage = oil.micropittingFailureStage ?? null;
+  const lambdaGFP =
+    mpStage === null
+      ? null
+      : permissibleSpecificFilm(
+          testGearLambdaGF({ ...sc.input, oil }, Math.min(micropittingStageNumber(mpStage, `${oil.field}.micropittingFailureStage`), MICROPITTING_STAGE_MAX), new WarningSink()),
+          pairMaterialFactorWW(sc.input.pinion.micropittingFactorWW, sc.input.wheel.micropittingFactorWW),
+        );
+  return { oil, thetaS: scuffingTemperature(oil.fzgFailureStage, sc.xW, xL).value, thetaSOf, thetaIntSOf, oilStage: oil.fzgFailureStage === '>12' ? 12 : oil.fzgFailureStage, lambdaGFP };
 }
 
 const codeFacts = { requiredStage: 1 as FzgStageNeed, requiredStageIntegral: 1 as FzgStageNeed, integralSafetyAtEpFloor: null as number | null, applicationFactor: 1, regime: 'mixed' as 'boundary' | 'mixed' | 'full-film' };
@@ -199,13 +234,25 @@ export function evaluateCell(sc: SweepCase, so: SweepOil, tOilC: number, f: numb
   const aW = useDH ? -0.13 : -0.128;
   const thermal = policy.thermalFilmCorrection;
   const lnMW = Math.log((model.temperatureViscosity(tFilm) * eta) / MINERAL_OIL_CONDUCTIVITY);
+  // ISO/TR 15144-1 local film hY = 1.6 G^0.6 U^0.7 W^−0.13 R: the Dowson–Higginson groups, so with that
+  // formula hY = h · (1.6/2.65) G^0.06 (no extra exp per point); with Pan–Hamrock it takes its own.
+  const kIso = 1.6 * Math.exp(0.6 * lnG);
+  const isoPerDH = kIso / kFilm;
   let lmin = Infinity;
+  let hYMin = Infinity;
   for (let i = 0; i < sc.n; i++) {
-    let h = (sc.radius[i] as number) * kFilm * Math.exp(aU * (lnEta + (sc.lnUPoint[i] as number)) + aW * ((sc.lnWPoint[i] as number) + lnF));
-    if (thermal) h *= 3.94 / (3.94 + Math.exp(0.62 * (lnMW + 2 * (sc.lnUbar[i] as number))));
+    const lnUi = lnEta + (sc.lnUPoint[i] as number);
+    const lnWi = (sc.lnWPoint[i] as number) + lnF;
+    const h0 = (sc.radius[i] as number) * kFilm * Math.exp(aU * lnUi + aW * lnWi);
+    if (sc.atRisk[i] === 1) {
+      const hY = useDH ? h0 * isoPerDH : (sc.radius[i] as number) * kIso * Math.exp(0.7 * lnUi - 0.13 * lnWi);
+      if (hY < hYMin) hYMin = hY;
+    }
+    const h = thermal ? h0 * (3.94 / (3.94 + Math.exp(0.62 * (lnMW + 2 * (sc.lnUbar[i] as number))))) : h0;
     if (h < lmin) lmin = h;
   }
   lmin /= sc.sigma;
+  const lgf = hYMin / sc.raAvg;
   const flashInt = mu * f75 * sc.intFlashPerMu;
   const thetaIntC = tOilC + (INTEGRAL_WEIGHT_BULK * sc.xMp + INTEGRAL_WEIGHT_FLASH) * flashInt;
   let need: FzgStageNeed = '>12';
@@ -223,6 +270,8 @@ export function evaluateCell(sc: SweepCase, so: SweepOil, tOilC: number, f: numb
   out.scuffingSafety = rise > 0 ? (so.thetaS - tOil) / rise : Infinity;
   out.integralSafety = thetaIntC > 0 ? (so.thetaIntSOf[so.oilStage] as number) / thetaIntC : Infinity;
   out.verdict = VERDICT_CODES.indexOf(verdictCodeOf(codeFacts, policy));
+  out.lambdaGFMin = lgf;
+  out.micropittingSafety = so.lambdaGFP === null ? Infinity : lgf / so.lambdaGFP;
   return out;
 }
 
@@ -238,7 +287,9 @@ export function operatingMap(input: CaseInput, axes: MapAxes, prepared: SweepCas
   const scuffingSafety = new Float64Array(cells);
   const integralSafety = new Float64Array(cells);
   const verdict = new Uint8Array(cells);
-  const cell: CellResult = { lambdaMin: 0, scuffingSafety: 0, integralSafety: 0, verdict: 0 };
+  const lambdaGFMin = new Float64Array(cells);
+  const micropittingSafety = so.lambdaGFP === null ? null : new Float64Array(cells);
+  const cell: CellResult = { lambdaMin: 0, scuffingSafety: 0, integralSafety: 0, verdict: 0, lambdaGFMin: 0, micropittingSafety: 0 };
   for (let r = 0; r < nT; r++) {
     for (let c = 0; c < nL; c++) {
       evaluateCell(prepared, so, axes.temperatures_C[r] as number, axes.loadFractions[c] as number, cell);
@@ -247,7 +298,9 @@ export function operatingMap(input: CaseInput, axes: MapAxes, prepared: SweepCas
       scuffingSafety[k] = cell.scuffingSafety;
       integralSafety[k] = cell.integralSafety;
       verdict[k] = cell.verdict;
+      lambdaGFMin[k] = cell.lambdaGFMin;
+      if (micropittingSafety) micropittingSafety[k] = cell.micropittingSafety;
     }
   }
-  return { axes, lambdaMin, scuffingSafety, integralSafety, verdict };
+  return { axes, lambdaMin, scuffingSafety, integralSafety, verdict, lambdaGFMin, micropittingSafety, lambdaGFP: so.lambdaGFP };
 }

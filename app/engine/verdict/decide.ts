@@ -1,5 +1,5 @@
 import { cautionsFor } from './cautions';
-import { RULES, type RuleOutcome } from './rules';
+import { micropittingFinding, RULES, type RuleOutcome } from './rules';
 import { governingMethod, neededStage, verdictCodeOf } from './code';
 import { CHEMISTRY_WORDS } from './words';
 import type { Reason, Shortfall, Verdict, VerdictCode, VerdictFacts, VerdictPolicy } from './types';
@@ -11,6 +11,7 @@ import type { Reason, Shortfall, Verdict, VerdictCode, VerdictFacts, VerdictPoli
  * - `aw-suffices`: otherwise.
  * The oil's fit compares its chemistry, FZG stage and λ with what is needed; a boundary regime
  * rules out an R&O oil (anti-wear chemistry at least), and a λ shortfall asks for a grade, not EP.
+ * Micropitting is a finding of its own (meets, short, unknown); it never moves the code.
  */
 export function decideVerdict(f: VerdictFacts, p: VerdictPolicy): Verdict {
   const outcomes = RULES.map((r) => r(f, p)).filter((o): o is RuleOutcome => o !== null);
@@ -43,6 +44,7 @@ export function decideVerdict(f: VerdictFacts, p: VerdictPolicy): Verdict {
     governingMethod: governingMethod(f, p),
     chemistryNeed: code === 'beyond-oil' ? null : code === 'ep-warranted' ? 'extreme-pressure' : needsAw ? 'anti-wear' : 'r-and-o',
     neededStage: neededStage(f, p),
+    micropitting: micropittingFinding(f, p),
     reasons,
     cautions: cautionsFor(f, code),
     gradeAdvice: lambdaShort ? `λmin ${f.lambdaMin.toFixed(2)} < ${p.lambdaTarget}: see the grade finder for the lowest ISO VG that meets it.` : null,

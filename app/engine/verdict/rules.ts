@@ -1,4 +1,4 @@
-import type { Reason, Shortfall, VerdictFacts, VerdictPolicy } from './types';
+import type { MicropittingFinding, Reason, Shortfall, VerdictFacts, VerdictPolicy } from './types';
 import type { FzgStageNeed } from '../mesh/scuffing';
 import { governingMethod, isShockInBoundary, neededStage, usesFlash, usesIntegral } from './code';
 import { METHOD_WORDS, stageWords } from './words';
@@ -146,4 +146,45 @@ export const oilStageRule: Rule = (f, p) => {
   };
 };
 
-export const RULES: readonly Rule[] = [requiredStageRule, integralRule, shockInBoundaryRule, regimeRule, lambdaTargetRule, oilStageRule];
+const mpStageWords = (s: number | '>10') => (s === '>10' ? 'above 10 (beyond the test\'s scale)' : String(s));
+const mpNeedWords = (s: number | '>10') => (s === 5 ? '5 or below (the test\'s first stage)' : mpStageWords(s));
+
+/** The micropitting finding of ISO/TS 6336-22: Sλ against Sλ,min, or unknown without the oil's failure stage. */
+export function micropittingFinding(f: VerdictFacts, p: VerdictPolicy): MicropittingFinding {
+  const mp = f.micropitting;
+  if (mp === null || mp.safety === null) return 'unknown';
+  if (mp.safety >= p.micropittingSafetyMin) return 'meets';
+  // An oil rated above stage 10 has only a lower bound on Sλ; it meets a need within the scale.
+  return mp.safetyAtLeast && mp.requiredStage !== '>10' ? 'meets' : 'short';
+}
+
+/**
+ * Micropitting, a finding of its own: the oil's FVA 54 failure stage against the stage the duty needs.
+ * It never calls for EP chemistry; the reason says that some EP additive systems lower micropitting
+ * resistance, so an EP oil must show its micropitting class too (common practice).
+ */
+export const micropittingRule: Rule = (f, p) => {
+  const mp = f.micropitting;
+  if (mp === null) return null;
+  const finding = micropittingFinding(f, p);
+  const need = `the duty needs a micropitting failure stage of ${mpNeedWords(mp.requiredStage)} (FVA 54, C-GF gear) for Sλ ≥ ${p.micropittingSafetyMin}`;
+  const chemistry = 'An oil\'s micropitting resistance comes from its additive system, not its grade, and some EP additive systems lower it: an EP oil must show its micropitting class too; EP chemistry is no answer to micropitting.';
+  const figures = mp.lambdaGFP === null || mp.safety === null ? '' : `Sλ = λGF,min/λGFP = ${n2(mp.lambdaGFMin)}/${n2(mp.lambdaGFP)} = ${mp.safetyAtLeast ? 'at least ' : ''}${n2(mp.safety)}`;
+  const text =
+    finding === 'unknown'
+      ? `Micropitting: λGF,min = ${n2(mp.lambdaGFMin)}; this oil's micropitting failure stage is not given, so its margin is unknown; ${need}. Ask the supplier for it. ${chemistry}`
+      : finding === 'meets'
+        ? `Micropitting: ${figures} with this oil's failure stage ${mpStageWords(mp.oilStage ?? '>10')}; ${need}: it meets that. ${chemistry}`
+        : `Micropitting: ${figures} < ${p.micropittingSafetyMin} with this oil's failure stage ${mpStageWords(mp.oilStage ?? '>10')}; ${need}: a higher micropitting class, smoother flanks or a thicker film is needed. ${chemistry}`;
+  return {
+    reason: {
+      rule: 'micropitting.safety',
+      text,
+      threshold: `Sλ,min = ${p.micropittingSafetyMin} (policy; default [memory], weak); λGFP = 1.4 · WW · λGFT, WW = ${n2(mp.materialFactor)}`,
+      source: 'ISO/TS 6336-22 micropitting (λGFT from the FVA 54 test on the C-GF gear at 90 °C and 8.3 m/s) [memory]; effect of EP additives: common practice',
+    },
+    ...(finding === 'short' ? { oilFallsShort: 'micropitting' as const } : {}),
+  };
+};
+
+export const RULES: readonly Rule[] = [requiredStageRule, integralRule, shockInBoundaryRule, regimeRule, lambdaTargetRule, oilStageRule, micropittingRule];

@@ -3,6 +3,23 @@ import type { Chemistry, BaseOil } from '../oil/types';
 import type { FzgStageNeed } from '../mesh/scuffing';
 import type { ScuffingMethods } from '../mesh/types';
 
+/** The micropitting figures of one case with one oil (ISO/TS 6336-22). */
+export interface MicropittingFacts {
+  readonly lambdaGFMin: number;
+  /** λGFP at the oil's failure stage; null when the stage is unknown. */
+  readonly lambdaGFP: number | null;
+  readonly safety: number | null;
+  readonly safetyAtLeast: boolean;
+  /** The oil's failure stage (5…10, '>10'), null when unknown. */
+  readonly oilStage: number | '>10' | null;
+  /** The smallest failure stage with Sλ ≥ Sλ,min. */
+  readonly requiredStage: number | '>10';
+  readonly materialFactor: number;
+}
+
+/** Micropitting finding: meets Sλ,min, short (a higher class is needed), or unknown (no failure stage given). */
+export type MicropittingFinding = 'meets' | 'short' | 'unknown';
+
 export type VerdictCode = 'aw-suffices' | 'ep-warranted' | 'beyond-oil';
 export type OilFit = 'meets' | 'falls-short';
 
@@ -32,6 +49,8 @@ export interface VerdictFacts {
   readonly requiredStage: FzgStageNeed;
   readonly requiredStageIntegral: FzgStageNeed;
   readonly scuffingProbability: number;
+  /** Micropitting (null when not assessed). */
+  readonly micropitting: MicropittingFacts | null;
   /** Parts in the oil circuit (review gearPair.components). */
   readonly components: readonly string[];
   /** Other oils of the review, for change-of-oil cautions. */
@@ -48,6 +67,8 @@ export interface VerdictPolicy {
   readonly shockApplicationFactor: number;
   /** Which scuffing methods decide: flash, integral or both (the more demanding governs). */
   readonly scuffingMethods: ScuffingMethods;
+  /** Sλ,min of the micropitting method. */
+  readonly micropittingSafetyMin: number;
 }
 
 /** One scuffing method: flash temperature (ISO/TS 6336-20) or integral temperature (ISO/TS 6336-21). */
@@ -66,8 +87,8 @@ export interface Caution {
   readonly kind: 'standing' | 'triggered';
 }
 
-/** Why an oil falls short: its film (a grade matter), its FZG stage, or its chemistry. */
-export type Shortfall = 'film' | 'fzg-stage' | 'chemistry';
+/** Why an oil falls short: its film (a grade matter), its FZG stage, its chemistry, or its micropitting class. */
+export type Shortfall = 'film' | 'fzg-stage' | 'chemistry' | 'micropitting';
 
 export interface Verdict {
   readonly code: VerdictCode;
@@ -79,6 +100,8 @@ export interface Verdict {
   readonly chemistryNeed: 'r-and-o' | 'anti-wear' | 'extreme-pressure' | null;
   /** The FZG stage the duty needs by the policy's methods (13 = above the A/8.3/90 scale). */
   readonly neededStage: number;
+  /** The micropitting finding; it does not move the code (it is no reason for EP chemistry). */
+  readonly micropitting: MicropittingFinding;
   readonly reasons: Reason[];
   readonly cautions: Caution[];
   /** The grade advice when λ falls short (a viscosity matter, not a chemistry one). */

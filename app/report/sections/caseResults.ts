@@ -86,6 +86,7 @@ function keyFigures(u: Units, c: CaseResult): Row[] {
     ['λmin', `${formatNumber(c.lambdaMin, 3)}${at(c.lambdaMinPosition_mm)}`],
     ['Regime (at λmin)', c.regime ? REGIME_WORDS[c.regime] : DASH],
     ['λGF,min (ISO/TS 6336-22)', formatNumber(c.lambdaGFMin, 3)],
+    ['Micropitting Sλ (ISO/TS 6336-22)', c.micropitting ? (c.micropitting.safety === null ? 'stage not given' : `${c.micropitting.safetyAtLeast ? '≥ ' : ''}${formatNumber(c.micropitting.safety, 3)}`) : DASH],
     ['Friction coefficient μm', c.frictionCoefficient === null ? DASH : `${formatNumber(c.frictionCoefficient, 3)} (${c.frictionSource ?? DASH})`],
     ['Bulk temperature θM', u.fmt(c.bulkTemperature_C, 'temperature')],
     ['Flash temperature θfl,max', u.fmt(c.maxFlashTemperature_K, 'temperatureRise')],

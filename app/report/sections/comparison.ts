@@ -25,7 +25,7 @@ export function drawComparison(ctx: RecordContext): void {
       { text: `${VERDICT_WORDS[v.code]}\nmeets ${formatPercent(v.dutyShareMet)} of duty`, icon: v.code, bold: false },
     ]);
     L.table(columns, rows, { fontSize: 7.5 });
-    L.para('Each cell: the verdict for that case and oil, then SB (flash temperature) / SintS (integral temperature) / λmin, and the FZG A/8.3/90 stage the case needs. Icons: circle with tick — anti-wear chemistry suffices; triangle — EP chemistry warranted; octagon with cross — beyond oil chemistry.', {
+    L.para('Each cell: the verdict for that case and oil, then SB (flash temperature) / SintS (integral temperature) / λmin, the FZG A/8.3/90 stage the case needs, and the micropitting safety Sλ with the FVA 54 micropitting stage needed (ISO/TS 6336-22). Icons: circle with tick — anti-wear chemistry suffices; triangle — EP chemistry warranted; octagon with cross — beyond oil chemistry.', {
       size: 7.5,
       color: GREY,
     });
@@ -62,7 +62,9 @@ function cellOf(c: CaseResult | undefined): Cell {
   const fig = `SB ${formatNumber(c.scuffingSafety, 3)} / SintS ${formatNumber(c.integralSafety, 3)} / λmin ${formatNumber(c.lambdaMin, 2)}`;
   const st = (x: CaseResult['requiredFzgStage']) => (x === '>12' ? 'above 12' : String(x));
   const stage = c.requiredFzgStage === null ? '' : `\nneeds FZG ${st(c.requiredFzgStage)} (flash) / ${st(c.requiredFzgStageIntegral)} (integral)`;
-  if (!c.verdict) return `${DASH}\n${fig}${stage}`;
-  return { text: `${VERDICT_WORDS[c.verdict.code]}\n${fig}${stage}`, icon: c.verdict.code };
+  const mp = c.micropitting;
+  const micro = mp ? `\nmicropitting Sλ ${mp.safety === null ? 'unknown' : `${mp.safetyAtLeast ? '≥ ' : ''}${formatNumber(mp.safety, 3)}`}, needs stage ${mp.requiredFailureStage === '>10' ? 'above 10' : mp.requiredFailureStage}` : '';
+  if (!c.verdict) return `${DASH}\n${fig}${stage}${micro}`;
+  return { text: `${VERDICT_WORDS[c.verdict.code]}\n${fig}${stage}${micro}`, icon: c.verdict.code };
 }
 

@@ -1,5 +1,5 @@
 import type { ChangeFindingCode, ChangeSide, LimitCheck, Results, VerdictCode } from '../../review/results';
-import { CHANGE_WORDS, METHODS_WORDS, SHORTFALL_SHORT } from '../../review/vocabulary';
+import { CHANGE_WORDS, METHODS_WORDS, SHORTFALL_ORDER, SHORTFALL_SHORT } from '../../review/vocabulary';
 import type { RecordContext } from '../context';
 import { drawVerdictIcon } from '../icons';
 import { FONT_REGULAR } from '../layout';
@@ -94,7 +94,7 @@ export function drawNeedAndFindings(ctx: RecordContext, results: Results): void 
     ],
     results.verdicts.map((v) => [
       `${v.oil} (${v.oilChemistry})`,
-      v.code === 'beyond-oil' ? 'no oil gives the margin' : v.oilFit === 'meets' ? 'meets the need' : `short on ${(['chemistry', 'fzg-stage', 'film'] as const).filter((s) => v.shortfalls.includes(s)).map((s) => SHORTFALL_SHORT[s]).join(', ')}`,
+      v.code === 'beyond-oil' ? 'no oil gives the margin' : v.oilFit === 'meets' ? 'meets the need' : `short on ${SHORTFALL_ORDER.filter((s) => v.shortfalls.includes(s)).map((s) => SHORTFALL_SHORT[s]).join(', ')}`,
       `${stage(v.oilFzgStage)} / ${stage(v.neededFzgStage)}`,
       check(v, 'scuffingSafety'),
       check(v, 'integralSafety'),

@@ -26,7 +26,7 @@ export function materialRow(u: Units, member: string, m: GearPair['pinion']['mat
       u.fmt(p.thermalConductivity, 'conductivity', 3),
       u.fmt(p.density, 'density'),
       u.fmt(p.specificHeat, 'specificHeat', 3),
-      formatNumber(p.structuralFactorXW, 3),
+      `${formatNumber(p.structuralFactorXW, 3)} / ${formatNumber(p.micropittingFactorWW ?? 1, 3)}`,
     ];
   }
   return [
@@ -36,7 +36,7 @@ export function materialRow(u: Units, member: string, m: GearPair['pinion']['mat
     u.fmt(m.thermalConductivity_WmK, 'conductivity', 3),
     u.fmt(m.density_kgm3, 'density'),
     u.fmt(m.specificHeat_JkgK, 'specificHeat', 3),
-    formatNumber(m.structuralFactorXW, 3),
+    `${formatNumber(m.structuralFactorXW, 3)} / ${formatNumber(m.micropittingFactorWW ?? 1, 3)}`,
   ];
 }
 

@@ -1,6 +1,6 @@
-import type { CautionSummary, ChangeFinding, ChangeFindingCode, DutyNeed, GradeFinderResult, LimitCheck, OverallVerdict, PlanetaryMesh, VerdictCode } from '../results';
+import type { CautionSummary, ChangeFinding, ChangeFindingCode, DutyNeed, GradeFinderResult, LimitCheck, MicropittingStageNeeded, OverallVerdict, PlanetaryMesh, VerdictCode } from '../results';
 import { stageNumber, stageOf } from '../overall';
-import { MESH_WORDS } from '../vocabulary';
+import { MESH_WORDS, SHORTFALL_ORDER } from '../vocabulary';
 
 /** One mesh's per-oil verdicts, as the per-pair pipeline gives them. */
 export interface MeshVerdicts {
@@ -37,7 +37,7 @@ export function governAcrossMeshes(meshes: readonly MeshVerdicts[]): GovernedVer
       if (a > b || (a === b && (sa > sb || (sa === sb && x.v.dutyShareMet < gov.v.dutyShareMet)))) gov = x;
     }
     const fit = mine.every((x) => x.v.oilFit === 'meets') ? 'meets' : 'falls-short';
-    const shortfalls = (['chemistry', 'fzg-stage', 'film'] as const).filter((k) => mine.some((x) => x.v.shortfalls.includes(k)));
+    const shortfalls = SHORTFALL_ORDER.filter((k) => mine.some((x) => x.v.shortfalls.includes(k)));
     const worst = new Map<LimitCheck['quantity'], OverallVerdict['checks'][number]>();
     for (const x of mine) {
       for (const k of x.v.checks) {
@@ -52,6 +52,8 @@ export function governAcrossMeshes(meshes: readonly MeshVerdicts[]): GovernedVer
         oilFit: fit,
         shortfalls,
         neededFzgStage: stageOf(Math.max(...mine.map((x) => stageNumber(x.v.neededFzgStage)))),
+        micropitting: mine.some((x) => x.v.micropitting === 'short') ? 'short' : mine.some((x) => x.v.micropitting === 'unknown') ? 'unknown' : 'meets',
+        neededMicropittingStage: mostDemandingMicropitting(mine.map((x) => x.v.neededMicropittingStage)),
         checks: [...worst.values()],
         dutyShareMet: Math.min(...mine.map((x) => x.v.dutyShareMet)),
         summary: `Governing mesh: ${MESH_WORDS[gov.mesh]}. ${gov.v.summary}`,
@@ -101,6 +103,7 @@ export function needAcrossMeshes(meshes: ReadonlyArray<{ mesh: PlanetaryMesh; ne
     fzgStageFlash: maxStage((n) => n.fzgStageFlash),
     fzgStageIntegral: maxStage((n) => n.fzgStageIntegral),
     isoVG: vgs.every((v): v is number => v !== null) ? Math.max(...vgs) : null,
+    micropittingStage: mostDemandingMicropitting(withNeed.map((m) => m.need.micropittingStage)),
     governingLoadCase: `${gov.need.governingLoadCase} (${MESH_WORDS[gov.mesh]} mesh)`,
     statement: `${gov.need.statement} The ${MESH_WORDS[gov.mesh]} mesh governs.`,
   };
@@ -138,4 +141,11 @@ export function cautionsAcrossMeshes(meshes: ReadonlyArray<{ mesh: PlanetaryMesh
   }
   const all = [...byId.values()];
   return [...all.filter((k) => k.applies), ...all.filter((k) => !k.applies)];
+}
+
+/** The highest micropitting stage needed ('>10' above any number); null when none is known. */
+function mostDemandingMicropitting(xs: ReadonlyArray<MicropittingStageNeeded | null>): MicropittingStageNeeded | null {
+  const known = xs.filter((x): x is MicropittingStageNeeded => x !== null);
+  if (known.length === 0) return null;
+  return known.includes('>10') ? '>10' : Math.max(...(known as number[]));
 }

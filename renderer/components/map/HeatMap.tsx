@@ -41,8 +41,8 @@ function HeatMapView({ map, label, scuffingSafetyMin, lambdaTarget, caseTemperat
   const scheme = useColorScheme();
   const height = Math.round(Math.min(420, Math.max(240, width * 0.7)));
   const contours = useMemo(() => {
-    const { sb, lambda } = mapContours(map, scuffingSafetyMin, lambdaTarget);
-    return { sb: chainSegments(sb), lambda: chainSegments(lambda) };
+    const { sb, lambda, micropitting } = mapContours(map, scuffingSafetyMin, lambdaTarget);
+    return { sb: chainSegments(sb), lambda: chainSegments(lambda), micropitting: chainSegments(micropitting) };
   }, [map, scuffingSafetyMin, lambdaTarget]);
   const point = useMemo(() => casePoint(map, caseTemperature_C), [map, caseTemperature_C]);
   const summary = useMemo(() => mapSummary(map, point.cell), [map, point.cell]);
@@ -83,7 +83,7 @@ function HeatMapView({ map, label, scuffingSafetyMin, lambdaTarget, caseTemperat
   };
 
   return (
-    <figure className="heatmap" data-map={map.oil} data-rows={summary.rows} data-cols={summary.cols} data-summary={JSON.stringify(summary)} data-contours={JSON.stringify({ sb: contours.sb.length, lambda: contours.lambda.length })}>
+    <figure className="heatmap" data-map={map.oil} data-rows={summary.rows} data-cols={summary.cols} data-summary={JSON.stringify(summary)} data-contours={JSON.stringify({ sb: contours.sb.length, lambda: contours.lambda.length, micropitting: contours.micropitting.length })}>
       <figcaption>{label}</figcaption>
       <div
         ref={box}

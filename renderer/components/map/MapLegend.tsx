@@ -33,6 +33,10 @@ export function MapLegend({ scuffingSafetyMin, lambdaTarget, casePoint }: Props)
         λmin = λ target = {levelText(lambdaTarget)} (dashed line)
       </li>
       <li>
+        <svg width="28" height="10" aria-hidden="true" className="map-legend__line"><line x1="1" y1="5" x2="27" y2="5" className="map-legend__micropitting" /></svg>
+        λGF,min = λGFP, the micropitting limit of each oil whose micropitting stage is given (dotted line)
+      </li>
+      <li>
         <svg width="28" height="18" aria-hidden="true" className="map-legend__line"><circle cx="14" cy="9" r="6" className="map-legend__ring" /></svg>
         this load case: {casePoint}
       </li>

@@ -22,7 +22,7 @@ export interface HeatMapDrawing {
   readonly units: UnitSystem;
   readonly palette: Palette;
   /** The SB = SB,min and λ = target lines as polylines in grid indices (chainSegments). */
-  readonly contours: { readonly sb: readonly GridPoint[][]; readonly lambda: readonly GridPoint[][] };
+  readonly contours: { readonly sb: readonly GridPoint[][]; readonly lambda: readonly GridPoint[][]; readonly micropitting?: readonly GridPoint[][] };
   /** The case's own point as fractional indices. */
   readonly point: { readonly r: number; readonly c: number; readonly inside: boolean };
   readonly cursor: Cell | null;
@@ -128,6 +128,12 @@ export function drawHeatMap(ctx: CanvasRenderingContext2D, d: HeatMapDrawing): v
   ctx.lineWidth = 2.5;
   stroke(d.contours.sb, p.fg, []);
   stroke(d.contours.lambda, p.lambda, [8, 5]);
+  // λGF,min = λGFP (micropitting): dotted, in the foreground colour over its own halo.
+  const mp = d.contours.micropitting ?? [];
+  ctx.lineWidth = 4.5;
+  stroke(mp, p.surface, [1, 5]);
+  ctx.lineWidth = 2.5;
+  stroke(mp, p.fg, [1, 5]);
   ctx.setLineDash([]);
 
   // The case's own point: a ring (dashed at the edge when its temperature is off the map).

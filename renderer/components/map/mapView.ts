@@ -58,11 +58,16 @@ export function casePoint(m: OperatingMapResult, oilTemperature_C: number): { r:
   return { r, c, cell: clampCell(m, { r: Math.round(r), c: Math.round(c) }), inside };
 }
 
-/** The SB = SB,min and λ = λ target lines (unbounded SB lies above any level). */
-export function mapContours(m: OperatingMapResult, scuffingSafetyMin: number, lambdaTarget: number): { sb: Segment[]; lambda: Segment[] } {
+/**
+ * The SB = SB,min and λ = λ target lines (unbounded SB lies above any level), and λGF,min = λGFP, the
+ * micropitting line (ISO/TS 6336-22), where the oil's micropitting failure stage is given.
+ */
+export function mapContours(m: OperatingMapResult, scuffingSafetyMin: number, lambdaTarget: number): { sb: Segment[]; lambda: Segment[]; micropitting: Segment[] } {
+  const lgfp = m.lambdaGFP;
   return {
     sb: contourSegments(rowsOf(m), colsOf(m), (r, c) => m.scuffingSafety[r]?.[c] ?? Number.POSITIVE_INFINITY, scuffingSafetyMin),
     lambda: contourSegments(rowsOf(m), colsOf(m), (r, c) => m.lambdaMin[r]?.[c] ?? Number.NaN, lambdaTarget),
+    micropitting: lgfp === null ? [] : contourSegments(rowsOf(m), colsOf(m), (r, c) => m.lambdaGFMin[r]?.[c] ?? Number.NaN, lgfp),
   };
 }
 

@@ -1,6 +1,6 @@
 import { memo, useEffect, useId, useMemo, useState } from 'react';
-import type { PlanetaryMesh, Results } from '../../../app/review/results';
-import { MESH_WORDS } from '../../../app/review/vocabulary';
+import type { CaseResult, PlanetaryMesh, Results } from '../../../app/review/results';
+import { MESH_WORDS, MICROPITTING_LABELS } from '../../../app/review/vocabulary';
 import type { Review } from '../../../app/review/schema';
 import type { EhlPointRequest, EhlPointSpec } from '../../../app/review/ehlPoint';
 import { FilmDetail } from '../film/FilmDetail';
@@ -105,6 +105,8 @@ function MeshPanelView({ results, review = null, limits, units }: Props) {
         <QuantityRow def="maxFlashTemperature" value={c.maxFlashTemperature_K} units={units} sig={3} />
         <QuantityRow def="maxContactTemperature" value={c.maxContactTemperature_C} units={units} sig={3} />
         <QuantityRow def="scuffingTemperature" value={c.scuffingTemperature_C} units={units} sig={3} />
+        <QuantityRow def="micropittingSafety" value={c.micropitting?.safety ?? null} units={units} sig={3} testId="mesh-micropitting-safety" />
+        <QuantityRow def="micropittingFinding" value={micropittingWords(c)} units={units} testId="mesh-micropitting-finding" />
       </dl>
       <div className="mesh-grid">
         {specs.map((s) => (
@@ -114,6 +116,14 @@ function MeshPanelView({ results, review = null, limits, units }: Props) {
       {film && review ? <FilmDetail review={review} point={film} units={units} onClose={() => setFilm(null)} /> : null}
     </Panel>
   );
+}
+
+/** Pass or fail against Sλ,min, in words (never colour alone). */
+export function micropittingWords(c: CaseResult): string | null {
+  const m = c.micropitting;
+  if (!m) return null;
+  const limit = m.safety === null ? '' : ` (Sλ ${m.safety >= m.safetyMin ? '≥' : '<'} ${m.safetyMin})`;
+  return `${MICROPITTING_LABELS[m.finding]}${limit}`;
 }
 
 /** Re-renders only when its results or units change, not on every keystroke in the inputs. */

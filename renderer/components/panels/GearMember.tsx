@@ -54,6 +54,7 @@ export function GearMember({ member, title, root = 'gearPair', internal = false 
           <NumberField path={[...p, 'material', 'density_kgm3']} {...inputProps(`${root}.${member}.material.density_kgm3`)} />
           <NumberField path={[...p, 'material', 'specificHeat_JkgK']} {...inputProps(`${root}.${member}.material.specificHeat_JkgK`)} />
           <NumberField path={[...p, 'material', 'structuralFactorXW']} {...inputProps(`${root}.${member}.material.structuralFactorXW`)} />
+          <NumberField path={[...p, 'material', 'micropittingFactorWW']} {...inputProps(`${root}.${member}.material.micropittingFactorWW`)} optional hint="Empty: 1, case-carburized steel; through-hardened 0.5, nitrided 1.5 (ISO/TS 6336-22, recalled)" />
         </div>
       ) : null}
     </fieldset>

@@ -11,6 +11,8 @@ import { TextField } from '../fields/TextField';
 import { Quantity } from '../Quantity';
 
 const STAGES: readonly (readonly [FzgStage, string])[] = [...FZG_STAGES.map((s) => [s, String(s)] as const), ['>12', INPUT_LABELS['oils[].fzgFailureStage']?.words?.['>12'] ?? '>12'] as const];
+/** FVA 54 micropitting stages on the C-GF gear, and "not given" (the field left out). */
+const MICROPITTING_STAGES: readonly (readonly [number | string, string])[] = [['', 'not given'], ...[5, 6, 7, 8, 9, 10].map((s) => [s, String(s)] as const), ['>10', 'above 10']];
 
 /** One candidate oil. */
 export function OilEditor({ index, summary }: { readonly index: number; readonly summary: OilSummary | null }) {
@@ -39,6 +41,14 @@ export function OilEditor({ index, summary }: { readonly index: number; readonly
         <SelectField path={[...p, 'baseOil']} {...inputProps('oils[].baseOil')} options={BASE_OILS.map((b) => [b, BASE_OIL_WORDS[b]] as const)} />
         <SelectField path={[...p, 'chemistry']} {...inputProps('oils[].chemistry')} options={CHEMISTRIES.map((c) => [c, CHEMISTRY_WORDS[c]] as const)} />
         <SelectField path={[...p, 'fzgFailureStage']} {...inputProps('oils[].fzgFailureStage')} options={STAGES} />
+        <SelectField
+          path={[...p, 'micropittingFailureStage']}
+          {...inputProps('oils[].micropittingFailureStage')}
+          hint="Data sheets' micropitting classes: low ≤ 7, medium 8–9, high ≥ 10 (common practice)"
+          options={MICROPITTING_STAGES}
+          value={(getIn(draft, [...p, 'micropittingFailureStage']) as number | string | undefined) ?? ''}
+          onValue={(v) => dispatch({ type: 'set', path: [...p, 'micropittingFailureStage'], value: v === '' ? undefined : v })}
+        />
         <NumberField path={[...p, 'pressureViscosity_1perGPa']} {...inputProps('oils[].pressureViscosity_1perGPa')} optional hint="Empty: estimated from the base oil" />
       </div>
       {summary ? (

@@ -28,6 +28,7 @@ export function PolicyPanel() {
         <NumberField path={[...p, 'temperatureRange_C', 0]} {...inputProps('policy.temperatureRange_C[0]')} />
         <NumberField path={[...p, 'temperatureRange_C', 1]} {...inputProps('policy.temperatureRange_C[1]')} />
         <NumberField path={[...p, 'shockApplicationFactor']} {...inputProps('policy.shockApplicationFactor')} />
+        <NumberField path={[...p, 'micropittingSafetyMin']} {...inputProps('policy.micropittingSafetyMin')} hint="ISO/TS 6336-22; default 1 (recalled, weak)" />
       </div>
       <fieldset className="subgroup">
         <legend>Film and friction</legend>

@@ -4,6 +4,7 @@ import { MESH_WORDS } from '../../../app/review/vocabulary';
 import type { UnitSystem } from '../../units/units';
 import { Quantity } from '../Quantity';
 import { VerdictBadge } from '../VerdictBadge';
+import { micropittingWords } from '../mesh/MeshPanel';
 import { GradeFinder } from './GradeFinder';
 import { Panel } from './Panel';
 
@@ -75,6 +76,10 @@ function SideBySidePanelView({ results, units }: { readonly results: Results | n
                         <dd data-testid="sbs-fzg">{stage(c.verdict?.neededFzgStage ?? c.requiredFzgStage)}</dd>
                         <dt>flash · integral</dt>
                         <dd data-testid="sbs-fzg-methods">{stage(c.requiredFzgStage)} · {stage(c.requiredFzgStageIntegral)}</dd>
+                        <dt>Sλ micropitting</dt>
+                        <dd><Quantity def="micropittingSafety" value={c.micropitting?.safety ?? null} units={units} sig={3} testId="sbs-micropitting" /> <Quantity def="micropittingFinding" value={micropittingWords(c)} units={units} testId="sbs-micropitting-finding" /></dd>
+                        <dt>Micropitting stage needed</dt>
+                        <dd><Quantity def="requiredMicropittingStage" value={c.micropitting ? (c.micropitting.requiredFailureStage === '>10' ? 'above 10' : String(c.micropitting.requiredFailureStage)) : null} units={units} testId="sbs-micropitting-stage" /></dd>
                       </dl>
                       {c.verdict ? (
                         <p className="sbs__need">

@@ -1,15 +1,14 @@
 import type { OverallVerdict } from '../../../app/review/results';
-import { SHORTFALL_SHORT } from '../../../app/review/vocabulary';
+import { SHORTFALL_ORDER, SHORTFALL_SHORT } from '../../../app/review/vocabulary';
 import { CheckChip } from './CheckChip';
 
 const stage = (s: number | '>12') => (s === '>12' || s > 12 ? 'above 12' : String(s));
-const ORDER = ['chemistry', 'fzg-stage', 'film'] as const;
 
 /** An oil's plain finding against the need: meets it, or short on chemistry / FZG stage / film; its own stage and chemistry beside what is needed. */
 export function OilFindingHead({ verdict: v }: { readonly verdict: OverallVerdict }) {
   const meets = v.oilFit === 'meets';
   const beyond = v.code === 'beyond-oil';
-  const word = beyond ? 'No oil gives the margin' : meets ? 'Meets the need' : `Short on ${ORDER.filter((s) => v.shortfalls.includes(s)).map((s) => SHORTFALL_SHORT[s]).join(', ')}`;
+  const word = beyond ? 'No oil gives the margin' : meets ? 'Meets the need' : `Short on ${SHORTFALL_ORDER.filter((s) => v.shortfalls.includes(s)).map((s) => SHORTFALL_SHORT[s]).join(', ')}`;
   return (
     <div className="oil-finding">
       <span className={`fbadge fbadge--${beyond ? 'beyond' : meets ? 'meets' : 'short'}`} data-testid="oil-finding" data-fit={v.oilFit}>

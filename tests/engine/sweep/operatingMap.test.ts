@@ -47,6 +47,22 @@ describe('operating map (oil temperature × load)', () => {
     }
     expect(decideVerdict).toBeTypeOf('function');
   });
+  it('micropitting: a cell at the case temperature and 100 % load gives the case\'s λGF,min and Sλ (both film formulas)', () => {
+    for (const filmFormula of ['dowson-higginson', 'pan-hamrock'] as const) {
+      for (let li = 0; li < r.loadCases.length; li++) {
+        const base = input(li, 1);
+        const oil = { ...(base.oil as NonNullable<typeof base.oil>), micropittingFailureStage: 8 };
+        const inp = { ...base, oil, policy: { ...base.policy, filmFormula } };
+        const t = r.loadCases[li]?.oilTemperature_C as number;
+        const map = operatingMap(inp, { temperatures_C: Float64Array.of(t), loadFractions: Float64Array.of(1) });
+        const a = analyseCase(inp);
+        expect(Math.abs((map.lambdaGFMin[0] as number) / (a.micropitting?.lambdaGFMin as number) - 1)).toBeLessThan(1e-9);
+        expect(Math.abs((map.micropittingSafety?.[0] as number) / (a.micropitting?.safety as number) - 1)).toBeLessThan(1e-9);
+        expect(map.lambdaGFP).toBeCloseTo(a.micropitting?.lambdaGFP as number, 12);
+      }
+    }
+    expect(operatingMap(input(0, 1), mapAxes([20, 100], 2, 2)).micropittingSafety).toBeNull(); // the demo oils give no micropitting stage
+  });
   it('λ falls with temperature and SB falls with load across the grid', () => {
     const axes = mapAxes([20, 100], 9, 8);
     const map = operatingMap(input(0, 1), axes);

@@ -3,7 +3,7 @@ import { decideVerdict } from '../../../app/engine/verdict/decide';
 import type { VerdictFacts, VerdictPolicy } from '../../../app/engine/verdict/types';
 
 /** Policy defaults: AW floor FZG 10 (DIN 51524-2 HLP), EP floor FZG 12 (DIN 51517-3 CLP), SB,min 1.5, SintS,min 1.8. */
-const policy: VerdictPolicy = { lambdaTarget: 1, scuffingSafetyMin: 1.5, integralSafetyMin: 1.8, antiWearOilFzgStage: 10, epOilFzgStage: 12, shockApplicationFactor: 1.75, scuffingMethods: 'both' };
+const policy: VerdictPolicy = { lambdaTarget: 1, scuffingSafetyMin: 1.5, integralSafetyMin: 1.8, antiWearOilFzgStage: 10, epOilFzgStage: 12, shockApplicationFactor: 1.75, scuffingMethods: 'both', micropittingSafetyMin: 1 };
 
 // Synthetic facts for the rule logic, not a gear: the expected codes follow from the published
 // floors above (and common practice where a rule says so), which is what these tests check.
@@ -32,6 +32,7 @@ const base: VerdictFacts = {
   requiredStage: 7,
   requiredStageIntegral: 6,
   scuffingProbability: 0.001,
+  micropitting: null,
   components: [],
   otherOils: [],
   role: 'proposed',
@@ -121,5 +122,32 @@ describe('cautions', () => {
     expect(kind('oxidation')).toBe('triggered');
     expect(kind('flushing')).toBe('triggered');
     expect(kind('food-contact')).toBe('standing');
+  });
+});
+
+describe('micropitting: a finding of its own, never a reason for EP (ISO/TS 6336-22 [memory]; EP caveat common practice)', () => {
+  const mp = (safety: number | null, oilStage: number | '>10' | null, requiredStage: number | '>10' = 8) =>
+    with_({ micropitting: { lambdaGFMin: 0.3, lambdaGFP: safety === null ? null : 0.3 / safety, safety, safetyAtLeast: oilStage === '>10', oilStage, requiredStage, materialFactor: 1 } });
+  it('short: a shortfall of the oil, and the code is the one without micropitting', () => {
+    const v = decideVerdict(mp(0.8, 7), policy);
+    expect(v.micropitting).toBe('short');
+    expect(v.shortfalls).toContain('micropitting');
+    expect(v.oilFit).toBe('falls-short');
+    expect(v.code).toBe(decideVerdict(base, policy).code);
+    expect(v.reasons.find((r) => r.rule === 'micropitting.safety')?.text).toMatch(/some EP additive systems lower it/);
+  });
+  it('meets at Sλ ≥ Sλ,min; an oil rated above 10 meets a need within the scale on its lower bound', () => {
+    expect(decideVerdict(mp(1.2, 9), policy).micropitting).toBe('meets');
+    expect(decideVerdict(mp(0.9, '>10', 9), policy).micropitting).toBe('meets');
+    expect(decideVerdict(mp(0.9, '>10', '>10'), policy).micropitting).toBe('short');
+  });
+  it('unknown without a stage: no shortfall, and the reason asks for the stage', () => {
+    const v = decideVerdict(mp(null, null), policy);
+    expect(v.micropitting).toBe('unknown');
+    expect(v.shortfalls).not.toContain('micropitting');
+    expect(v.reasons.find((r) => r.rule === 'micropitting.safety')?.text).toMatch(/not given/);
+  });
+  it('a policy minimum of 0.7 turns the Sλ = 0.8 oil into one that meets', () => {
+    expect(decideVerdict(mp(0.8, 7), { ...policy, micropittingSafetyMin: 0.7 }).micropitting).toBe('meets');
   });
 });

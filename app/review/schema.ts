@@ -9,6 +9,13 @@ import { BASE_OILS, CHEMISTRIES } from '../engine/oil/types';
  */
 export const REVIEW_FORMAT = 'flankfilm.review';
 export const REVIEW_VERSION = 1;
+/**
+ * The most points along the path a review computes in all (load cases × oils × policy.pathPoints,
+ * at least one oil counted): 100 analyses at the default 201 points. The operating maps of the
+ * record sweep the same points 3600 times, so this bounds the record's time and memory as well
+ * (tests/cli/resourceBounds.test.ts measures the largest reviews accepted).
+ */
+export const MAX_REVIEW_POINTS = 20_100;
 
 const finite = () => z.number().refine(Number.isFinite, { message: 'must be a finite number' });
 const positive = (max: number, unit: string) =>
@@ -165,6 +172,15 @@ export const reviewSchema = z.strictObject({
   oils: z.array(oilSchema).max(10),
   policy: policySchema.default(() => policySchema.parse({})),
   signoff: signoffSchema.optional(),
+}).superRefine((r, ctx) => {
+  const work = r.loadCases.length * Math.max(1, r.oils.length) * r.policy.pathPoints;
+  if (work > MAX_REVIEW_POINTS) {
+    ctx.addIssue({
+      code: 'custom',
+      path: ['policy', 'pathPoints'],
+      message: `load cases × oils × path points = ${r.loadCases.length} × ${Math.max(1, r.oils.length)} × ${r.policy.pathPoints} = ${work}, more than the ${MAX_REVIEW_POINTS} a review may compute (so that its results and its record finish in under 30 s and 1 GB): use fewer load cases, oils or path points`,
+    });
+  }
 });
 
 /** A review as written in a file (defaults may be absent). */

@@ -244,6 +244,17 @@ describe('another engine version: its own word and exit code, never "match"', ()
     expect(r.out).not.toMatch(/^match/m);
   }, T);
 
+  it('control characters in the record\'s text never reach the terminal', async () => {
+    const out = Buffer.from(crusher);
+    const e = PdfEdit.parse(crusher);
+    const n = Number(/\/FlankfilmEngineVersion (\d+) 0 R/.exec(e.body(e.ref('Info')))![1]);
+    const at = out.indexOf(`\n${n} 0 obj\n(${ENGINE_VERSION})`) + `\n${n} 0 obj\n(`.length;
+    out.write('\u001b[2J\u0007', at, 'latin1'); // same length: the offsets stay valid
+    const r = await cli('verify', put('escape.pdf', out));
+    expect([3, 4]).toContain(r.code);
+    expect(r.out + r.err).not.toMatch(/[\u0007\u001b]/);
+  }, T);
+
   it('still exit 3 when the attachment does not fit the fingerprint', async () => {
     const e = PdfEdit.parse(olderEngine(crusher));
     const file = e.find(/\/Type \/EmbeddedFile\b/)[0]!;

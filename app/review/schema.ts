@@ -37,12 +37,13 @@ const atLeast = (min: number, max: number, unit: string) => positive(max, unit).
 export const materialSchema = z.union([
   z.enum(MATERIAL_PRESETS),
   z.strictObject({
-    youngsModulus_GPa: positive(1000, 'GPa'),
+    // Least values: below any gear material (polymers included), so a 1e-320 cannot underflow the contact.
+    youngsModulus_GPa: atLeast(0.5, 1000, 'GPa'),
     poissonRatio: finite().gte(0).lt(0.5),
-    thermalConductivity_WmK: positive(1000, 'W/(m·K)'),
-    density_kgm3: positive(30000, 'kg/m³'),
-    specificHeat_JkgK: positive(10000, 'J/(kg·K)'),
-    structuralFactorXW: positive(3, ''),
+    thermalConductivity_WmK: atLeast(0.1, 1000, 'W/(m·K)'),
+    density_kgm3: atLeast(500, 30000, 'kg/m³'),
+    specificHeat_JkgK: atLeast(100, 10000, 'J/(kg·K)'),
+    structuralFactorXW: atLeast(0.1, 3, ''),
   }),
 ]);
 
@@ -106,7 +107,7 @@ export const oilSchema = z
     baseOil: z.enum(BASE_OILS),
     chemistry: z.enum(CHEMISTRIES),
     fzgFailureStage: fzgStageSchema,
-    pressureViscosity_1perGPa: positive(100, '1/GPa').optional(),
+    pressureViscosity_1perGPa: atLeast(1, 100, '1/GPa').optional(),
   })
   .superRefine((o, ctx) => {
     if (o.kv100_mm2s >= o.kv40_mm2s) {

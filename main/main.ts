@@ -7,7 +7,7 @@ import { app, BrowserWindow, Menu, session } from 'electron';
 import { join } from 'node:path';
 import { CALL_NAMES, type CallName } from '../app/bridge/contract';
 import { reviewPathFromArgv } from './argv';
-import { MENU_CHANNEL } from './channels';
+import { MENU_CHANNEL, PROGRESS_CHANNEL } from './channels';
 import { createCloseGuard } from './closeGuard';
 import { electronDialogs } from './dialogs';
 import { handle, handleDrop } from './ipc';
@@ -124,7 +124,8 @@ async function start(): Promise<void> {
     clock: () => new Date(),
     appVersion: app.getVersion(),
     platform: process.platform,
-    report: createReportPort(paths.fonts),
+    // The record is made in a worker thread: main's event loop (and so the window) stays free.
+    report: createReportPort(paths.fonts, { file: join(__dirname, 'recordWorker.cjs') }),
     readOnlyDirs: [paths.demo],
     onDocumentState: (state) => {
       guard.setState(state);
@@ -132,6 +133,7 @@ async function start(): Promise<void> {
       win?.setDocumentEdited(state.dirty);
     },
     onRecentChanged: rebuildMenu,
+    onExportProgress: (p) => win?.webContents.send(PROGRESS_CHANNEL, p),
   });
   const impls = mainImpls(services);
   for (const name of CALL_NAMES) register(impls, name);

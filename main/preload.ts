@@ -5,8 +5,8 @@
  * cannot require anything but 'electron'.
  */
 import { contextBridge, ipcRenderer, webUtils } from 'electron';
-import { CALL_NAMES, menuEvent, type Bridge, type MenuCommand } from '../app/bridge/contract';
-import { channelOf, DROP_CHANNEL, MENU_CHANNEL } from './channels';
+import { CALL_NAMES, menuEvent, progressEvent, type Bridge, type MenuCommand, type ProgressEvent } from '../app/bridge/contract';
+import { channelOf, DROP_CHANNEL, MENU_CHANNEL, PROGRESS_CHANNEL } from './channels';
 
 
 type MenuListener = (e: { command: MenuCommand; handle?: string }) => void;
@@ -29,11 +29,22 @@ export function buildBridge(ipc: Pick<typeof ipcRenderer, 'invoke' | 'on'>, path
     if (listeners.size === 0) early.push(e);
     else listeners.forEach((l) => l(e));
   });
+  const progress = new Set<(e: ProgressEvent) => void>();
+  ipc.on(PROGRESS_CHANNEL, (_event, payload: unknown) => {
+    const parsed = progressEvent.safeParse(payload);
+    if (parsed.success) progress.forEach((l) => l({ done: parsed.data.done, total: parsed.data.total }));
+  });
   const calls = Object.fromEntries(
     CALL_NAMES.map((name) => [name, (args: unknown) => ipc.invoke(channelOf(name), args ?? {}).catch((e: unknown) => Promise.reject(cleanIpcError(e)))]),
   );
   return {
-    ...(calls as Omit<Bridge, 'onMenu' | 'handleForFile'>),
+    ...(calls as unknown as Omit<Bridge, 'onMenu' | 'onProgress' | 'handleForFile'>),
+    onProgress(listener: (e: ProgressEvent) => void) {
+      progress.add(listener);
+      return () => {
+        progress.delete(listener);
+      };
+    },
     onMenu(listener: MenuListener) {
       listeners.add(listener);
       early.splice(0).forEach((e) => listener(e));

@@ -132,6 +132,8 @@ export function App({ bridge }: { readonly bridge: Bridge }) {
         onRecord={(paper) => void actions.exportRecord(paper)}
         onCsv={() => void actions.exportCsv()}
         onSign={() => setSigning(true)}
+        progress={actions.progress}
+        onCancelRecord={actions.cancelRecord}
       />
       {recovery ? <RecoveryPrompt savedAt={recovery.savedAt} name={recovery.name} onRecover={() => recover(recovery)} onDiscard={discard} /> : null}
       {info ? <InfoDialog title={info.title} lines={info.lines} onClose={() => setInfo(null)} /> : null}

@@ -1,6 +1,7 @@
 // `npm run build`: bundle the Electron main process and preload, the CLI, and the renderer into
 // dist/. Builds only; launches nothing.
 //   dist/main/main.cjs     Electron main (node, cjs); electron and runtime dependencies stay external
+//   dist/main/recordWorker.cjs  the record export's worker thread (main/recordWorker.ts)
 //   dist/main/preload.cjs  the sandboxed preload: one self-contained file (a sandboxed preload can
 //                          require only 'electron'), so only electron is external
 //   dist/cli/flankfilm.cjs the `flankfilm` command, with a node shebang
@@ -32,6 +33,7 @@ rmSync('dist/main', { recursive: true, force: true });
 rmSync('dist/cli', { recursive: true, force: true });
 
 await build({ ...common, ...importMetaUrl, entryPoints: ['main/main.ts'], outfile: 'dist/main/main.cjs', target: 'node22', external: ['electron', ...external] });
+await build({ ...common, ...importMetaUrl, entryPoints: ['main/recordWorker.ts'], outfile: 'dist/main/recordWorker.cjs', target: 'node22', external: ['electron', ...external] });
 await build({ ...common, entryPoints: ['main/preload.ts'], outfile: 'dist/main/preload.cjs', target: 'chrome130', external: ['electron'], minify: true });
 // The entry's own `#!/usr/bin/env node` line is kept by esbuild; the banner goes after it.
 await build({ ...common, ...importMetaUrl, entryPoints: ['app/cli/main.ts'], outfile: 'dist/cli/flankfilm.cjs', target: 'node20', external });

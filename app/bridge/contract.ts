@@ -32,6 +32,8 @@ export const contract = {
     args: z.strictObject({ text: z.string().max(2_000_000), paper: z.enum(['a4', 'letter']), handle: documentHandle.nullable().optional() }),
     result: z.union([z.object({ canceled: z.literal(false), name: fileName, bytes: z.number().int() }), canceled]),
   },
+  /** Stop the record export under way (its worker is ended; nothing is written); canceled: whether one was running. */
+  cancelExport: { args: z.object({}), result: z.object({ canceled: z.boolean() }) },
   /** Write the along-path CSV of every case. */
   exportCsv: {
     args: z.strictObject({ text: z.string().max(2_000_000), handle: documentHandle.nullable().optional() }),
@@ -69,9 +71,15 @@ export const MENU_COMMANDS = ['new', 'open', 'save', 'save-as', 'export-record',
 export type MenuCommand = (typeof MENU_COMMANDS)[number];
 export const menuEvent = z.object({ command: z.enum(MENU_COMMANDS), handle: documentHandle.optional() });
 
+/** Progress of a record export, pushed by main while its worker runs. */
+export const progressEvent = z.object({ done: z.number().int().nonnegative(), total: z.number().int().positive() });
+export type ProgressEvent = z.output<typeof progressEvent>;
+
 /** The bridge object the preload exposes as `window.flankfilm`: one function per call, plus the menu event. */
 export type Bridge = { [K in CallName]: (args: CallArgs<K>) => Promise<CallResult<K>> } & {
   onMenu(listener: (e: z.output<typeof menuEvent>) => void): () => void;
+  /** Record-export progress (optional: a transport without it shows a busy bar only). */
+  onProgress?(listener: (e: ProgressEvent) => void): () => void;
   /**
    * A handle for a file dropped on the window, for openReview({ handle }); null if it has no
    * path. Electron's preload only: it reads the path (webUtils.getPathForFile) and hands it to

@@ -82,7 +82,7 @@ function inReviewTerms<T>(li: number, f: () => T): T {
       e.code,
       c,
       `${LOAD_CASE_LIMITS}`,
-      `the speed, torque or power of this load case with the face width gives a tooth load the methods cannot use; ${LOAD_CASE_LIMITS} (${c}.pinionSpeed_rpm, ${c}.pinionTorque_Nm or ${c}.power_kW, gearPair.faceWidth_mm)`,
+      `the speed, torque or power of this load case, with the face width and the materials, gives a contact the methods cannot use; ${LOAD_CASE_LIMITS} (${c}.pinionSpeed_rpm, ${c}.pinionTorque_Nm or ${c}.power_kW, gearPair.faceWidth_mm, gearPair.pinion.material and gearPair.wheel.material)`,
     );
   }
 }

@@ -10,6 +10,13 @@ import { SCUFFING_METHODS } from '../engine/mesh/types';
  */
 export const REVIEW_FORMAT = 'flankfilm.review';
 export const REVIEW_VERSION = 1;
+/**
+ * The most points along the path a review computes in all (load cases × oils × policy.pathPoints,
+ * at least one oil counted): 100 analyses at the default 201 points. The operating maps of the
+ * record sweep the same points 3600 times, so this bounds the record's time and memory as well
+ * (tests/cli/resourceBounds.test.ts measures the largest reviews accepted).
+ */
+export const MAX_REVIEW_POINTS = 20_100;
 
 const finite = () => z.number().refine(Number.isFinite, { message: 'must be a finite number' });
 const positive = (max: number, unit: string) =>
@@ -31,14 +38,15 @@ const atLeast = (min: number, max: number, unit: string) => positive(max, unit).
 export const materialSchema = z.union([
   z.enum(MATERIAL_PRESETS),
   z.strictObject({
-    youngsModulus_GPa: positive(1000, 'GPa'),
+    // Least values: below any gear material (polymers included), so a 1e-320 cannot underflow the contact.
+    youngsModulus_GPa: atLeast(0.5, 1000, 'GPa'),
     poissonRatio: finite().gte(0).lt(0.5),
-    thermalConductivity_WmK: positive(1000, 'W/(m·K)'),
-    density_kgm3: positive(30000, 'kg/m³'),
-    specificHeat_JkgK: positive(10000, 'J/(kg·K)'),
-    structuralFactorXW: positive(3, ''),
+    thermalConductivity_WmK: atLeast(0.1, 1000, 'W/(m·K)'),
+    density_kgm3: atLeast(500, 30000, 'kg/m³'),
+    specificHeat_JkgK: atLeast(100, 10000, 'J/(kg·K)'),
+    structuralFactorXW: atLeast(0.1, 3, ''),
     /** Micropitting material factor WW (ISO/TS 6336-22): 1 case-carburized, 0.5 through-hardened, 0.65 induction-hardened, 1.5 nitrided steel [memory]. */
-    micropittingFactorWW: positive(3, '').optional(),
+    micropittingFactorWW: atLeast(0.1, 3, '').optional(),
   }),
 ]);
 
@@ -119,7 +127,7 @@ export const planetarySchema = z.strictObject({
   normalModule_mm: positive(100, 'mm').gte(0.1, { message: 'must be at least 0.1 mm' }),
   normalPressureAngle_deg: finite().gte(10).lte(35).default(20),
   helixAngle_deg: finite().gte(0).lte(45).default(0),
-  faceWidth_mm: positive(5000, 'mm'),
+  faceWidth_mm: atLeast(0.5, 5000, 'mm'),
   planets: z.number().int({ message: 'must be a whole number of planets' }).gte(1, { message: 'must be at least 1 planet' }).lte(12, { message: 'must be at most 12 planets' }),
   meshLoadFactorKgamma: finite().gte(1, { message: 'must be at least 1' }).lte(2, { message: 'must be at most 2' }).default(1).describe(MESH_LOAD_FACTOR_HELP),
   held: z.enum(HELD_MEMBERS).describe('The member held still: ring (sun drives the carrier), carrier (sun drives the ring) or sun (carrier drives the ring)'),
@@ -157,7 +165,7 @@ export const oilSchema = z
     fzgFailureStage: fzgStageSchema,
     /** FVA 54 micropitting failure load stage (C-GF gear, 90 °C, 8.3 m/s); absent when unknown. */
     micropittingFailureStage: micropittingStageSchema.optional(),
-    pressureViscosity_1perGPa: positive(100, '1/GPa').optional(),
+    pressureViscosity_1perGPa: atLeast(1, 100, '1/GPa').optional(),
   })
   .superRefine((o, ctx) => {
     if (o.kv100_mm2s >= o.kv40_mm2s) {
@@ -254,6 +262,15 @@ export const reviewSchema = z
     signoff: signoffSchema.optional(),
   })
   .superRefine((r, ctx) => {
+    // A planetary stage computes two meshes.
+    const work = r.loadCases.length * Math.max(1, r.oils.length) * r.policy.pathPoints * (r.planetary ? 2 : 1);
+    if (work > MAX_REVIEW_POINTS) {
+      ctx.addIssue({
+        code: 'custom',
+        path: ['policy', 'pathPoints'],
+        message: `load cases × oils × path points${r.planetary ? ' × 2 meshes' : ''} = ${r.loadCases.length} × ${Math.max(1, r.oils.length)} × ${r.policy.pathPoints}${r.planetary ? ' × 2' : ''} = ${work}, more than the ${MAX_REVIEW_POINTS} a review may compute (so that its results and its record finish in under 30 s and 1 GB): use fewer load cases, oils or path points`,
+      });
+    }
     if ((r.gearPair === undefined) === (r.planetary === undefined)) {
       ctx.addIssue({ code: 'custom', path: [r.gearPair === undefined ? 'gearPair' : 'planetary'], message: 'give exactly one gear set: gearPair or planetary' });
       return;

@@ -3,14 +3,36 @@ import { atomicWrite } from '../../app/files/atomicWrite';
 import { pathClash } from '../../app/files/sameFile';
 import type { Documents } from './documents';
 import { signReview as signOff } from '../../app/review/signoff';
-import { RecordTextError } from '../../app/report/record';
 import { explainFsError, UserError } from './errors';
 import { slugOf } from './paths';
 import { resultsOf } from './compute';
 import { listIssues, reviewJson, reviewOf } from './reviewText';
-import type { Dialogs, ReportPort, SaveKind, ServiceArgs, Services } from './types';
+import { ExportCanceled } from './report';
+import type { Dialogs, RecordProgress, ReportPort, SaveKind, ServiceArgs, Services } from './types';
 
-type ExportDeps = { dialogs: Dialogs; report: ReportPort; documents: Documents };
+type ExportDeps = { dialogs: Dialogs; report: ReportPort; documents: Documents; onExportProgress?: (p: RecordProgress) => void; exports: ExportControl };
+
+/** The one record export that may run at a time, and its cancel. */
+export function createExportControl() {
+  let current: AbortController | null = null;
+  return {
+    begin(): AbortController {
+      current?.abort();
+      current = new AbortController();
+      return current;
+    },
+    end(c: AbortController): void {
+      if (current === c) current = null;
+    },
+    cancel(): boolean {
+      if (!current) return false;
+      current.abort();
+      current = null;
+      return true;
+    },
+  };
+}
+export type ExportControl = ReturnType<typeof createExportControl>;
 
 /** Ask where to write an export; never over the document itself (through links, symbolic or hard). */
 async function writeExport(deps: ExportDeps, handle: string | null | undefined, kind: SaveKind, name: string, data: string | Uint8Array): Promise<string | null> {
@@ -28,14 +50,19 @@ async function writeExport(deps: ExportDeps, handle: string | null | undefined, 
   return path;
 }
 
-/** Render the record (PDF) in main, then ask where to put it. */
+/** Render the record (PDF) off main's event loop (the report port's worker), then ask where to put it. Cancel: { canceled: true }. */
 export async function exportRecord(deps: ExportDeps, args: ServiceArgs<'exportRecord'>): ReturnType<Services['exportRecord']> {
   const { review } = reviewOf(args.text, 'no record made');
-  const results = resultsOf(review, 'no record made');
-  const pdf = await deps.report.renderRecord(review, results, { paper: args.paper }).catch((e: unknown) => {
-    if (e instanceof RecordTextError) throw new UserError(`no record made:\n${e.message}`);
+  const control = deps.exports.begin();
+  let pdf: Uint8Array;
+  try {
+    pdf = await deps.report.renderRecord(review, { paper: args.paper, signal: control.signal, ...(deps.onExportProgress ? { onProgress: deps.onExportProgress } : {}) });
+  } catch (e) {
+    if (e instanceof ExportCanceled) return { canceled: true };
     throw e;
-  });
+  } finally {
+    deps.exports.end(control);
+  }
   const path = await writeExport(deps, args.handle, 'record', `${slugOf(review.title)}.pdf`, pdf);
   return path === null ? { canceled: true } : { canceled: false, name: basename(path), bytes: pdf.byteLength };
 }

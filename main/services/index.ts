@@ -2,7 +2,7 @@ import { basename } from 'node:path';
 import { ENGINE_VERSION } from '../../app/engine/version';
 import { createDocuments, type Documents } from './documents';
 import { createAutosave } from './autosave';
-import { exportCsv, exportRecord, signReview } from './exports';
+import { createExportControl, exportCsv, exportRecord, signReview } from './exports';
 import { openDemo, openReview } from './open';
 import { createRecentFiles } from './recent';
 import { saveReview } from './save';
@@ -19,6 +19,7 @@ export function createServices(
   const autosaveStore = createAutosave(deps.userDataDir, deps.clock);
   const readOnlyDirs = deps.readOnlyDirs ?? [];
   const documents = createDocuments();
+  const exportControl = createExportControl();
   return {
     recent,
     autosaveStore,
@@ -26,8 +27,9 @@ export function createServices(
     openReview: (args) => openReview({ dialogs: deps.dialogs, recent, readOnlyDirs, documents }, args),
     openDemo: () => openDemo(),
     saveReview: (args) => saveReview({ dialogs: deps.dialogs, recent, autosave: autosaveStore, documents }, args),
-    exportRecord: (args) => exportRecord({ ...deps, documents }, args),
-    exportCsv: (args) => exportCsv({ ...deps, documents }, args),
+    exportRecord: (args) => exportRecord({ ...deps, documents, exports: exportControl }, args),
+    cancelExport: async () => ({ canceled: exportControl.cancel() }),
+    exportCsv: (args) => exportCsv({ ...deps, documents, exports: exportControl }, args),
     signReview: (args) => signReview(deps, args),
     autosave: async (args) => {
       await autosaveStore.save(args.text, args.handle === null ? null : documents.path(args.handle));

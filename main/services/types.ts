@@ -24,9 +24,15 @@ export interface Dialogs {
 
 export type Paper = 'a4' | 'letter';
 
+export interface RecordProgress {
+  readonly done: number;
+  readonly total: number;
+}
+
 /** What main needs from app/report, injected so tests can count pages without PDF rendering. */
 export interface ReportPort {
-  renderRecord(review: Review, results: Results, options: { paper: Paper }): Promise<Uint8Array>;
+  /** The record; rejects with ExportCanceled when `signal` aborts, with UserError for a review it cannot draw or compute. */
+  renderRecord(review: Review, options: { paper: Paper; onProgress?: (p: RecordProgress) => void; signal?: AbortSignal }): Promise<Uint8Array>;
   /** The along-path CSV of every case, in the review's display units. */
   casesCsv(results: Results, units: Review['displayUnits']): string;
 }
@@ -49,4 +55,6 @@ export interface ServiceDeps {
   readonly readOnlyDirs?: readonly string[];
   readonly onDocumentState?: (state: DocumentState) => void;
   readonly onRecentChanged?: (paths: readonly string[]) => void;
+  /** Progress of a record export (made in a worker), for the window's progress bar. */
+  readonly onExportProgress?: (p: RecordProgress) => void;
 }

@@ -1,4 +1,4 @@
-import { CALL_NAMES, menuEvent, type Bridge, type CallName } from '../../app/bridge/contract';
+import { CALL_NAMES, menuEvent, progressEvent, type Bridge, type CallName } from '../../app/bridge/contract';
 
 /**
  * The contract over HTTP (POST /api/<call> with the JSON argument), as the test harness serves
@@ -31,6 +31,18 @@ export function httpBridge(base = '/api/', token = new URLSearchParams(location.
         const parsed = menuEvent.safeParse(data);
         if (parsed.success) listener(parsed.data);
       };
+      return () => source.close();
+    },
+    onProgress(listener) {
+      const source = new EventSource(`${base}events?token=${encodeURIComponent(token)}`);
+      source.addEventListener('progress', (e: MessageEvent<string>) => {
+        try {
+          const parsed = progressEvent.safeParse(JSON.parse(e.data));
+          if (parsed.success) listener(parsed.data);
+        } catch {
+          // not ours
+        }
+      });
       return () => source.close();
     },
   } as Bridge;

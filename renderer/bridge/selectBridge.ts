@@ -1,4 +1,4 @@
-import { CALL_NAMES, contract, menuEvent, type Bridge, type CallName } from '../../app/bridge/contract';
+import { CALL_NAMES, contract, menuEvent, progressEvent, type Bridge, type CallName } from '../../app/bridge/contract';
 import { httpBridge } from './httpBridge';
 
 declare global {
@@ -28,6 +28,11 @@ export function validated(raw: Bridge): Bridge {
         const parsed = menuEvent.safeParse(e);
         if (parsed.success) listener(parsed.data);
       }),
+    onProgress: (listener) =>
+      raw.onProgress?.((e) => {
+        const parsed = progressEvent.safeParse(e);
+        if (parsed.success) listener(parsed.data);
+      }) ?? (() => undefined),
   } as Bridge;
 }
 

@@ -20,6 +20,9 @@ interface Props {
   readonly onRecord: (paper: 'a4' | 'letter') => void;
   readonly onCsv: () => void;
   readonly onSign: () => void;
+  /** Record-export progress from main, if any. */
+  readonly progress: { done: number; total: number } | null;
+  readonly onCancelRecord: () => void;
 }
 
 const BUSY_WORDS: Readonly<Record<Exclude<Busy, null>, string>> = {
@@ -68,7 +71,12 @@ export function TopBar(p: Props) {
       <div className="topbar__progress" aria-live="polite" data-testid="progress">
         {p.busy ? (
           <>
-            <progress aria-label={BUSY_WORDS[p.busy]} /> {BUSY_WORDS[p.busy]}
+            {p.busy === 'record' && p.progress ? <progress aria-label={BUSY_WORDS[p.busy]} value={p.progress.done} max={p.progress.total} /> : <progress aria-label={BUSY_WORDS[p.busy]} />} {BUSY_WORDS[p.busy]}
+            {p.busy === 'record' ? (
+              <button type="button" onClick={p.onCancelRecord} data-testid="cancel-record">
+                Cancel
+              </button>
+            ) : null}
           </>
         ) : p.notice ? (
           <span className={`notice notice--${p.notice.kind}`} role={p.notice.kind === 'error' ? 'alert' : undefined} data-testid="notice">

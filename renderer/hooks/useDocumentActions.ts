@@ -1,4 +1,4 @@
-import { useCallback, useState } from 'react';
+import { useCallback, useEffect, useState } from 'react';
 import type { Bridge } from '../../app/bridge/contract';
 import { formatIssues, parseReviewText } from '../../app/review/parse';
 import type { Review } from '../../app/review/schema';
@@ -37,6 +37,9 @@ function draftOf(text: string): { draft: Draft | null; problem: string | null; u
 export function useDocumentActions({ bridge, doc, review, dispatch, setUnits }: Deps) {
   const [busy, setBusy] = useState<Busy>(null);
   const [notice, setNotice] = useState<Notice | null>(null);
+  const [progress, setProgress] = useState<{ done: number; total: number } | null>(null);
+  useEffect(() => bridge.onProgress?.(setProgress), [bridge]);
+  const cancelRecord = useCallback(() => void bridge.cancelExport({}).catch(() => undefined), [bridge]);
 
   const guard = useCallback(
     async (what: Exclude<Busy, null>, job: () => Promise<string | null>) => {
@@ -48,6 +51,7 @@ export function useDocumentActions({ bridge, doc, review, dispatch, setUnits }: 
         setNotice({ kind: 'error', text: (e as Error).message });
       } finally {
         setBusy(null);
+        setProgress(null);
       }
     },
     [],
@@ -94,7 +98,7 @@ export function useDocumentActions({ bridge, doc, review, dispatch, setUnits }: 
       guard('record', async () => {
         if (!doc.draft || !review) throw new Error('Correct the marked inputs before exporting the record.');
         const r = await bridge.exportRecord({ text: draftText(doc.draft), paper, handle: doc.handle });
-        return r.canceled ? null : `Record saved to ${r.name} (${Math.round(r.bytes / 1024)} kB)`;
+        return r.canceled ? 'No record made (canceled).' : `Record saved to ${r.name} (${Math.round(r.bytes / 1024)} kB)`;
       }),
     [bridge, doc.draft, doc.handle, review, guard],
   );
@@ -134,5 +138,5 @@ export function useDocumentActions({ bridge, doc, review, dispatch, setUnits }: 
     [bridge, doc.draft, doc.handle, doc.name, review, dispatch],
   );
 
-  return { busy, notice, setNotice, load, openDemo, open, save, exportRecord, exportCsv, sign, guard };
+  return { busy, notice, setNotice, load, openDemo, open, save, exportRecord, exportCsv, sign, guard, progress, cancelRecord };
 }

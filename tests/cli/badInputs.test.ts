@@ -101,6 +101,9 @@ describe('tiny numbers: errors name the review field and its limit, never an eng
     ['gearPair.faceWidth_mm', (r: any) => (r.gearPair.faceWidth_mm = 1e-320), 'must be at least 0.5 mm'],
     ['loadCases[0].pinionSpeed_rpm', (r: any) => (r.loadCases[0].pinionSpeed_rpm = 1e-320), 'must be at least 0.1 rpm'],
     ['loadCases[0].power_kW', (r: any) => (r.loadCases[0].power_kW = 1e-320), 'must be at least 0.001 kW'],
+    ['gearPair.pinion.material.youngsModulus_GPa', (r: any) => (r.gearPair.pinion.material = { youngsModulus_GPa: 1e-320, poissonRatio: 0.3, thermalConductivity_WmK: 45, density_kgm3: 7800, specificHeat_JkgK: 440, structuralFactorXW: 1 }), 'must be at least 0.5 GPa'],
+    ['gearPair.wheel.material.thermalConductivity_WmK', (r: any) => (r.gearPair.wheel.material = { youngsModulus_GPa: 206, poissonRatio: 0.3, thermalConductivity_WmK: 1e-320, density_kgm3: 7800, specificHeat_JkgK: 440, structuralFactorXW: 1 }), 'must be at least 0.1 W/(m·K)'],
+    ['oils[0].pressureViscosity_1perGPa', (r: any) => (r.oils[0].pressureViscosity_1perGPa = 1e-320), 'must be at least 1 1/GPa'],
   ])('%s = 1e-320', async (path, mutate, limit) => {
     const src = withReview('tiny.flankfilm.json', (r) => {
       if (path.endsWith('power_kW')) delete r.loadCases[0].pinionTorque_Nm;

@@ -3,7 +3,8 @@
  * symbolic or hard links (issue: `review r.flankfilm.json --pdf r.flankfilm.json` destroyed the review).
  */
 import { describe, expect, it, beforeAll } from 'vitest';
-import { copyFileSync, linkSync, readFileSync, readdirSync, symlinkSync } from 'node:fs';
+import { copyFileSync, linkSync, lstatSync, readFileSync, readdirSync, symlinkSync } from 'node:fs';
+import { spawnSync } from 'node:child_process';
 import { join } from 'node:path';
 import { CRUSHER, tempDir } from '../report/helpers';
 import { cli } from './cliHarness';
@@ -76,4 +77,28 @@ describe('an output that is an input or another output: exit 2, nothing written'
     const r = await cli('review', review, '--csv', join(dir, 'ok.csv'), '--map', join(dir, 'ok-map.csv'));
     expect(r.code, r.err).toBe(0);
   }, 120_000);
+});
+
+describe('inputs and outputs that are not regular files', () => {
+  it('a review that is a FIFO or /dev/zero: exit 1 at once, no hang', async () => {
+    const fifo = join(dir, 'pipe.flankfilm.json');
+    expect(spawnSync('mkfifo', [fifo]).status).toBe(0);
+    const t0 = Date.now();
+    const a = await cli('review', fifo, '--json');
+    expect(a.code).toBe(1);
+    expect(a.err).toContain('not a regular file (a pipe)');
+    const b = await cli('review', '/dev/zero', '--json');
+    expect(b.code).toBe(1);
+    expect(b.err).toContain('not a regular file (a device)');
+    expect(Date.now() - t0).toBeLessThan(5000);
+  }, 20_000);
+
+  it('an output that is a FIFO is refused (exit 1) and stays a FIFO', async () => {
+    const fifo = join(dir, 'out.csv');
+    expect(spawnSync('mkfifo', [fifo]).status).toBe(0);
+    const r = await cli('review', review, '--csv', fifo);
+    expect(r.code).toBe(1);
+    expect(r.err).toContain('not a regular file');
+    expect(lstatSync(fifo).isFIFO()).toBe(true);
+  }, 60_000);
 });

@@ -23,6 +23,7 @@ let dir: string;
 let crusher: Buffer; // unsigned record of the crusher demo, made as `review --pdf` makes it
 let conveyor: Buffer; // the same for the conveyor demo: "another review"
 let signed: Buffer; // the crusher record, PKCS#7-signed
+let p12Path: string;
 
 function put(name: string, bytes: Buffer): string {
   const p = join(dir, name);
@@ -53,6 +54,7 @@ beforeAll(async () => {
   const key = join(dir, 'key.pem');
   const cert = join(dir, 'cert.pem');
   const p12 = join(dir, 'id.p12');
+  p12Path = p12;
   execFileSync('openssl', ['req', '-x509', '-newkey', 'rsa:2048', '-nodes', '-keyout', key, '-out', cert, '-days', '2', '-subj', '/CN=Forgery Suite Signer/O=Flankfilm tests'], { stdio: 'ignore' });
   execFileSync('openssl', ['pkcs12', '-export', '-inkey', key, '-in', cert, '-out', p12, '-passout', `pass:${PASS}`, '-keypbe', 'PBE-SHA1-3DES', '-certpbe', 'PBE-SHA1-3DES', '-macalg', 'sha1'], { stdio: 'ignore' });
   const conv = join(DEMO_DIR, DEMOS[1]);
@@ -88,6 +90,23 @@ describe('the genuine records verify', () => {
     expect(r.code, r.out + r.err).toBe(0);
     expect(r.out).toContain('signature: valid, signed by CN=Forgery Suite Signer, O=Flankfilm tests');
     expect(toolResult('pdfsig', [path]).out).toContain('Signature is Valid');
+  }, T);
+
+  it('a signed record of a signed-off review whose reviewer and organisation have accents verifies', async () => {
+    const src = join(dir, 'accents.flankfilm.json');
+    copyFileSync(CRUSHER, src);
+    const signedOff = await cli('sign', src, '--reviewer', 'Zoë Ångström-Dvořák (invented)', '--role', 'Lubrication engineer', '--decision', 'approved-with-conditions', '--organisation', 'Façade Œuvre GmbH (invented)', '--signed-at', '2026-12-01T09:30:00Z');
+    expect(signedOff.code, signedOff.err).toBe(0);
+    const out = join(dir, 'accents.pdf');
+    const saved = process.env[P12_PASSPHRASE_ENV];
+    process.env[P12_PASSPHRASE_ENV] = PASS;
+    const made = await cli('review', src, '--pdf', out, '--p12', p12Path);
+    if (saved === undefined) delete process.env[P12_PASSPHRASE_ENV];
+    else process.env[P12_PASSPHRASE_ENV] = saved;
+    expect(made.code, made.err).toBe(0);
+    const r = await cli('verify', out);
+    expect(r.code, r.out + r.err).toBe(0);
+    expect(r.out).toContain('state: signed');
   }, T);
 
   it('a Letter record: its paper is read from the page size and the rebuild matches', async () => {
@@ -242,6 +261,17 @@ describe('another engine version: its own word and exit code, never "match"', ()
     expect(r.out).toMatch(/^partial:/);
     expect(r.out).toContain('NOT checked: the pages');
     expect(r.out).not.toMatch(/^match/m);
+  }, T);
+
+  it('control characters in the record\'s text never reach the terminal', async () => {
+    const out = Buffer.from(crusher);
+    const e = PdfEdit.parse(crusher);
+    const n = Number(/\/FlankfilmEngineVersion (\d+) 0 R/.exec(e.body(e.ref('Info')))![1]);
+    const at = out.indexOf(`\n${n} 0 obj\n(${ENGINE_VERSION})`) + `\n${n} 0 obj\n(`.length;
+    out.write('\u001b[2J\u0007', at, 'latin1'); // same length: the offsets stay valid
+    const r = await cli('verify', put('escape.pdf', out));
+    expect([3, 4]).toContain(r.code);
+    expect(r.out + r.err).not.toMatch(/[\u0007\u001b]/);
   }, T);
 
   it('still exit 3 when the attachment does not fit the fingerprint', async () => {

@@ -73,8 +73,9 @@ export function workDirDialogs(workDir: string): Dialogs {
   };
 }
 
+/** As in the app: the record is made in a worker thread (the .ts entry, through tsx). */
 async function defaultReport(): Promise<ReportPort> {
-  return (await import('../../main/services/report')).createReportPort(resolve('assets/fonts'));
+  return (await import('../../main/services/report')).createReportPort(resolve('assets/fonts'), { file: resolve('tests/harness/recordWorker.cjs') });
 }
 
 export async function startHarness(options: HarnessOptions = {}): Promise<Harness> {
@@ -97,6 +98,10 @@ export async function startHarness(options: HarnessOptions = {}): Promise<Harnes
     readOnlyDirs: [resolve('assets/demo')],
     onDocumentState: (s) => {
       docState = s;
+    },
+    onExportProgress: (p) => {
+      const data = `event: progress\ndata: ${JSON.stringify(p)}\n\n`;
+      listeners.forEach((r) => r.write(data));
     },
   });
   const listeners = new Set<ServerResponse>();

@@ -3,6 +3,7 @@ import { CALL_NAMES } from '../../app/bridge/contract';
 
 const exposed: Record<string, unknown> = {};
 const menuListeners: Array<(event: unknown, payload: unknown) => void> = [];
+const progressListeners: Array<(event: unknown, payload: unknown) => void> = [];
 const ipcRenderer = {
   invoke: vi.fn(async (channel: string, args: unknown) => {
     if (channel === 'flankfilm:drop') return args === '/home/u/review.flankfilm.json' ? 'doc-00000000-0000-4000-8000-00000000d0d0' : null;
@@ -11,6 +12,7 @@ const ipcRenderer = {
   }),
   on: vi.fn((channel: string, fn: (event: unknown, payload: unknown) => void) => {
     if (channel === 'flankfilm:menu') menuListeners.push(fn);
+    if (channel === 'flankfilm:progress') progressListeners.push(fn);
   }),
   send: vi.fn(),
 };
@@ -25,10 +27,10 @@ const { contextBridge } = await import('electron');
 const bridge = exposed.flankfilm as Record<string, (...a: unknown[]) => unknown>;
 
 describe('the preload bridge', () => {
-  it('exposes window.flankfilm once, with the contract calls, onMenu and handleForFile only', () => {
+  it('exposes window.flankfilm once, with the contract calls, onMenu, onProgress and handleForFile only', () => {
     expect(contextBridge.exposeInMainWorld).toHaveBeenCalledTimes(1);
     expect(Object.keys(exposed)).toEqual(['flankfilm']);
-    expect(Object.keys(bridge).sort()).toEqual([...CALL_NAMES, 'onMenu', 'handleForFile'].sort());
+    expect(Object.keys(bridge).sort()).toEqual([...CALL_NAMES, 'onMenu', 'onProgress', 'handleForFile'].sort());
     for (const value of Object.values(bridge)) expect(typeof value).toBe('function');
   });
 
@@ -76,5 +78,15 @@ describe('the preload bridge', () => {
   it('handleForFile: the path from webUtils goes to main, only the handle comes back', async () => {
     await expect(bridge.handleForFile?.({})).resolves.toBe('doc-00000000-0000-4000-8000-00000000d0d0');
     expect(ipcRenderer.invoke).toHaveBeenCalledWith('flankfilm:drop', '/home/u/review.flankfilm.json');
+  });
+
+  it('onProgress passes record-export progress on, checked (never the IPC event)', () => {
+    const got: unknown[] = [];
+    const off = (bridge.onProgress as unknown as (l: (e: unknown) => void) => () => void)((e) => got.push(e));
+    progressListeners[0]?.({ sender: ipcRenderer }, { done: 2, total: 7 });
+    progressListeners[0]?.({ sender: ipcRenderer }, { done: 'x', total: 7 });
+    off();
+    progressListeners[0]?.({}, { done: 3, total: 7 });
+    expect(got).toEqual([{ done: 2, total: 7 }]);
   });
 });

@@ -70,12 +70,13 @@ export async function verifyCommand(args: string[], io: CliIo): Promise<number> 
     }
     throw e;
   }
+  const storedVersion = contents.info[INFO_KEYS.engineVersion];
   const stored = {
     combined: contents.info[INFO_KEYS.fingerprint],
     inputs: contents.info[INFO_KEYS.inputs],
     results: contents.info[INFO_KEYS.results],
     engine: contents.info[INFO_KEYS.engine],
-    engineVersion: contents.info[INFO_KEYS.engineVersion],
+    engineVersion: storedVersion === undefined ? undefined : printable(storedVersion),
   };
   const hex = /^[0-9a-f]{64}$/;
   if (![stored.combined, stored.inputs, stored.results, stored.engine].every((h) => h !== undefined && hex.test(h))) {
@@ -115,8 +116,8 @@ export async function verifyCommand(args: string[], io: CliIo): Promise<number> 
     for (const p of sig.problems) differ(`signature: ${p}`);
   }
 
-  const otherEngine = stored.engineVersion !== undefined && stored.engineVersion !== ENGINE_VERSION;
-  const now = fingerprintParts(review, results, otherEngine ? stored.engineVersion : ENGINE_VERSION);
+  const otherEngine = storedVersion !== undefined && storedVersion !== ENGINE_VERSION;
+  const now = fingerprintParts(review, results, otherEngine ? storedVersion : ENGINE_VERSION);
   if (otherEngine) {
     // Another engine's pages cannot be rebuilt here, and its results need not be this engine's:
     // only the review against the fingerprint's inputs hash (and the signature) can be checked.
@@ -166,7 +167,8 @@ function report(io: CliIo, word: 'match' | 'mismatch' | 'partial', pdfPath: stri
   const head =
     word === 'match' ? `match: ${pdfPath} agrees with ${source}` : word === 'partial' ? `partial: ${pdfPath} was only partly checked against ${source}` : `mismatch: ${pdfPath} does not agree with ${source}`;
   const out = [head];
-  if (sig) out.push(sig.ok ? `  signature: valid, signed by ${sig.subject ?? '(no subject)'} (the certificate is not checked against any authority)` : `  signature: NOT valid${sig.subject ? `; it names ${sig.subject}` : ''}`);
+  const subject = sig?.subject ? printable(sig.subject) : null;
+  if (sig) out.push(sig.ok ? `  signature: valid, signed by ${subject ?? '(no subject)'} (the certificate is not checked against any authority)` : `  signature: NOT valid${subject ? `; it names ${subject}` : ''}`);
   else out.push('  signature: none (an unsigned record)');
   out.push(...lines);
   if (word !== 'match') {
@@ -175,6 +177,11 @@ function report(io: CliIo, word: 'match' | 'mismatch' | 'partial', pdfPath: stri
   }
   io.out(`${out.join('\n')}\n`);
   return code;
+}
+
+/** Text from the record (a certificate's subject, a version string) as the terminal may show it: control characters become '?', at most 200 characters. */
+function printable(text: string): string {
+  return text.replace(/[\u0000-\u001f\u007f-\u009f\u202a-\u202e\u2066-\u2069]/g, '?').slice(0, 200);
 }
 
 async function reviewToCheck(pdfPath: string, contents: RecordContents, reviewPath: string | undefined): Promise<{ ok: true; review: Review; source: string } | { ok: false; message: string }> {
@@ -186,7 +193,7 @@ async function reviewToCheck(pdfPath: string, contents: RecordContents, reviewPa
   if (!att) return { ok: false, message: `${pdfPath}: the record has no attached review; give --review FILE` };
   const parsed = parseReviewText(new TextDecoder('utf-8', { fatal: false }).decode(att.data));
   // The attachment's name is the forger's text too: print only safe characters of it.
-  const name = att.name.replace(/[^\p{L}\p{N}._ -]/gu, '?').slice(0, 80);
+  const name = printable(att.name.replace(/[^\p{L}\p{N}._ -]/gu, '?')).slice(0, 80);
   if (!parsed.ok) return { ok: false, message: `${pdfPath}: the attached review (${name}) is not valid:\n${formatIssues(parsed.issues)}` };
   return { ok: true, review: parsed.review, source: `the attached review (${name})` };
 }

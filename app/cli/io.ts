@@ -12,6 +12,7 @@ export const USAGE = `usage:
   flankfilm sign FILE --reviewer NAME --role ROLE --decision approved|approved-with-conditions|not-approved
                  [--organisation ORG] [--conditions TEXT] [--signed-at ISO8601]
   flankfilm verify PDF [--review FILE]
-  flankfilm schema
+  flankfilm schema [--oils]
+  flankfilm fleet FILES|DIR --oils CANDIDATES [--json] [--csv OUT] [--pdf OUT] [--paper a4|letter]
   flankfilm demo [DIR]
 `;

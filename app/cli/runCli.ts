@@ -12,6 +12,7 @@ const COMMANDS: Record<string, Command> = {
   demo: demoCommand,
   sign: async (args, io) => (await import('./commands/sign')).signCommand(args, io),
   verify: async (args, io) => (await import('./commands/verify')).verifyCommand(args, io),
+  fleet: async (args, io) => (await import('./commands/fleet')).fleetCommand(args, io),
 };
 
 /** Register a command (the record commands live in their own module). */

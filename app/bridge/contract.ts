@@ -29,6 +29,15 @@ export const contract = {
     args: z.object({ text: z.string().max(2_000_000) }),
     result: z.union([z.object({ canceled: z.literal(false), path: z.string() }), canceled]),
   },
+  /** Render the fleet record (PDF) of reviews (by file name and text) against a candidate-oil file, and save it by a dialog. */
+  exportFleetRecord: {
+    args: z.object({
+      reviews: z.array(z.object({ name: z.string().min(1).max(300), text: z.string().max(2_000_000) })).min(1).max(200),
+      oils: z.string().max(2_000_000),
+      paper: z.enum(['a4', 'letter']),
+    }),
+    result: z.union([z.object({ canceled: z.literal(false), path: z.string(), bytes: z.number().int() }), canceled]),
+  },
   /** Stamp a sign-off (signedAt from main's clock, fingerprint of inputs + results + engine version). */
   signReview: {
     args: z.object({

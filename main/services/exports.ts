@@ -8,7 +8,7 @@ import type { Dialogs, ReportPort, SaveKind, ServiceArgs, Services } from './typ
 
 type ExportDeps = { dialogs: Dialogs; report: ReportPort };
 
-async function writeExport(dialogs: Dialogs, kind: SaveKind, name: string, data: string | Uint8Array): Promise<string | null> {
+export async function writeExport(dialogs: Dialogs, kind: SaveKind, name: string, data: string | Uint8Array): Promise<string | null> {
   const path = await dialogs.savePath(kind, name);
   if (path === null) return null;
   try {

@@ -1,6 +1,7 @@
 import { ENGINE_VERSION } from '../../app/engine/version';
 import { createAutosave } from './autosave';
 import { exportCsv, exportRecord, signReview } from './exports';
+import { exportFleetRecord } from './fleet';
 import { openDemo, openReview } from './open';
 import { createRecentFiles } from './recent';
 import { saveReview } from './save';
@@ -22,6 +23,7 @@ export function createServices(deps: ServiceDeps): Services & { readonly recent:
     saveReview: (args) => saveReview({ dialogs: deps.dialogs, recent, autosave: autosaveStore }, args),
     exportRecord: (args) => exportRecord(deps, args),
     exportCsv: (args) => exportCsv(deps, args),
+    exportFleetRecord: (args) => exportFleetRecord(deps, args),
     signReview: (args) => signReview(deps, args),
     autosave: async (args) => {
       await autosaveStore.save(args.text, args.path);

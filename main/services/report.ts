@@ -1,4 +1,5 @@
 /** app/report behind the ReportPort the services use. */
+import { renderFleetRecord } from '../../app/report/fleet/fleetRecord';
 import { resultsToCsv } from '../../app/report/csv';
 import { loadRecordFonts } from '../../app/report/fonts';
 import { renderRecord } from '../../app/report/record';
@@ -10,5 +11,6 @@ export function createReportPort(fontsDir?: string): ReportPort {
   return {
     renderRecord: async (review, results, { paper }) => renderRecord(review, results, { paper, maps: operatingMaps(review) ?? [], ...(fontsDir ? { fonts: loadRecordFonts(fontsDir) } : {}) }),
     casesCsv: (results, units) => resultsToCsv(results, units),
+    renderFleetRecord: async (result, inputs, { paper }) => renderFleetRecord(result, inputs, { paper, ...(fontsDir ? { fonts: loadRecordFonts(fontsDir) } : {}) }),
   };
 }

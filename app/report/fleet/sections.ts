@@ -9,6 +9,8 @@ import { GREY, OKABE_ITO } from '../words';
 const OILS_PER_TABLE = 6;
 
 const oilKey = (i: number): string => `O${i + 1}`;
+/** A source as the record shows it: the file name, never the folder it came from. */
+const basename = (s: string): string => s.split(/[\\/]/).pop() ?? s;
 
 export function drawOilKey(L: Layout, r: FleetResult): void {
   L.heading('Candidate oils', 1);
@@ -107,7 +109,7 @@ export function drawUnserved(L: Layout, r: FleetResult): void {
   }
   if (r.failed.length) {
     L.heading('Reviews not included', 2);
-    for (const f of r.failed) L.bullet(f.message.split('\n')[0] ?? f.message, { size: 8 });
+    for (const f of r.failed) L.bullet(`${basename(f.source)}: could not be read or computed, so it is left out of the consolidation.`, { size: 8 });
   }
 }
 

@@ -1,5 +1,5 @@
 // Lint, including the layering of STYLE.md: arrows only point down
-// (renderer → review → engine; main → report → review → engine; cli → report → review → engine).
+// (renderer → fleet → review → engine; main → report → fleet → review → engine; cli → report → fleet → review → engine).
 import tseslint from 'typescript-eslint';
 
 const NODE_BUILTINS = ['node:*', 'fs', 'fs/*', 'path', 'os', 'child_process', 'crypto', 'http', 'https', 'net', 'url', 'util', 'stream', 'worker_threads'];
@@ -24,27 +24,31 @@ export default tseslint.config(
   },
   {
     files: ['app/engine/**/*.ts'],
-    rules: layer([...NODE_BUILTINS, 'electron', 'zod', 'react', ...up('review', 'report', 'cli', 'main', 'renderer')], 'app/engine is pure: no I/O, no Node, no UI, no upper layer.'),
+    rules: layer([...NODE_BUILTINS, 'electron', 'zod', 'react', ...up('review', 'fleet', 'report', 'cli', 'main', 'renderer')], 'app/engine is pure: no I/O, no Node, no UI, no upper layer.'),
   },
   {
     files: ['app/review/**/*.ts'],
-    rules: layer([...NODE_BUILTINS, 'electron', 'react', ...up('report', 'cli', 'main', 'renderer')], 'app/review is pure: it may import app/engine and zod only.'),
+    rules: layer([...NODE_BUILTINS, 'electron', 'react', ...up('fleet', 'report', 'cli', 'main', 'renderer')], 'app/review is pure: it may import app/engine and zod only.'),
   },
   {
     files: ['app/bridge/**/*.ts'],
     rules: layer([...NODE_BUILTINS, 'electron', 'react', ...up('report', 'cli', 'main', 'renderer')], 'app/bridge is the pure contract: zod and app/review only.'),
   },
   {
+    files: ['app/fleet/**/*.ts'],
+    rules: layer([...NODE_BUILTINS, 'electron', 'react', ...up('report', 'cli', 'main', 'renderer', 'files', 'bridge')], 'app/fleet is pure: it may import app/review, app/engine and zod only.'),
+  },
+  {
     files: ['app/report/**/*.ts'],
-    rules: layer(['electron', 'react', ...up('cli', 'main', 'renderer')], 'app/report may import review and engine, not cli/main/renderer.'),
+    rules: layer(['electron', 'react', ...up('cli', 'main', 'renderer')], 'app/report may import fleet, review and engine, not cli/main/renderer.'),
   },
   {
     files: ['app/cli/**/*.ts'],
-    rules: layer(['electron', 'react', ...up('main', 'renderer')], 'app/cli may import report, review and engine.'),
+    rules: layer(['electron', 'react', ...up('main', 'renderer')], 'app/cli may import report, fleet, review and engine.'),
   },
   {
     files: ['renderer/**/*.{ts,tsx}'],
-    rules: layer([...NODE_BUILTINS, 'electron', ...up('report', 'cli', 'main')], 'renderer talks to main only through the bridge; it may import app/engine, app/review and app/bridge.'),
+    rules: layer([...NODE_BUILTINS, 'electron', ...up('report', 'cli', 'main')], 'renderer talks to main only through the bridge; it may import app/engine, app/review, app/fleet and app/bridge.'),
   },
   {
     files: ['main/**/*.ts'],

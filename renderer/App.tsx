@@ -17,6 +17,7 @@ import { TopBar } from './components/TopBar';
 import { RecoveryPrompt } from './components/RecoveryPrompt';
 import { InfoDialog } from './components/InfoDialog';
 import { ProblemList } from './components/ProblemList';
+import { FleetView } from './components/fleet/FleetView';
 import { useDocument } from './hooks/useDocument';
 import { useRecompute } from './hooks/useRecompute';
 import { usePersistence } from './hooks/usePersistence';
@@ -42,6 +43,7 @@ export function App({ bridge }: { readonly bridge: Bridge }) {
   const [compareRequest, setCompareRequest] = useState(0);
   const [recovery, setRecovery] = useState<Recovery | null>(null);
   const [info, setInfo] = useState<{ title: string; lines: string[] } | null>(null);
+  const [view, setView] = useState<'review' | 'fleet'>('review');
   const actions = useDocumentActions({ bridge, doc, review, dispatch, setUnits });
   usePersistence(bridge, doc);
 
@@ -137,7 +139,12 @@ export function App({ bridge }: { readonly bridge: Bridge }) {
       />
       {recovery ? <RecoveryPrompt savedAt={recovery.savedAt} name={recovery.name} onRecover={() => recover(recovery)} onDiscard={discard} /> : null}
       {info ? <InfoDialog title={info.title} lines={info.lines} onClose={() => setInfo(null)} /> : null}
-      {sheet ? (
+      <nav className="view-switch" aria-label="View">
+        <button type="button" aria-pressed={view === 'review'} onClick={() => setView('review')}>Review</button>
+        <button type="button" aria-pressed={view === 'fleet'} onClick={() => setView('fleet')} data-testid="view-fleet">Fleet</button>
+      </nav>
+      <FleetView bridge={bridge} paper={units === 'us' ? 'letter' : 'a4'} hidden={view !== 'fleet'} />
+      {view === 'fleet' ? null : sheet ? (
         <Sheet.Provider value={sheet}>
           <main className="sheet">
             <div className="sheet__inputs" aria-label="Inputs" role="group">

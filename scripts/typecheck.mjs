@@ -3,7 +3,7 @@
 import { spawnSync } from 'node:child_process';
 import { existsSync } from 'node:fs';
 
-const layers = ['app/engine', 'app/review', 'app/bridge', 'app/files', 'app/report', 'app/cli', 'main', 'renderer', 'tests'];
+const layers = ['app/engine', 'app/review', 'app/fleet', 'app/bridge', 'app/files', 'app/report', 'app/cli', 'main', 'renderer', 'tests'];
 let failed = false;
 for (const layer of layers) {
   const config = `${layer}/tsconfig.json`;

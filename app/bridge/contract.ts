@@ -39,6 +39,15 @@ export const contract = {
     args: z.strictObject({ text: z.string().max(2_000_000), handle: documentHandle.nullable().optional() }),
     result: z.union([z.object({ canceled: z.literal(false), name: fileName }), canceled]),
   },
+  /** Render the fleet record (PDF) of reviews (by file name and text) against a candidate-oil file, and save it by a dialog. */
+  exportFleetRecord: {
+    args: z.strictObject({
+      reviews: z.array(z.strictObject({ name: fileName.min(1), text: z.string().max(2_000_000) })).min(1).max(200),
+      oils: z.string().max(2_000_000),
+      paper: z.enum(['a4', 'letter']),
+    }),
+    result: z.union([z.object({ canceled: z.literal(false), name: fileName, bytes: z.number().int() }), canceled]),
+  },
   /** Stamp a sign-off (signedAt from main's clock, fingerprint of inputs + results + engine version). */
   signReview: {
     args: z.object({

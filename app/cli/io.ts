@@ -14,7 +14,8 @@ export const USAGE = `usage:
                  [--organisation ORG] [--conditions TEXT] [--signed-at ISO8601]
   flankfilm verify PDF [--review FILE]
   flankfilm diff REVIEW [OTHER] [--json]   changes since signing, or from REVIEW to OTHER (exit 0 none, 3 some)
-  flankfilm schema
+  flankfilm schema [--oils]
+  flankfilm fleet FILES|DIR --oils CANDIDATES [--json] [--csv OUT] [--pdf OUT] [--paper a4|letter]
   flankfilm demo [DIR]
   flankfilm ehl REVIEW --case NAME [--oil NAME] --at A|B|C|D|E|lambda-min|POSITION_mm [--nodes N] [--law roelands|barus] [--json]
 `;

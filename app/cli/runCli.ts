@@ -14,6 +14,7 @@ const COMMANDS: Record<string, Command> = {
   verify: async (args, io) => (await import('./commands/verify')).verifyCommand(args, io),
   diff: async (args, io) => (await import('./commands/diff')).diffCommand(args, io),
   ehl: async (args, io) => (await import('./commands/ehl')).ehlCommand(args, io),
+  fleet: async (args, io) => (await import('./commands/fleet')).fleetCommand(args, io),
 };
 
 /** Register a command (the record commands live in their own module). */

@@ -35,7 +35,7 @@ export function createExportControl() {
 export type ExportControl = ReturnType<typeof createExportControl>;
 
 /** Ask where to write an export; never over the document itself (through links, symbolic or hard). */
-async function writeExport(deps: ExportDeps, handle: string | null | undefined, kind: SaveKind, name: string, data: string | Uint8Array): Promise<string | null> {
+export async function writeExport(deps: Pick<ExportDeps, 'dialogs' | 'documents'>, handle: string | null | undefined, kind: SaveKind, name: string, data: string | Uint8Array): Promise<string | null> {
   const path = await deps.dialogs.savePath(kind, name);
   if (path === null) return null;
   const doc = deps.documents.pathOrNull(handle);

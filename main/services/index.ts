@@ -3,6 +3,7 @@ import { ENGINE_VERSION } from '../../app/engine/version';
 import { createDocuments, type Documents } from './documents';
 import { createAutosave } from './autosave';
 import { createExportControl, exportCsv, exportRecord, signReview } from './exports';
+import { exportFleetRecord } from './fleet';
 import { openDemo, openReview } from './open';
 import { createRecentFiles } from './recent';
 import { saveReview } from './save';
@@ -30,6 +31,7 @@ export function createServices(
     exportRecord: (args) => exportRecord({ ...deps, documents, exports: exportControl }, args),
     cancelExport: async () => ({ canceled: exportControl.cancel() }),
     exportCsv: (args) => exportCsv({ ...deps, documents, exports: exportControl }, args),
+    exportFleetRecord: (args) => exportFleetRecord({ ...deps, documents }, args),
     signReview: (args) => signReview(deps, args),
     autosave: async (args) => {
       await autosaveStore.save(args.text, args.handle === null ? null : documents.path(args.handle));

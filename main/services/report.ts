@@ -4,6 +4,7 @@
  * free; without, in this thread (the CLI's way; tests that want no worker).
  */
 import { Worker } from 'node:worker_threads';
+import { renderFleetRecord } from '../../app/report/fleet/fleetRecord';
 import { resultsToCsv } from '../../app/report/csv';
 import { loadRecordFonts } from '../../app/report/fonts';
 import { RecordTextError, renderRecord } from '../../app/report/record';
@@ -33,6 +34,7 @@ export function createReportPort(fontsDir?: string, worker?: WorkerSpec): Report
     renderRecord: (review, { paper, onProgress, signal }) =>
       worker ? inWorker(worker, { review, paper, ...(fontsDir ? { fontsDir } : {}) }, onProgress, signal) : inThread(review, paper, fontsDir),
     casesCsv: (results, units) => resultsToCsv(results, units),
+    renderFleetRecord: async (result, inputs, { paper }) => renderFleetRecord(result, inputs, { paper, ...(fontsDir ? { fonts: loadRecordFonts(fontsDir) } : {}) }),
   };
 }
 

@@ -2,6 +2,8 @@ import type { z } from 'zod';
 import type { CallName, CallResult, Contract } from '../../app/bridge/contract';
 import type { Results } from '../../app/review/results';
 import type { Review } from '../../app/review/schema';
+import type { FleetInputs } from '../../app/fleet/fingerprint';
+import type { FleetResult } from '../../app/fleet/types';
 
 /** A call's arguments after the contract's schema has parsed them (defaults filled in). */
 export type ServiceArgs<K extends CallName> = z.output<Contract[K]['args']>;
@@ -35,6 +37,8 @@ export interface ReportPort {
   renderRecord(review: Review, options: { paper: Paper; onProgress?: (p: RecordProgress) => void; signal?: AbortSignal }): Promise<Uint8Array>;
   /** The along-path CSV of every case, in the review's display units. */
   casesCsv(results: Results, units: Review['displayUnits']): string;
+  /** The fleet record; app/report's own when not injected. */
+  renderFleetRecord?(result: FleetResult, inputs: FleetInputs, options: { paper: Paper }): Promise<Uint8Array>;
 }
 
 export interface DocumentState {

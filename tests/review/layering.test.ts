@@ -21,6 +21,14 @@ describe('layer boundaries (eslint no-restricted-imports)', () => {
     ['renderer/x.ts', "import { renderRecord } from '../app/report/record';", false],
     ['renderer/x.ts', "import { run } from '../app/review/run';", true],
     ['app/report/x.ts', "import { BrowserWindow } from 'electron';", false],
+    ['app/review/x.ts', "import { runFleet } from '../fleet/fleet';", false],
+    ['app/engine/x.ts', "import { runFleet } from '../fleet/fleet';", false],
+    ['app/fleet/x.ts', "import { run } from '../review/run';", true],
+    ['app/fleet/x.ts', "import { readFile } from 'node:fs/promises';", false],
+    ['app/fleet/x.ts', "import { renderRecord } from '../report/record';", false],
+    ['app/fleet/x.ts', "import { cli } from '../cli/runCli';", false],
+    ['app/report/x.ts', "import { runFleet } from '../fleet/fleet';", true],
+    ['app/cli/x.ts', "import { runFleet } from '../fleet/fleet';", true],
     ['main/x.ts', "import { app } from 'electron';", true],
   ];
   for (const [file, code, allowed] of cases) {

@@ -9,8 +9,8 @@ import { formatIssues, MAX_REVIEW_BYTES, parseReviewText } from '../../review/pa
 import { run } from '../../review/run';
 import { REVIEW_FORMAT, REVIEW_VERSION, type Review } from '../../review/schema';
 import { status, STATUS_WORDS } from '../../review/status';
-import { DECISION_WORDS, VERDICT_WORDS } from '../../review/vocabulary';
-import type { ReviewStatus, VerdictCode } from '../../review/results';
+import { CHANGE_WORDS, DECISION_WORDS, VERDICT_WORDS } from '../../review/vocabulary';
+import type { ChangeFindingCode, ReviewStatus, VerdictCode } from '../../review/results';
 import { EngineInputError } from '../../engine/diagnostics';
 import { formatNumber, unitsFor } from '../../report/units';
 import { EXIT, UsageError, type CliIo } from '../io';
@@ -53,6 +53,7 @@ function inputNumbers(review: Review): NumberWords {
 const figure = (q: ResultMove['quantity'], v: ResultMove['before']): string => {
   if (v === null) return '—';
   if (q === 'verdict' || q === 'oilVerdict') return VERDICT_WORDS[v as VerdictCode];
+  if (q === 'changeFinding') return CHANGE_WORDS[v as ChangeFindingCode];
   return formatNumber(v as number, 3);
 };
 

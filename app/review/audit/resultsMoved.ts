@@ -1,21 +1,22 @@
 /**
  * The results that moved between two computations of a review: per load case and oil the
- * verdict, SB, SintS and λmin, and per oil the overall verdict. A figure "moved" when it differs
+ * verdict, SB, SintS and λmin, per oil the overall verdict, and per proposed oil the change finding. A figure "moved" when it differs
  * at the three significant digits the screen shows. Cases are matched by load case and oil name.
  * Pure.
  */
-import type { CaseResult, Results, VerdictCode } from '../results';
+import type { CaseResult, ChangeFindingCode, Results, VerdictCode } from '../results';
 
 /** JSON codes of the figures compared (the words are the reader's: VERDICT_WORDS, SB, SintS, λmin). */
-export type MovedQuantity = 'verdict' | 'scuffingSafety' | 'integralSafety' | 'lambdaMin' | 'oilVerdict';
+export type MovedQuantity = 'verdict' | 'scuffingSafety' | 'integralSafety' | 'lambdaMin' | 'oilVerdict' | 'changeFinding';
 
 export interface ResultMove {
   readonly quantity: MovedQuantity;
   /** Null for the overall verdict of an oil. */
   readonly loadCase: string | null;
   readonly oil: string | null;
-  readonly before: VerdictCode | number | null;
-  readonly after: VerdictCode | number | null;
+  /** A verdict code, a change finding code (for `changeFinding`, with `oil` the proposed oil) or a figure. */
+  readonly before: VerdictCode | ChangeFindingCode | number | null;
+  readonly after: VerdictCode | ChangeFindingCode | number | null;
 }
 
 export interface MovedResults {
@@ -30,6 +31,7 @@ export const QUANTITY_SYMBOLS: Readonly<Record<MovedQuantity, string>> = {
   integralSafety: 'SintS',
   lambdaMin: 'λmin',
   oilVerdict: 'overall verdict',
+  changeFinding: 'change finding',
 };
 
 const shown = (x: number | null): number | null => (x === null ? null : Number(x.toPrecision(3)));
@@ -61,5 +63,12 @@ export function resultsMoved(before: Results, after: Results): MovedResults {
     const a = oilNow.get(oil) ?? null;
     if (b !== a) moves.push({ quantity: 'oilVerdict', loadCase: null, oil, before: b, after: a });
   }
-  return { moves, verdictChanged: moves.some((m) => (m.quantity === 'verdict' || m.quantity === 'oilVerdict') && m.before !== null && m.after !== null) };
+  const changeWas = new Map(before.changes.map((c) => [c.to, c.finding]));
+  const changeNow = new Map(after.changes.map((c) => [c.to, c.finding]));
+  for (const to of [...changeNow.keys(), ...[...changeWas.keys()].filter((o) => !changeNow.has(o))]) {
+    const b = changeWas.get(to) ?? null;
+    const a = changeNow.get(to) ?? null;
+    if (b !== a) moves.push({ quantity: 'changeFinding', loadCase: null, oil: to, before: b, after: a });
+  }
+  return { moves, verdictChanged: moves.some((m) => (m.quantity === 'verdict' || m.quantity === 'oilVerdict' || m.quantity === 'changeFinding') && m.before !== null && m.after !== null) };
 }

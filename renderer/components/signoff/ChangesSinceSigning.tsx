@@ -1,11 +1,11 @@
 import { useMemo, useRef } from 'react';
 import { diffInputs, type InputChange } from '../../../app/review/audit/diff';
-import { resultsMoved } from '../../../app/review/audit/resultsMoved';
+import { resultsMoved, type ResultMove } from '../../../app/review/audit/resultsMoved';
 import { checkSignedState, inputsOf, NO_AUDIT_WORDS, type SignedStateCheck } from '../../../app/review/audit/signedState';
 import { undoEdit } from '../../../app/review/audit/undo';
-import type { Results, ReviewStatus, VerdictCode } from '../../../app/review/results';
+import type { ChangeFindingCode, Results, ReviewStatus, VerdictCode } from '../../../app/review/results';
 import type { Review } from '../../../app/review/schema';
-import { VERDICT_WORDS } from '../../../app/review/vocabulary';
+import { CHANGE_WORDS, VERDICT_WORDS } from '../../../app/review/vocabulary';
 import { useSheet } from '../../state/context';
 import type { UnitSystem } from '../../units/units';
 import { ChangeList } from './ChangeList';
@@ -52,7 +52,8 @@ export function ChangesSinceSigning({ review, results, status, units }: Props) {
     const edit = undoEdit(draft, inputsOf(signedState), c);
     dispatch({ type: 'set', path: edit.path, value: edit.value });
   };
-  const verdicts = moved?.moves.filter((m) => (m.quantity === 'verdict' || m.quantity === 'oilVerdict') && m.before && m.after) ?? [];
+  const verdicts = moved?.moves.filter((m) => (m.quantity === 'verdict' || m.quantity === 'oilVerdict' || m.quantity === 'changeFinding') && m.before && m.after) ?? [];
+  const word = (m: ResultMove, v: ResultMove['before']) => (m.quantity === 'changeFinding' ? CHANGE_WORDS[v as ChangeFindingCode] : VERDICT_WORDS[v as VerdictCode]);
   return (
     <section className="audit" aria-labelledby="changes-since-signing-h" data-testid="changes-since-signing">
       <h3 id="changes-since-signing-h">
@@ -63,7 +64,7 @@ export function ChangesSinceSigning({ review, results, status, units }: Props) {
       {moved ? (
         <p className="note" data-testid="verdict-moved" data-verdict-changed={moved.verdictChanged}>
           {moved.verdictChanged ? 'The verdict changed: ' : 'The verdict did not change.'}
-          {verdicts.map((m) => `${m.loadCase ?? 'overall'}${m.oil ? ` — ${m.oil}` : ''}: ${VERDICT_WORDS[m.before as VerdictCode]} → ${VERDICT_WORDS[m.after as VerdictCode]}`).join('; ')}
+          {verdicts.map((m) => `${m.loadCase ?? 'overall'}${m.oil ? ` — ${m.oil}` : ''}: ${word(m, m.before)} → ${word(m, m.after)}`).join('; ')}
         </p>
       ) : null}
     </section>

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { parseReviewValue } from '../../app/review/parse';
+import { fzgTypeAReview } from './fzgReview';
 import { run } from '../../app/review/run';
 import type { Results } from '../../app/review/results';
 import { FZG_STAGE_TORQUE_NM } from './fzgTestGears';
@@ -25,23 +25,7 @@ const EP12 = oil('EP gear oil, FZG 12', 'proposed', 'extreme-pressure', 12);
 const RO6 = oil('R&O oil, FZG 6', 'in-service', 'r-and-o', 6);
 
 function fzgReview(torque: number, oils: unknown[], scuffingMethods: 'flash' | 'integral' | 'both'): Results {
-  const p = parseReviewValue({
-    format: 'flankfilm.review',
-    version: 1,
-    title: 'FZG type A test gear (ISO 14635-1)',
-    gearPair: {
-      normalModule_mm: 4.5,
-      faceWidth_mm: 20,
-      centerDistance_mm: 91.5,
-      pinion: { teeth: 16, profileShift: 0.8532, tipDiameter_mm: 88.77, roughnessRa_um: 0.3, material: 'steel-carburized' },
-      wheel: { teeth: 24, profileShift: -0.5, tipDiameter_mm: 112.5, roughnessRa_um: 0.3, material: 'steel-carburized' },
-    },
-    loadCases: [{ name: `T1 = ${torque} N·m`, pinionSpeed_rpm: 2170, pinionTorque_Nm: torque, oilTemperature_C: 90, lubrication: 'dip' }],
-    oils,
-    policy: { scuffingMethods },
-  });
-  if (!p.ok) throw new Error(JSON.stringify(p.issues));
-  return run(p.review);
+  return run(fzgTypeAReview([{ name: `T1 = ${torque} N·m`, pinionTorque_Nm: torque }], oils, { scuffingMethods }));
 }
 
 describe('FZG A gear with a stage-12 EP oil, flash temperature method alone (ISO/TS 6336-20, SB,min 1.5)', () => {
@@ -116,21 +100,5 @@ describe('change findings on the FZG A gear (flash method; the need follows from
 });
 
 function fzgReviewWithTarget(torque: number, oils: unknown[], lambdaTarget: number): Results {
-  const p = parseReviewValue({
-    format: 'flankfilm.review',
-    version: 1,
-    title: 'FZG type A test gear (ISO 14635-1)',
-    gearPair: {
-      normalModule_mm: 4.5,
-      faceWidth_mm: 20,
-      centerDistance_mm: 91.5,
-      pinion: { teeth: 16, profileShift: 0.8532, tipDiameter_mm: 88.77, roughnessRa_um: 0.3, material: 'steel-carburized' },
-      wheel: { teeth: 24, profileShift: -0.5, tipDiameter_mm: 112.5, roughnessRa_um: 0.3, material: 'steel-carburized' },
-    },
-    loadCases: [{ name: 'stage 9', pinionSpeed_rpm: 2170, pinionTorque_Nm: torque, oilTemperature_C: 90, lubrication: 'dip' }],
-    oils,
-    policy: { scuffingMethods: 'flash', lambdaTarget },
-  });
-  if (!p.ok) throw new Error(JSON.stringify(p.issues));
-  return run(p.review);
+  return run(fzgTypeAReview([{ name: 'stage 9', pinionTorque_Nm: torque }], oils, { scuffingMethods: 'flash', lambdaTarget }));
 }

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { parseReviewValue } from '../../app/review/parse';
+import { fzgTypeAReview } from '../reference/fzgReview';
 import { run } from '../../app/review/run';
 
 /**
@@ -9,29 +9,15 @@ import { run } from '../../app/review/run';
  * by the flash method with a stage-12 oil; stage 7 has the smaller SB because the flash
  * temperature rises with load (ISO/TS 6336-20).
  */
-const review = (policy: Record<string, unknown>, extra: Record<string, unknown> = {}) => {
-  const p = parseReviewValue({
-    format: 'flankfilm.review',
-    version: 1,
-    title: 'FZG type A, two load stages',
-    gearPair: {
-      normalModule_mm: 4.5,
-      faceWidth_mm: 20,
-      centerDistance_mm: 91.5,
-      pinion: { teeth: 16, profileShift: 0.8532, tipDiameter_mm: 88.77, roughnessRa_um: 0.3, material: 'steel-carburized' },
-      wheel: { teeth: 24, profileShift: -0.5, tipDiameter_mm: 112.5, roughnessRa_um: 0.3, material: 'steel-carburized' },
-    },
-    loadCases: [
-      { name: 'stage 6', pinionSpeed_rpm: 2170, pinionTorque_Nm: 135.3, oilTemperature_C: 90, lubrication: 'dip', timeShare: 0.9 },
-      { name: 'stage 7', pinionSpeed_rpm: 2170, pinionTorque_Nm: 183.4, oilTemperature_C: 90, lubrication: 'dip', timeShare: 0.1 },
+const review = (policy: Record<string, unknown>) =>
+  fzgTypeAReview(
+    [
+      { name: 'stage 6', pinionTorque_Nm: 135.3, timeShare: 0.9 },
+      { name: 'stage 7', pinionTorque_Nm: 183.4, timeShare: 0.1 },
     ],
-    oils: [{ name: 'EP 12', kv40_mm2s: 100, kv100_mm2s: 11.1, density15_kgm3: 880, baseOil: 'mineral', chemistry: 'extreme-pressure', fzgFailureStage: 12 }],
+    [{ name: 'EP 12', kv40_mm2s: 100, kv100_mm2s: 11.1, density15_kgm3: 880, baseOil: 'mineral', chemistry: 'extreme-pressure', fzgFailureStage: 12 }],
     policy,
-    ...extra,
-  });
-  if (!p.ok) throw new Error(JSON.stringify(p.issues));
-  return p.review;
-};
+  );
 
 describe('governing case', () => {
   it('same verdict word in both cases: the one with the smaller SB/SB,min governs, although it is listed second and has the smaller time share', () => {

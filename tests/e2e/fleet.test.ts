@@ -33,7 +33,8 @@ describe('the Fleet view', () => {
       { name: 'broken.flankfilm.json', mimeType: 'application/json', buffer: Buffer.from('{"format": "flankfilm.review", "version": 1') },
     ]);
     await page.locator('[data-testid=fleet-oils]').setInputFiles(OILS);
-    await expect.poll(() => page.locator('[data-testid=fleet-files] li').count(), { timeout: WAIT }).toBe(REVIEWS.length + 2);
+    // One entry a file (a broken one nests the list of its problems).
+    await expect.poll(() => page.locator('[data-testid=fleet-files] > li').count(), { timeout: WAIT }).toBe(REVIEWS.length + 2);
     expect(await page.locator('[data-testid=fleet-files]').innerText()).toMatch(/✗ broken\.flankfilm\.json/);
     await page.locator('[data-testid=fleet-compute]').click();
     await page.locator('[data-testid=fleet-fit]').waitFor({ state: 'visible', timeout: WAIT });
@@ -54,7 +55,7 @@ describe('the Fleet view', () => {
   it('exports the fleet record through main', async () => {
     const page = s.page;
     await page.locator('[data-testid=fleet-export]').click();
-    await page.getByText(/Fleet record saved to/).waitFor({ timeout: WAIT });
+    await page.getByText(/Fleet record saved as/).waitFor({ timeout: WAIT });
     const pdf = join(s.harness.workDir, 'record.pdf');
     const text = execFileSync('pdftotext', ['-layout', pdf, '-'], { encoding: 'utf8' });
     expect(text).toContain('Fit table');

@@ -14,6 +14,10 @@ import { SignoffDialog } from './components/signoff/SignoffDialog';
 import { TopBar } from './components/TopBar';
 import { RecoveryPrompt } from './components/RecoveryPrompt';
 import { InfoDialog } from './components/InfoDialog';
+import { NewReviewDialog } from './components/NewReviewDialog';
+import { RecordPanel } from './components/panels/RecordPanel';
+import type { DocAction } from './state/reviewState';
+import { TEMPLATE_WORDS, type TemplateKind } from '../app/review/templates';
 import { ProblemList } from './components/ProblemList';
 import { useDocument } from './hooks/useDocument';
 import { useRecompute } from './hooks/useRecompute';
@@ -34,9 +38,21 @@ type Recovery = { text: string; path: string | null; savedAt: string };
 /** The sheet: inputs on the left, findings on the right; state in a reducer, physics in a worker. */
 export function App({ bridge }: { readonly bridge: Bridge }) {
   const { doc, dispatch, review, issues } = useDocument();
-  const computed = useRecompute(review, doc.edition);
+  const computed = useRecompute(review, doc.edition, doc.opened);
   const [units, setUnits] = useState<UnitSystem>('si');
   const [signing, setSigning] = useState(false);
+  const [starting, setStarting] = useState(false);
+  // Fields with typed text not yet taken: the sheet says "computing" until they are.
+  const [typing, setTyping] = useState<ReadonlySet<string>>(() => new Set());
+  const pending = useCallback((key: string, on: boolean) => {
+    setTyping((s) => {
+      if (s.has(key) === on) return s;
+      const next = new Set(s);
+      if (on) next.add(key);
+      else next.delete(key);
+      return next;
+    });
+  }, []);
   const [recovery, setRecovery] = useState<Recovery | null>(null);
   const [info, setInfo] = useState<{ title: string; lines: string[] } | null>(null);
   const actions = useDocumentActions({ bridge, doc, review, dispatch, setUnits });
@@ -59,10 +75,40 @@ export function App({ bridge }: { readonly bridge: Bridge }) {
     openText: useCallback((text: string) => void guard('open', async () => load(text, null, true, 'Opened the dropped review (not yet saved).')), [guard, load]),
   });
 
+  // Ctrl+N (Cmd+N): New review. In Electron the menu's accelerator does the same; opening twice is harmless.
+  useEffect(() => {
+    const onKey = (e: KeyboardEvent) => {
+      if ((e.ctrlKey || e.metaKey) && !e.shiftKey && !e.altKey && e.key.toLowerCase() === 'n') {
+        e.preventDefault();
+        setStarting(true);
+      }
+    };
+    window.addEventListener('keydown', onKey);
+    return () => window.removeEventListener('keydown', onKey);
+  }, []);
+  const { setNotice } = actions;
+  const startNew = useCallback(
+    (kind: TemplateKind) => {
+      setStarting(false);
+      dispatch({ type: 'load', draft: newReviewDraft(kind), path: null, dirty: false });
+      setUnits('si');
+      setNotice({ kind: 'info', text: `Started a new review from the ${TEMPLATE_WORDS[kind].name.toLowerCase()} template: fill in the marked inputs.` });
+    },
+    [dispatch, setNotice],
+  );
+  // An edit makes the last "Opened …" or "Saved …" notice out of date: it goes. Errors stay until the next command.
+  const edit = useCallback(
+    (a: DocAction) => {
+      if (a.type !== 'load' && a.type !== 'saved') setNotice((n) => (n?.kind === 'info' ? null : n));
+      dispatch(a);
+    },
+    [dispatch, setNotice],
+  );
+
   const messages = useMemo(() => messagesByPath(issues, review ? computed.error : null), [issues, review, computed.error]);
   const sheet = useMemo<SheetContext | null>(
-    () => (doc.draft ? { draft: doc.draft, units, dispatch, messagesAt: (k) => lookupMessages(messages, k) } : null),
-    [doc.draft, units, dispatch, messages],
+    () => (doc.draft ? { draft: doc.draft, units, dispatch: edit, messagesAt: (k) => lookupMessages(messages, k), pending } : null),
+    [doc.draft, units, edit, messages, pending],
   );
 
   const status: ReviewStatus = review ? (computed.status ?? 'draft') : doc.draft?.signoff ? 'changed-since-signing' : 'draft';
@@ -74,7 +120,7 @@ export function App({ bridge }: { readonly bridge: Bridge }) {
   const onMenu = useRef<(c: MenuCommand, path?: string) => void>(() => undefined);
   onMenu.current = (command, path) => {
     const table: Record<MenuCommand, () => void> = {
-      new: () => dispatch({ type: 'load', draft: newReviewDraft(), path: null, dirty: true }),
+      new: () => setStarting(true),
       open: () => void actions.open(path),
       save: () => void actions.save(false),
       'save-as': () => void actions.save(true),
@@ -116,8 +162,9 @@ export function App({ bridge }: { readonly bridge: Bridge }) {
         busy={actions.busy}
         notice={actions.notice}
         canExport={review !== null}
-        computing={computed.computing}
+        computing={computed.computing || typing.size > 0}
         onUnits={setUnits}
+        onNew={() => setStarting(true)}
         onOpen={() => void actions.open()}
         onSave={() => void actions.save(false)}
         onRecord={(paper) => void actions.exportRecord(paper)}
@@ -125,12 +172,14 @@ export function App({ bridge }: { readonly bridge: Bridge }) {
         onSign={() => setSigning(true)}
       />
       {recovery ? <RecoveryPrompt savedAt={recovery.savedAt} path={recovery.path} onRecover={() => recover(recovery)} onDiscard={discard} /> : null}
+      {starting ? <NewReviewDialog dirty={doc.dirty} onStart={startNew} onClose={() => setStarting(false)} /> : null}
       {info ? <InfoDialog title={info.title} lines={info.lines} onClose={() => setInfo(null)} /> : null}
       {sheet ? (
         <Sheet.Provider value={sheet}>
           <main className="sheet">
             <div className="sheet__inputs" aria-label="Inputs" role="group">
               <ProblemList issues={issues} engineError={review ? computed.error : null} stale={stale} />
+              <RecordPanel />
               <GearPairPanel gear={results?.gear ?? null} stale={stale} />
               <DutyPanel />
               <OilsPanel summaries={results?.oils ?? []} />

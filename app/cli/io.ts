@@ -13,5 +13,6 @@ export const USAGE = `usage:
                  [--organisation ORG] [--conditions TEXT] [--signed-at ISO8601]
   flankfilm verify PDF [--review FILE]
   flankfilm schema
+  flankfilm new [spur|helical] FILE
   flankfilm demo [DIR]
 `;

@@ -1,10 +1,14 @@
 import { atomicWrite } from '../../app/files/atomicWrite';
 import { signReview as signOff } from '../../app/review/signoff';
 import { explainFsError, UserError } from './errors';
+import { idStem } from '../../app/report/record';
 import { slugOf } from './paths';
 import { resultsOf } from './compute';
 import { listIssues, reviewJson, reviewOf } from './reviewText';
 import type { Dialogs, ReportPort, SaveKind, ServiceArgs, Services } from './types';
+
+/** Exported files are named by the review id, else by the title. */
+const stemOf = (review: { id?: string | undefined; title: string }): string => idStem(review) ?? slugOf(review.title);
 
 type ExportDeps = { dialogs: Dialogs; report: ReportPort };
 
@@ -24,7 +28,7 @@ export async function exportRecord(deps: ExportDeps, args: ServiceArgs<'exportRe
   const { review } = reviewOf(args.text, 'no record made');
   const results = resultsOf(review, 'no record made');
   const pdf = await deps.report.renderRecord(review, results, { paper: args.paper });
-  const path = await writeExport(deps.dialogs, 'record', `${slugOf(review.title)}.pdf`, pdf);
+  const path = await writeExport(deps.dialogs, 'record', `${stemOf(review)}.pdf`, pdf);
   return path === null ? { canceled: true } : { canceled: false, path, bytes: pdf.byteLength };
 }
 
@@ -32,7 +36,7 @@ export async function exportRecord(deps: ExportDeps, args: ServiceArgs<'exportRe
 export async function exportCsv(deps: ExportDeps, args: ServiceArgs<'exportCsv'>): ReturnType<Services['exportCsv']> {
   const { review } = reviewOf(args.text, 'no CSV written');
   const csv = deps.report.casesCsv(resultsOf(review, 'no CSV written'), review.displayUnits);
-  const path = await writeExport(deps.dialogs, 'csv', `${slugOf(review.title)}-cases.csv`, csv);
+  const path = await writeExport(deps.dialogs, 'csv', `${stemOf(review)}-cases.csv`, csv);
   return path === null ? { canceled: true } : { canceled: false, path };
 }
 

@@ -15,6 +15,7 @@ interface Props {
   readonly canExport: boolean;
   readonly computing: boolean;
   readonly onUnits: (u: UnitSystem) => void;
+  readonly onNew: () => void;
   readonly onOpen: () => void;
   readonly onSave: () => void;
   readonly onRecord: (paper: 'a4' | 'letter') => void;
@@ -30,9 +31,20 @@ const BUSY_WORDS: Readonly<Record<Exclude<Busy, null>, string>> = {
   sign: 'Signing…',
 };
 
+/** Why the record, CSV and sign-off commands are disabled, or null when they are not. */
+function whyDisabled(p: Props): string | null {
+  if (p.busy) return `Wait: ${BUSY_WORDS[p.busy].replace('…', '')} is under way.`;
+  if (!p.canExport) return 'Not available yet: correct or fill in the marked inputs so the review computes.';
+  return null;
+}
+
 /** The sheet's header: what is open, its state, the unit system and the commands. */
 export function TopBar(p: Props) {
   const paperId = useId();
+  const whyId = useId();
+  const why = whyDisabled(p);
+  // A disabled command says why: as a tooltip, and to assistive technology by aria-describedby.
+  const reason = why ? { title: why, 'aria-describedby': whyId } : {};
   const [paper, setPaper] = useState<'a4' | 'letter' | null>(null);
   const chosenPaper = paper ?? (p.units === 'us' ? 'letter' : 'a4');
   return (
@@ -41,15 +53,16 @@ export function TopBar(p: Props) {
         <span className="wordmark" aria-hidden="true">
           Flankfilm
         </span>
-        <h1 className="topbar__title">
-          {p.title}
-          {p.dirty ? <span className="dirty" title="Unsaved edits"> • unsaved</span> : null}
+        <h1 className="topbar__title" title={p.title}>
+          <span className="topbar__name">{p.title}</span>
+          {p.dirty ? <span className="dirty" title="Unsaved edits" data-testid="unsaved">• unsaved</span> : null}
         </h1>
         <StatusBadge status={p.status} testId="review-status" />
-        {p.computing ? <span className="computing" aria-hidden="true">recomputing…</span> : null}
+        {p.computing ? <span className="computing" role="status" data-testid="computing">computing…</span> : null}
       </div>
       <nav className="topbar__commands" aria-label="Commands">
         <UnitSwitch units={p.units} onChange={p.onUnits} />
+        <button type="button" onClick={p.onNew} disabled={p.busy !== null} aria-keyshortcuts="Control+N Meta+N" title="New review (Ctrl+N)">New review…</button>
         <button type="button" onClick={p.onOpen} disabled={p.busy !== null}>Open…</button>
         <button type="button" onClick={p.onSave} disabled={p.busy !== null}>Save</button>
         <span className="record-group">
@@ -58,12 +71,13 @@ export function TopBar(p: Props) {
             <option value="a4">A4</option>
             <option value="letter">Letter</option>
           </select>
-          <button type="button" onClick={() => p.onRecord(chosenPaper)} disabled={p.busy !== null || !p.canExport} data-testid="export-record">
+          <button type="button" onClick={() => p.onRecord(chosenPaper)} disabled={why !== null} data-testid="export-record" {...reason}>
             Export record
           </button>
         </span>
-        <button type="button" onClick={p.onCsv} disabled={p.busy !== null || !p.canExport} data-testid="export-csv">Export CSV</button>
-        <button type="button" className="primary" onClick={p.onSign} disabled={p.busy !== null || !p.canExport}>Sign off…</button>
+        <button type="button" onClick={p.onCsv} disabled={why !== null} data-testid="export-csv" {...reason}>Export CSV</button>
+        <button type="button" className="primary" onClick={p.onSign} disabled={why !== null} data-testid="sign" {...reason}>Sign off…</button>
+        <span id={whyId} className="sr-only">{why ?? ''}</span>
       </nav>
       <div className="topbar__progress" aria-live="polite" data-testid="progress">
         {p.busy ? (

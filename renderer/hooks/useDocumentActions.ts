@@ -125,7 +125,7 @@ export function useDocumentActions({ bridge, doc, review, dispatch, setUnits }: 
         });
         const { draft } = draftOf(r.text);
         if (!draft) throw new Error('The signed review came back unreadable.');
-        dispatch({ type: 'load', draft, path: doc.path, dirty: true });
+        dispatch({ type: 'load', draft, path: doc.path, dirty: true, sameReview: true });
         setNotice({ kind: 'info', text: `Signed by ${form.reviewer.trim()}. Save the review to keep the sign-off.` });
       } finally {
         setBusy(null);

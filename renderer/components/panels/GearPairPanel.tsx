@@ -4,7 +4,6 @@ import { useSheet } from '../../state/context';
 import { getIn } from '../../state/paths';
 import { CheckField } from '../fields/CheckField';
 import { NumberField } from '../fields/NumberField';
-import { TextField } from '../fields/TextField';
 import { QuantityRow } from '../Quantity';
 import { GearMember } from './GearMember';
 import { Panel } from './Panel';
@@ -26,7 +25,6 @@ export function GearPairPanel({ gear, stale }: { readonly gear: GearResult | nul
   const gp = ['gearPair'] as const;
   return (
     <Panel id="gear-pair" title="Gear pair">
-      <TextField path={['title']} label="Review title" wide />
       <div className="grid-fields">
         <NumberField path={[...gp, 'normalModule_mm']} label="Normal module mn" kind="length" />
         <NumberField path={[...gp, 'normalPressureAngle_deg']} label="Pressure angle αn" unit="°" />

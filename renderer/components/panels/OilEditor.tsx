@@ -7,6 +7,18 @@ import { NumberField } from '../fields/NumberField';
 import { SelectField } from '../fields/SelectField';
 import { TextField } from '../fields/TextField';
 import { Quantity } from '../Quantity';
+import { viscosityIndex } from '../../../app/engine/oil/viscosityIndex';
+import { centistokes } from '../../../app/engine/units';
+
+/** VI by ASTM D2270 from the draft's KV40 and KV100 as they stand now; null while either is missing or outside the standard. */
+function d2270Of(kv40: unknown, kv100: unknown): number | null {
+  if (typeof kv40 !== 'number' || typeof kv100 !== 'number' || kv100 >= kv40) return null;
+  try {
+    return viscosityIndex(centistokes(kv40), centistokes(kv100)).value;
+  } catch {
+    return null;
+  }
+}
 
 const BASE_WORDS: Readonly<Record<(typeof BASE_OILS)[number], string>> = {
   mineral: 'Mineral',
@@ -30,6 +42,16 @@ export function OilEditor({ index, summary }: { readonly index: number; readonly
   const p = ['oils', index] as const;
   const name = getIn(draft, [...p, 'name']);
   const legend = typeof name === 'string' && name ? name : `Oil ${index + 1}`;
+  const computedVi = d2270Of(getIn(draft, [...p, 'kv40_mm2s']), getIn(draft, [...p, 'kv100_mm2s']));
+  const enteredVi = getIn(draft, [...p, 'viscosityIndex']);
+  const viNote =
+    typeof enteredVi === 'number'
+      ? computedVi !== null && computedVi !== enteredVi
+        ? `entered; ASTM D2270 gives ${computedVi} from KV40 and KV100`
+        : 'entered'
+      : computedVi !== null
+        ? 'computed by ASTM D2270 from KV40 and KV100'
+        : 'computed by ASTM D2270 once KV40 and KV100 are entered';
   return (
     <fieldset className="item" data-testid={`oil-${index}`}>
       <legend>{legend}</legend>
@@ -46,7 +68,15 @@ export function OilEditor({ index, summary }: { readonly index: number; readonly
         />
         <NumberField path={[...p, 'kv40_mm2s']} label={units === 'us' ? 'Viscosity at 40 °C (104 °F)' : 'Viscosity at 40 °C'} kind="kinematicViscosity" />
         <NumberField path={[...p, 'kv100_mm2s']} label={units === 'us' ? 'Viscosity at 100 °C (212 °F)' : 'Viscosity at 100 °C'} kind="kinematicViscosity" />
-        <NumberField path={[...p, 'viscosityIndex']} label="Viscosity index VI" optional hint="Empty: computed by ASTM D2270" />
+        <NumberField
+          path={[...p, 'viscosityIndex']}
+          label="Viscosity index VI"
+          optional
+          derived
+          value={computedVi ?? undefined}
+          note={viNote}
+          hint="Computed by ASTM D2270 from KV40 and KV100 unless you type one; a typed VI is kept, any other is recomputed when a viscosity changes"
+        />
         <NumberField path={[...p, 'density15_kgm3']} label={units === 'us' ? 'Density at 15 °C (59 °F)' : 'Density at 15 °C'} kind="density" />
         <SelectField path={[...p, 'baseOil']} label="Base oil" options={BASE_OILS.map((b) => [b, BASE_WORDS[b]] as const)} />
         <SelectField path={[...p, 'chemistry']} label="Additive chemistry" options={CHEMISTRIES.map((c) => [c, CHEMISTRY_WORDS[c]] as const)} />

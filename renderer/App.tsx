@@ -29,6 +29,7 @@ import { lookupMessages, messagesByPath } from './state/messages';
 import { newReviewDraft } from './state/templates';
 import type { UnitSystem } from './units/units';
 import { basisTag, METHODS, type MethodEntry } from '../app/review/methods';
+import { decisionSubject } from '../app/review/decisionSubject';
 
 /** One method as a line of the Help dialog: what, the formula, the source and how firmly it is held. */
 const methodLine = (m: MethodEntry): string => `${m.topic} — ${m.quantity}: ${m.formula} (${m.source}${basisTag(m.basis) ? `; ${basisTag(m.basis)}` : ''})`;
@@ -191,12 +192,13 @@ export function App({ bridge }: { readonly bridge: Bridge }) {
               <SideBySidePanel results={results} units={units} />
               <MeshPanel results={results} limits={limits} units={units} />
               <MapPanel review={review} edition={doc.edition} results={results} units={units} />
-              <SignoffPanel status={status} signoff={review?.signoff} canSign={review !== null} onOpen={() => setSigning(true)} />
+              <SignoffPanel status={status} signoff={review?.signoff} review={review} canSign={review !== null} onOpen={() => setSigning(true)} />
             </div>
           </main>
           <SignoffDialog
             open={signing}
             previous={review?.signoff}
+            subject={review ? decisionSubject(review) : 'the review as a whole'}
             onClose={() => setSigning(false)}
             onSign={async (form) => {
               await actions.sign(form);

@@ -1,5 +1,6 @@
 import type { CaseResult, ChangeSide, LimitCheck, Results, Shortfall } from '../review/results';
-import { DECISION_WORDS, OIL_FIT_WORDS, REGIME_WORDS, SHORTFALL_SHORT, VERDICT_WORDS } from '../review/vocabulary';
+import { decisionLine } from '../review/decisionSubject';
+import { OIL_FIT_WORDS, REGIME_WORDS, SHORTFALL_SHORT, VERDICT_WORDS } from '../review/vocabulary';
 import type { ReviewStatus } from '../review/results';
 import type { Review } from '../review/schema';
 import { STATUS_WORDS } from '../review/status';
@@ -27,7 +28,7 @@ export function summaryText(r: Results, state?: { status: ReviewStatus; review: 
   const lines = [
     `${r.title}`,
     `Flankfilm ${r.flankfilm}`,
-    ...(state ? [`Status: ${STATUS_WORDS[state.status]}${so ? ` — ${DECISION_WORDS[so.decision]} by ${so.reviewer} (${so.role}) on ${so.signedAt.slice(0, 10)}` : ''}`] : []),
+    ...(state ? [`Status: ${STATUS_WORDS[state.status]}${so && state ? ` — ${decisionLine(so, state.review)}, by ${so.reviewer} (${so.role}) on ${so.signedAt.slice(0, 10)}` : ''}`] : []),
     '',
   ];
   if (r.need) lines.push(`What the duty needs — ${VERDICT_WORDS[r.need.code]}`, `  ${r.need.statement}`, '');

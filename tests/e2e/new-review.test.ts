@@ -96,6 +96,10 @@ describe('New review', () => {
     await page.locator('[data-testid=sign]').click();
     await page.locator('#so-reviewer').fill('P. Engineer');
     await page.locator('#so-role').fill('Plant engineer');
+    // The decision names what it approves: the change from the in-service oil to the proposed one.
+    await expect(page.locator('[data-testid=signoff-subject]').textContent()).resolves.toContain('the change from the in-service oil “In-service oil” to the proposed oil “Proposed oil”');
+    await page.getByRole('radio', { name: 'Approved with conditions' }).check();
+    await page.locator('#so-conditions').fill('Oil analysis after 500 h');
     await page.getByRole('button', { name: 'Sign', exact: true }).click();
     await expect.poll(() => page.locator('[data-testid=review-status]').getAttribute('data-status'), { timeout: WAIT }).toBe('signed');
     await page.locator('[data-testid=export-record]').click();
@@ -107,6 +111,14 @@ describe('New review', () => {
     expect(text).toContain('2026-12-02');
     expect(text).toContain('Bucket-elevator reducer');
     expect(text).not.toMatch(/HC-DEMO|Harrow|2026-11-30/);
+    // The cover (page 1) gives the decision with what it approves and its conditions; no command line anywhere.
+    const cover = execFileSync('pdftotext', ['-f', '1', '-l', '1', pdf, '-'], { encoding: 'utf8' }).replace(/\s+/g, ' ');
+    // (pdftotext joins a word hyphenated at a line end: "in-service" may read "inservice")
+    expect(cover).toMatch(/Approved with conditions: the change from the in-?service oil “In-service oil” to the proposed oil “Proposed oil”/);
+    expect(cover).toContain('Oil analysis after 500 h');
+    expect(text).not.toMatch(/flankfilm sign|--reviewer/);
+    // Dates on screen are ISO 8601.
+    await expect(page.locator('[data-testid=signoff-details]').textContent()).resolves.toMatch(/\d{4}-\d{2}-\d{2} \d{2}:\d{2} UTC/);
     // pdfdetach lists the attached review by the id's name.
     const attached = execFileSync('pdfdetach', ['-list', pdf], { encoding: 'utf8' });
     expect(attached).toContain('PL-2026-014.flankfilm.json');

@@ -169,7 +169,7 @@ export function App({ bridge }: { readonly bridge: Bridge }) {
         onOpen={() => void actions.open()}
         onSave={() => void actions.save(false)}
         onRecord={(paper) => void actions.exportRecord(paper)}
-        onCsv={() => void actions.exportCsv()}
+        onCsv={(table) => void actions.exportCsv(table)}
         onSign={() => setSigning(true)}
       />
       {recovery ? <RecoveryPrompt savedAt={recovery.savedAt} path={recovery.path} onRecover={() => recover(recovery)} onDiscard={discard} /> : null}

@@ -24,9 +24,9 @@ export const contract = {
     args: z.object({ text: z.string().max(2_000_000), paper: z.enum(['a4', 'letter']) }),
     result: z.union([z.object({ canceled: z.literal(false), path: z.string(), bytes: z.number().int() }), canceled]),
   },
-  /** Write the along-path CSV of every case. */
+  /** Write a CSV: every point along the path of every case, or the summary (one row per case × oil). */
   exportCsv: {
-    args: z.object({ text: z.string().max(2_000_000) }),
+    args: z.object({ text: z.string().max(2_000_000), table: z.enum(['points', 'summary']).optional() }),
     result: z.union([z.object({ canceled: z.literal(false), path: z.string() }), canceled]),
   },
   /** Stamp a sign-off (signedAt from main's clock, fingerprint of inputs + results + engine version). */

@@ -32,11 +32,14 @@ export async function exportRecord(deps: ExportDeps, args: ServiceArgs<'exportRe
   return path === null ? { canceled: true } : { canceled: false, path, bytes: pdf.byteLength };
 }
 
-/** The along-path CSV of every case. */
+/** The along-path CSV of every case, or the summary CSV (one row per case × oil). */
 export async function exportCsv(deps: ExportDeps, args: ServiceArgs<'exportCsv'>): ReturnType<Services['exportCsv']> {
   const { review } = reviewOf(args.text, 'no CSV written');
-  const csv = deps.report.casesCsv(resultsOf(review, 'no CSV written'), review.displayUnits);
-  const path = await writeExport(deps.dialogs, 'csv', `${stemOf(review)}-cases.csv`, csv);
+  const results = resultsOf(review, 'no CSV written');
+  const summary = args.table === 'summary';
+  if (summary && !deps.report.summaryCsv) throw new UserError('no CSV written: the summary table is not available');
+  const csv = summary && deps.report.summaryCsv ? deps.report.summaryCsv(results, review.displayUnits) : deps.report.casesCsv(results, review.displayUnits);
+  const path = await writeExport(deps.dialogs, 'csv', `${stemOf(review)}-${summary ? 'summary' : 'cases'}.csv`, csv);
   return path === null ? { canceled: true } : { canceled: false, path };
 }
 

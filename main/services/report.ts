@@ -1,5 +1,6 @@
 /** app/report behind the ReportPort the services use. */
 import { resultsToCsv } from '../../app/report/csv';
+import { summaryCsv } from '../../app/report/summaryCsv';
 import { loadRecordFonts } from '../../app/report/fonts';
 import { renderRecord } from '../../app/report/record';
 import { operatingMaps } from '../../app/review/operatingMaps';
@@ -10,5 +11,6 @@ export function createReportPort(fontsDir?: string): ReportPort {
   return {
     renderRecord: async (review, results, { paper }) => renderRecord(review, results, { paper, maps: operatingMaps(review) ?? [], ...(fontsDir ? { fonts: loadRecordFonts(fontsDir) } : {}) }),
     casesCsv: (results, units) => resultsToCsv(results, units),
+    summaryCsv: (results, units) => summaryCsv(results, units),
   };
 }

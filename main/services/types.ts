@@ -29,6 +29,8 @@ export interface ReportPort {
   renderRecord(review: Review, results: Results, options: { paper: Paper }): Promise<Uint8Array>;
   /** The along-path CSV of every case, in the review's display units. */
   casesCsv(results: Results, units: Review['displayUnits']): string;
+  /** One row per case × oil: key figures, limits, pass or fail. */
+  summaryCsv?(results: Results, units: Review['displayUnits']): string;
 }
 
 export interface DocumentState {

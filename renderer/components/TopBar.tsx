@@ -19,7 +19,7 @@ interface Props {
   readonly onOpen: () => void;
   readonly onSave: () => void;
   readonly onRecord: (paper: 'a4' | 'letter') => void;
-  readonly onCsv: () => void;
+  readonly onCsv: (table: 'points' | 'summary') => void;
   readonly onSign: () => void;
 }
 
@@ -75,7 +75,8 @@ export function TopBar(p: Props) {
             Export record
           </button>
         </span>
-        <button type="button" onClick={p.onCsv} disabled={why !== null} data-testid="export-csv" {...reason}>Export CSV</button>
+        <button type="button" onClick={() => p.onCsv('points')} disabled={why !== null} data-testid="export-csv" title={why ?? 'Every point along the path of every case × oil'} aria-describedby={why ? whyId : undefined}>Export CSV</button>
+        <button type="button" onClick={() => p.onCsv('summary')} disabled={why !== null} data-testid="export-summary-csv" title={why ?? 'One row per case × oil: key figures, limits, pass or fail'} aria-describedby={why ? whyId : undefined}>Summary CSV</button>
         <button type="button" className="primary" onClick={p.onSign} disabled={why !== null} data-testid="sign" {...reason}>Sign off…</button>
         <span id={whyId} className="sr-only">{why ?? ''}</span>
       </nav>

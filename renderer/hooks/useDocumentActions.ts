@@ -100,11 +100,11 @@ export function useDocumentActions({ bridge, doc, review, dispatch, setUnits }: 
   );
 
   const exportCsv = useCallback(
-    () =>
+    (table: 'points' | 'summary' = 'points') =>
       guard('csv', async () => {
         if (!doc.draft || !review) throw new Error('Correct the marked inputs before exporting the CSV.');
-        const r = await bridge.exportCsv({ text: draftText(doc.draft) });
-        return r.canceled ? null : `CSV saved to ${r.path}`;
+        const r = await bridge.exportCsv({ text: draftText(doc.draft), table });
+        return r.canceled ? null : `${table === 'summary' ? 'Summary CSV' : 'CSV'} saved to ${r.path}`;
       }),
     [bridge, doc.draft, review, guard],
   );

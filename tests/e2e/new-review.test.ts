@@ -1,4 +1,5 @@
 import { execFileSync } from 'node:child_process';
+import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
@@ -117,6 +118,13 @@ describe('New review', () => {
     expect(cover).toMatch(/Approved with conditions: the change from the in-?service oil “In-service oil” to the proposed oil “Proposed oil”/);
     expect(cover).toContain('Oil analysis after 500 h');
     expect(text).not.toMatch(/flankfilm sign|--reviewer/);
+    // The summary CSV: one row per case × oil, named by the review id.
+    await page.locator('[data-testid=export-summary-csv]').click();
+    await expect.poll(() => page.locator('[data-testid=notice]').textContent().catch(() => ''), { timeout: WAIT }).toMatch(/Summary CSV saved/);
+    expect(asked).toContain('PL-2026-014-summary.csv');
+    const summary = readFileSync(join(harness.workDir, SAVE_NAMES.csv), 'utf8').replace(/^\uFEFF/, '').trimEnd().split('\r\n');
+    expect(summary).toHaveLength(1 + 1 * 2); // 1 case × 2 oils
+    expect(summary[0]).toContain('all limits pass');
     // Dates on screen are ISO 8601.
     await expect(page.locator('[data-testid=signoff-details]').textContent()).resolves.toMatch(/\d{4}-\d{2}-\d{2} \d{2}:\d{2} UTC/);
     // pdfdetach lists the attached review by the id's name.

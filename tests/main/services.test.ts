@@ -163,7 +163,7 @@ describe('exports', () => {
   it('exportRecord renders first, then writes the bytes where the dialog says', async () => {
     const { call, calls } = setup();
     const r = await call('exportRecord', { text: DEMO_TEXT, paper: 'a4' });
-    expect(calls.save[0]).toMatch(/^record:harrow-creek-.*\.pdf$/);
+    expect(calls.save[0]).toBe('record:HC-DEMO-001.pdf'); // named by the review id (the demo's id is HC-DEMO-001)
     expect(r).toEqual({ canceled: false, path: expect.stringMatching(/\.pdf$/) as unknown as string, bytes: FAKE_PDF.byteLength });
     expect(await readFile((r as { path: string }).path)).toEqual(Buffer.from(FAKE_PDF));
   });

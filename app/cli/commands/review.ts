@@ -8,8 +8,10 @@ import { summaryText } from '../summary';
 import { status } from '../../review/status';
 import { operatingMaps, operatingMapsCsv } from '../../review/operatingMaps';
 import { atomicWrite } from '../../files/atomicWrite';
+import { resolve } from 'node:path';
+import { summaryCsv } from '../../report/summaryCsv';
 
-/** `flankfilm review FILE [--json] [--pdf OUT] [--csv OUT] [--map OUT.csv] [--p12 ID.p12] [--paper a4|letter]` */
+/** `flankfilm review FILE [--json] [--pdf OUT] [--csv OUT] [--summary-csv OUT] [--map OUT.csv] [--p12 ID.p12] [--paper a4|letter]` */
 export async function reviewCommand(args: string[], io: CliIo): Promise<number> {
   const { values, positionals } = parseArgs({
     args,
@@ -18,6 +20,7 @@ export async function reviewCommand(args: string[], io: CliIo): Promise<number> 
       json: { type: 'boolean', default: false },
       pdf: { type: 'string' },
       csv: { type: 'string' },
+      'summary-csv': { type: 'string' },
       map: { type: 'string' },
       p12: { type: 'string' },
       paper: { type: 'string', default: 'a4' },
@@ -45,6 +48,20 @@ export async function reviewCommand(args: string[], io: CliIo): Promise<number> 
   }
   if (values.json) io.out(`${JSON.stringify(results, null, 2)}\n`);
   else io.out(summaryText(results, { status: status(loaded.review, results), review: loaded.review }));
+  const summaryOut = values['summary-csv'];
+  if (summaryOut) {
+    if (resolve(summaryOut) === resolve(file)) {
+      io.err(`${summaryOut}: is the review itself; an output never overwrites its input\n`);
+      return EXIT.invalid;
+    }
+    try {
+      await atomicWrite(summaryOut, summaryCsv(results, loaded.review.displayUnits));
+      io.err(`wrote ${summaryOut}\n`);
+    } catch (e) {
+      io.err(`${summaryOut}: cannot write (${(e as NodeJS.ErrnoException).code ?? (e as Error).message})\n`);
+      return EXIT.invalid;
+    }
+  }
   if (values.map) {
     const maps = operatingMaps(loaded.review) ?? [];
     if (maps.length === 0) io.err(`${values.map}: the review has no oils, so the map has no cells (header only)\n`);

@@ -30,9 +30,13 @@ import { newReviewDraft } from './state/templates';
 import type { UnitSystem } from './units/units';
 import { basisTag, METHODS, type MethodEntry } from '../app/review/methods';
 import { decisionSubject } from '../app/review/decisionSubject';
+import { isDemoReview } from '../app/review/demo';
 
 /** One method as a line of the Help dialog: what, the formula, the source and how firmly it is held. */
 const methodLine = (m: MethodEntry): string => `${m.topic} — ${m.quantity}: ${m.formula} (${m.source}${basisTag(m.basis) ? `; ${basisTag(m.basis)}` : ''})`;
+
+/** Said once, here, rather than on every line that carries the tag. */
+const BASIS_NOTE = '“[memory]” marks a form or value recalled and checked against our own arithmetic but not read from the text; “common practice” marks a rule of thumb with no single source.';
 
 type Recovery = { text: string; path: string | null; savedAt: string };
 
@@ -128,7 +132,7 @@ export function App({ bridge }: { readonly bridge: Bridge }) {
       'export-record': () => void actions.exportRecord(units === 'us' ? 'letter' : 'a4'),
       'export-csv': () => void actions.exportCsv(),
       sign: () => setSigning(true),
-      methods: () => setInfo({ title: 'Methods and sources', lines: [...(computed.results?.assumptions ?? []), ...METHODS.map(methodLine)] }),
+      methods: () => setInfo({ title: 'Methods and sources', lines: [BASIS_NOTE, ...(computed.results?.assumptions ?? []), ...METHODS.map(methodLine)] }),
       about: () =>
         void bridge.appInfo({}).then((a) => setInfo({ title: 'About Flankfilm', lines: [`Flankfilm ${a.version}`, `Engine ${a.engineVersion}`, `Platform ${a.platform}`] })),
       'units-si': () => setUnits('si'),
@@ -179,6 +183,11 @@ export function App({ bridge }: { readonly bridge: Bridge }) {
         <Sheet.Provider value={sheet}>
           <main className="sheet">
             <div className="sheet__inputs" aria-label="Inputs" role="group">
+              {doc.draft && isDemoReview(doc.draft) ? (
+                <p className="demo-banner" role="note" data-testid="demo-banner">
+                  <strong>Invented demo.</strong> The Harrow Creek aggregate plant is made up; every number in this review (gear pair, duty, oils) is invented. Start your own with New review….
+                </p>
+              ) : null}
               <ProblemList issues={issues} engineError={review ? computed.error : null} stale={stale} />
               <RecordPanel />
               <GearPairPanel gear={results?.gear ?? null} stale={stale} />

@@ -83,8 +83,8 @@ describe('New review', () => {
       ['oils[1].density15_kgm3', '895'],
     ] as const) await enter(page, path, v);
     for (const i of [0, 1]) await field(page, `oils[${i}].baseOil`).selectOption({ label: 'Mineral' });
-    await field(page, 'oils[0].chemistry').selectOption({ label: 'R&O (rust and oxidation)' });
-    await field(page, 'oils[1].chemistry').selectOption({ label: 'EP (extreme pressure)' });
+    await field(page, 'oils[0].chemistry').selectOption({ label: 'R&O, rust and oxidation (DIN 51517-2 CL)' });
+    await field(page, 'oils[1].chemistry').selectOption({ label: 'EP, extreme pressure (DIN 51517-3 CLP)' });
     await field(page, 'oils[0].fzgFailureStage').selectOption({ label: '8' });
     await field(page, 'oils[1].fzgFailureStage').selectOption({ label: 'above 12' });
     await waitForResults(page);

@@ -23,7 +23,7 @@ describe('paths', () => {
     expect('centerDistance_mm' in next.gearPair).toBe(false);
   });
   it('getIn reads through arrays and returns undefined past the end', () => {
-    expect(getIn(demo(), ['loadCases', 1, 'name'])).toBe('Hard-rock peak (invented)');
+    expect(getIn(demo(), ['loadCases', 1, 'name'])).toBe('Hard-rock peak');
     expect(getIn(demo(), ['loadCases', 9, 'name'])).toBeUndefined();
   });
 });
@@ -66,7 +66,7 @@ describe('docReducer', () => {
     s = docReducer(s, { type: 'addItem', list: 'oils', item: { name: 'x' } });
     expect((getIn(s.draft, ['oils']) as unknown[]).length).toBe(3);
     s = docReducer(s, { type: 'removeItem', list: 'loadCases', index: 0 });
-    expect(getIn(s.draft, ['loadCases', 0, 'name'])).toBe('Hard-rock peak (invented)');
+    expect(getIn(s.draft, ['loadCases', 0, 'name'])).toBe('Hard-rock peak');
     s = docReducer(s, { type: 'toggleComponent', component: 'clutch', on: true });
     expect(getIn(s.draft, ['gearPair', 'components'])).toEqual(['backstop', 'clutch']);
     s = docReducer(s, { type: 'toggleComponent', component: 'backstop', on: false });

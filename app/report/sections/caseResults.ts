@@ -90,7 +90,8 @@ function keyFigures(u: Units, c: CaseResult): Row[] {
     ['Bulk temperature θM', u.fmt(c.bulkTemperature_C, 'temperature')],
     ['Flash temperature θfl,max', u.fmt(c.maxFlashTemperature_K, 'temperatureRise')],
     ['Contact temperature θB,max', `${u.fmt(c.maxContactTemperature_C, 'temperature')}${at(c.maxContactTemperaturePosition_mm)}`],
-    ['Scuffing temperature θS', `${c.scuffingTemperatureAtLeast && c.scuffingTemperature_C !== null ? '≥ ' : ''}${u.fmt(c.scuffingTemperature_C, 'temperature')}`],
+    // An oil that passed stage 12 has no measured θS: the stage-12 value is a floor, not a limit.
+    ['Scuffing temperature θS', c.scuffingTemperatureAtLeast ? 'above stage 12: not limiting' : u.fmt(c.scuffingTemperature_C, 'temperature')],
     ['Scuffing safety SB', formatNumber(c.scuffingSafety, 3)],
     ['Integral temperature θint / θintS', `${u.num(c.integralTemperature_C, 'temperature')} / ${u.fmt(c.integralScuffingTemperature_C, 'temperature')}`],
     ['Integral safety SintS', formatNumber(c.integralSafety, 3)],
@@ -159,7 +160,7 @@ function chartsOf(ctx: RecordContext, c: CaseResult): ChartSpec[] {
     series: [{ label: 'θB = θM + θfl', points: series((pt) => pt.contactTemperature_C, 'temperature'), color: OKABE_ITO.vermillion }],
     refLines: [
       ...(c.scuffingTemperature_C !== null
-        ? [{ y: u.value(c.scuffingTemperature_C, 'temperature'), label: `θS${c.scuffingTemperatureAtLeast ? ' (at least)' : ''}`, color: OKABE_ITO.blue, dash: [6, 3] as [number, number] }]
+        ? [{ y: u.value(c.scuffingTemperature_C, 'temperature'), label: c.scuffingTemperatureAtLeast ? 'θS of stage 12 (oil above it: not limiting)' : 'θS', color: OKABE_ITO.blue, dash: [6, 3] as [number, number] }]
         : []),
       ...(c.bulkTemperature_C !== null ? [{ y: u.value(c.bulkTemperature_C, 'temperature'), label: 'θM bulk', color: GREY, dash: [1.5, 2] as [number, number] }] : []),
     ],

@@ -37,7 +37,7 @@ export function CaseVerdictCard({ result: c, units, governing }: Props) {
         <Quantity def="maxHertzStress" value={c.maxHertzStress_MPa} units={units} sig={4} withSymbol testId="max-hertz" /> ·{' '}
         <Quantity def="maxContactTemperature" value={c.maxContactTemperature_C} units={units} sig={4} withSymbol /> ·{' '}
         {c.scuffingTemperatureAtLeast ? (
-          <span className="note">θS: the oil is above stage 12, not limiting</span>
+          <span className="note">θS: above stage 12: not limiting</span>
         ) : (
           <Quantity def="scuffingTemperature" value={c.scuffingTemperature_C} units={units} sig={4} withSymbol />
         )}

@@ -30,9 +30,10 @@ const BASE_WORDS: Readonly<Record<(typeof BASE_OILS)[number], string>> = {
   traction: 'Traction fluid',
 };
 const CHEMISTRY_WORDS: Readonly<Record<(typeof CHEMISTRIES)[number], string>> = {
-  'r-and-o': 'R&O (rust and oxidation)',
-  'anti-wear': 'AW (anti-wear)',
-  'extreme-pressure': 'EP (extreme pressure)',
+  // The trade's classes: R&O gear oil DIN 51517-2 CL, EP gear oil DIN 51517-3 CLP; anti-wear oils are mostly the hydraulic class DIN 51524-2 HLP.
+  'r-and-o': 'R&O, rust and oxidation (DIN 51517-2 CL)',
+  'anti-wear': 'AW, anti-wear (as DIN 51524-2 HLP)',
+  'extreme-pressure': 'EP, extreme pressure (DIN 51517-3 CLP)',
 };
 const STAGES: readonly (readonly [FzgStage, string])[] = [...FZG_STAGES.map((s) => [s, String(s)] as const), ['>12', 'above 12'] as const];
 

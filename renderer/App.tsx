@@ -47,6 +47,9 @@ export function App({ bridge }: { readonly bridge: Bridge }) {
   const [units, setUnits] = useState<UnitSystem>('si');
   const [signing, setSigning] = useState(false);
   const [starting, setStarting] = useState(false);
+  // The record's paper follows the units (Letter with US customary) until the user chooses one.
+  const [paperChoice, setPaperChoice] = useState<'a4' | 'letter' | null>(null);
+  const paper = paperChoice ?? (units === 'us' ? 'letter' : 'a4');
   // Fields with typed text not yet taken: the sheet says "computing" until they are.
   const [typing, setTyping] = useState<ReadonlySet<string>>(() => new Set());
   const pending = useCallback((key: string, on: boolean) => {
@@ -92,6 +95,15 @@ export function App({ bridge }: { readonly bridge: Bridge }) {
     return () => window.removeEventListener('keydown', onKey);
   }, []);
   const { setNotice } = actions;
+  /** The unit switch; when it moves the record's paper too, it says so (never silently). */
+  const switchUnits = useCallback(
+    (u: UnitSystem) => {
+      setUnits(u);
+      const next = u === 'us' ? 'letter' : 'a4';
+      if (paperChoice === null && next !== paper) setNotice({ kind: 'info', text: `The record's paper is now ${next === 'letter' ? 'Letter' : 'A4'}, with the ${u === 'us' ? 'US customary' : 'SI'} units; choose the paper beside Export record to keep another.` });
+    },
+    [paperChoice, paper, setNotice],
+  );
   const startNew = useCallback(
     (kind: TemplateKind) => {
       setStarting(false);
@@ -129,14 +141,14 @@ export function App({ bridge }: { readonly bridge: Bridge }) {
       open: () => void actions.open(path),
       save: () => void actions.save(false),
       'save-as': () => void actions.save(true),
-      'export-record': () => void actions.exportRecord(units === 'us' ? 'letter' : 'a4'),
+      'export-record': () => void actions.exportRecord(paper),
       'export-csv': () => void actions.exportCsv(),
       sign: () => setSigning(true),
       methods: () => setInfo({ title: 'Methods and sources', lines: [BASIS_NOTE, ...(computed.results?.assumptions ?? []), ...METHODS.map(methodLine)] }),
       about: () =>
         void bridge.appInfo({}).then((a) => setInfo({ title: 'About Flankfilm', lines: [`Flankfilm ${a.version}`, `Engine ${a.engineVersion}`, `Platform ${a.platform}`] })),
-      'units-si': () => setUnits('si'),
-      'units-us': () => setUnits('us'),
+      'units-si': () => switchUnits('si'),
+      'units-us': () => switchUnits('us'),
     };
     table[command]();
   };
@@ -168,7 +180,10 @@ export function App({ bridge }: { readonly bridge: Bridge }) {
         notice={actions.notice}
         canExport={review !== null}
         computing={computed.computing || typing.size > 0}
-        onUnits={setUnits}
+        onUnits={switchUnits}
+        paper={paper}
+        paperChosen={paperChoice !== null}
+        onPaper={setPaperChoice}
         onNew={() => setStarting(true)}
         onOpen={() => void actions.open()}
         onSave={() => void actions.save(false)}

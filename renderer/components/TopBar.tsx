@@ -1,4 +1,4 @@
-import { useId, useState } from 'react';
+import { useId } from 'react';
 import type { ReviewStatus } from '../../app/review/results';
 import type { Busy, Notice } from '../hooks/useDocumentActions';
 import type { UnitSystem } from '../units/units';
@@ -15,6 +15,10 @@ interface Props {
   readonly canExport: boolean;
   readonly computing: boolean;
   readonly onUnits: (u: UnitSystem) => void;
+  /** The record's paper: chosen, or following the units (Letter with US, A4 with SI) while not chosen. */
+  readonly paper: 'a4' | 'letter';
+  readonly paperChosen: boolean;
+  readonly onPaper: (paper: 'a4' | 'letter') => void;
   readonly onNew: () => void;
   readonly onOpen: () => void;
   readonly onSave: () => void;
@@ -45,8 +49,7 @@ export function TopBar(p: Props) {
   const why = whyDisabled(p);
   // A disabled command says why: as a tooltip, and to assistive technology by aria-describedby.
   const reason = why ? { title: why, 'aria-describedby': whyId } : {};
-  const [paper, setPaper] = useState<'a4' | 'letter' | null>(null);
-  const chosenPaper = paper ?? (p.units === 'us' ? 'letter' : 'a4');
+  const chosenPaper = p.paper;
   return (
     <header className="topbar">
       <div className="topbar__id">
@@ -67,7 +70,7 @@ export function TopBar(p: Props) {
         <button type="button" onClick={p.onSave} disabled={p.busy !== null}>Save</button>
         <span className="record-group">
           <label htmlFor={paperId} className="sr-only">Paper size of the record</label>
-          <select id={paperId} value={chosenPaper} onChange={(e) => setPaper(e.target.value as 'a4' | 'letter')}>
+          <select id={paperId} value={chosenPaper} onChange={(e) => p.onPaper(e.target.value as 'a4' | 'letter')} title={p.paperChosen ? 'Paper of the record' : 'Paper of the record: follows the units until you choose'} data-testid="paper">
             <option value="a4">A4</option>
             <option value="letter">Letter</option>
           </select>

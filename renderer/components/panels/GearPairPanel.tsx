@@ -18,15 +18,30 @@ const COMPONENT_WORDS: Readonly<Record<(typeof COMPONENTS)[number], string>> = {
   'paint-or-seal-sensitive': 'Sensitive paint or seals',
 };
 
+const MM_PER_INCH = 25.4;
+
 /** Geometry and materials of pinion and wheel, with the derived geometry beside them. */
 export function GearPairPanel({ gear, stale }: { readonly gear: GearResult | null; readonly stale: boolean }) {
   const { draft, dispatch, units } = useSheet();
   const components = (getIn(draft, ['gearPair', 'components']) as string[] | undefined) ?? [];
   const gp = ['gearPair'] as const;
+  const module = getIn(draft, [...gp, 'normalModule_mm']);
   return (
     <Panel id="gear-pair" title="Gear pair">
       <div className="grid-fields">
         <NumberField path={[...gp, 'normalModule_mm']} label="Normal module mn" kind="length" />
+        {units === 'us' ? (
+          // US gear practice gives the normal diametral pitch Pnd = 25.4 / mn (mn in mm, Pnd in 1/in); either sets the module.
+          <NumberField
+            path={[...gp, 'normalDiametralPitch']}
+            label="Normal diametral pitch Pnd"
+            unit="1/in"
+            derived
+            value={typeof module === 'number' && module > 0 ? MM_PER_INCH / module : undefined}
+            onValue={(v) => dispatch({ type: 'set', path: [...gp, 'normalModule_mm'], value: typeof v === 'number' && v > 0 ? MM_PER_INCH / v : v })}
+            note="Pnd = 25.4 / mn"
+          />
+        ) : null}
         <NumberField path={[...gp, 'normalPressureAngle_deg']} label="Pressure angle αn" unit="°" />
         <NumberField path={[...gp, 'helixAngle_deg']} label="Helix angle β" unit="°" />
         <NumberField path={[...gp, 'faceWidth_mm']} label="Face width b" kind="length" />

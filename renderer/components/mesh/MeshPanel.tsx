@@ -1,5 +1,5 @@
 import { memo, useEffect, useId, useMemo, useState } from 'react';
-import type { Results } from '../../../app/review/results';
+import type { CaseResult, Results } from '../../../app/review/results';
 import type { UnitSystem } from '../../units/units';
 import { Panel } from '../panels/Panel';
 import { QuantityRow } from '../Quantity';
@@ -12,14 +12,26 @@ interface Props {
   readonly units: UnitSystem;
 }
 
-/** Charts along the path of contact, A to E, for one load case × oil. */
+/** The load cases in the results' order, each with its rows (one per oil). */
+function byLoadCase(cases: readonly CaseResult[]): { name: string; rows: CaseResult[] }[] {
+  const out: { name: string; rows: CaseResult[] }[] = [];
+  for (const c of cases) {
+    const last = out[out.length - 1];
+    if (last && last.name === c.loadCase) last.rows.push(c);
+    else out.push({ name: c.loadCase, rows: [c] });
+  }
+  return out;
+}
+
+/** One strip of charts along the path of contact, A to E, for one load case with every oil drawn on the same chart. */
 function MeshPanelView({ results, limits, units }: Props) {
   const [picked, setPicked] = useState(0);
   const selectId = useId();
-  const cases = results?.cases ?? [];
-  const index = picked < cases.length ? picked : 0;
-  const c = cases[index];
-  const specs = useMemo(() => (c && results ? meshCharts(c, results.gear, limits, units) : []), [c, results, limits, units]);
+  const groups = useMemo(() => byLoadCase(results?.cases ?? []), [results]);
+  const index = picked < groups.length ? picked : 0;
+  const rows = groups[index]?.rows;
+  const c = rows?.[0];
+  const specs = useMemo(() => (rows && results ? meshCharts(rows, results.gear, limits, units, results.cases) : []), [rows, results, limits, units]);
   // The charts (children) have drawn their new data by now: the end of the edit-to-chart latency.
   useEffect(() => {
     if (specs.length) performance.mark('chart-updated');
@@ -32,11 +44,11 @@ function MeshPanelView({ results, limits, units }: Props) {
       title="Mesh"
       actions={
         <span className="field field--inline">
-          <label htmlFor={selectId}>Case</label>
+          <label htmlFor={selectId}>Load case</label>
           <select id={selectId} value={index} onChange={(e) => setPicked(Number(e.target.value))} data-testid="mesh-case">
-            {cases.map((x, i) => (
+            {groups.map((g, i) => (
               <option key={i} value={i}>
-                {x.loadCase} — {x.oil ?? 'no oil'}
+                {g.name}
               </option>
             ))}
           </select>
@@ -53,9 +65,10 @@ function MeshPanelView({ results, limits, units }: Props) {
         <QuantityRow def="maxContactTemperature" value={c.maxContactTemperature_C} units={units} sig={3} />
         <QuantityRow def="scuffingTemperature" value={c.scuffingTemperature_C} units={units} sig={3} />
       </dl>
-      <div className="mesh-grid">
+      <p className="note">Every oil of the case on the same charts, on axes fixed for the whole review; one position axis, A to E, for the strip.</p>
+      <div className="mesh-strip">
         {specs.map((s) => (
-          <MeshChart key={s.id} spec={s} fileStem={stem} />
+          <MeshChart key={s.id} spec={s} fileStem={stem} units={units} />
         ))}
       </div>
     </Panel>

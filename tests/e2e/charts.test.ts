@@ -43,3 +43,17 @@ describe('Mesh charts that read at a glance', () => {
     expect(s.pageErrors).toEqual([]);
   });
 });
+
+describe('grade finder', () => {
+  it('draws λmin against ISO VG with the target line, and says which grades the lubrication method leaves out and why', async () => {
+    const { page } = s;
+    const charts = page.locator('[data-testid=grade-chart]');
+    await expect(charts.count()).resolves.toBeGreaterThan(0);
+    const usable = (await charts.first().getAttribute('data-usable'))!.split(',').map(Number);
+    // The crusher demo runs dip lubricated at 7.36 m/s pitch-line velocity: VG 680 at most (common practice, app/review/gradeLimits.ts).
+    expect(Math.max(...usable)).toBe(680);
+    await expect(page.locator('[data-testid=grades-left-out]').first().textContent()).resolves.toMatch(/above ISO VG 680 are left out: dip lubrication .* churn/);
+    await expect(charts.first().locator('canvas').getAttribute('aria-label')).resolves.toMatch(/target 1/);
+    await shootPanel(page, 'side-by-side', 'grade-finder');
+  });
+});

@@ -16,6 +16,8 @@ describe('entry that never lies', () => {
   it('typing "1600" computes 1600 once, never "1", "16" or "160"; "computing" shows until then', async () => {
     const { page } = s;
     const speed = field(page, 'loadCases[0].pinionSpeed_rpm');
+    // Settle first: the name typed before commits per keystroke, and its recomputes may still be arriving.
+    await page.locator('.computing').waitFor({ state: 'detached', timeout: WAIT });
     const e0 = await edition(page);
     await speed.click();
     await speed.press('Control+A');
@@ -34,6 +36,7 @@ describe('entry that never lies', () => {
   it('Enter takes the value at once, without waiting for the pause', async () => {
     const { page } = s;
     const temp = field(page, 'loadCases[0].oilTemperature_C');
+    await page.locator('.computing').waitFor({ state: 'detached', timeout: WAIT });
     const e0 = await edition(page);
     await temp.click();
     await temp.press('Control+A');

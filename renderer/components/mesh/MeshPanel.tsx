@@ -57,13 +57,13 @@ function MeshPanelView({ results, limits, units }: Props) {
     >
       <dl className="qlist qlist--row">
         <QuantityRow def="maxHertzStress" value={c.maxHertzStress_MPa} units={units} sig={4} testId="mesh-max-hertz" />
-        <QuantityRow def="pitchLineVelocity" value={c.pitchLineVelocity_mps} units={units} sig={3} />
-        <QuantityRow def="lambdaMin" value={c.lambdaMin} units={units} sig={2} testId="mesh-lambda-min" />
-        <QuantityRow def="frictionCoefficient" value={c.frictionCoefficient} units={units} sig={2} />
-        <QuantityRow def="bulkTemperature" value={c.bulkTemperature_C} units={units} sig={3} />
-        <QuantityRow def="maxFlashTemperature" value={c.maxFlashTemperature_K} units={units} sig={3} />
-        <QuantityRow def="maxContactTemperature" value={c.maxContactTemperature_C} units={units} sig={3} />
-        <QuantityRow def="scuffingTemperature" value={c.scuffingTemperature_C} units={units} sig={3} />
+        <QuantityRow def="pitchLineVelocity" value={c.pitchLineVelocity_mps} units={units} sig={4} />
+        <QuantityRow def="lambdaMin" value={c.lambdaMin} units={units} sig={4} testId="mesh-lambda-min" />
+        <QuantityRow def="frictionCoefficient" value={c.frictionCoefficient} units={units} sig={4} />
+        <QuantityRow def="bulkTemperature" value={c.bulkTemperature_C} units={units} sig={4} />
+        <QuantityRow def="maxFlashTemperature" value={c.maxFlashTemperature_K} units={units} sig={4} />
+        <QuantityRow def="maxContactTemperature" value={c.maxContactTemperature_C} units={units} sig={4} />
+        <QuantityRow def="scuffingTemperature" value={c.scuffingTemperature_C} units={units} sig={4} />
       </dl>
       <p className="note">Every oil of the case on the same charts, on axes fixed for the whole review; one position axis, A to E, for the strip.</p>
       <div className="mesh-strip">

@@ -86,9 +86,9 @@ export function OilEditor({ index, summary }: { readonly index: number; readonly
       </div>
       {summary ? (
         <p className="derived-line">
-          <Quantity def="viscosityIndex" value={summary.viscosityIndex} units={units} sig={2} withSymbol /> ({summary.viscosityIndexSource}) ·{' '}
+          <Quantity def="viscosityIndex" value={summary.viscosityIndex} units={units} sig={4} withSymbol /> ({summary.viscosityIndexSource}) ·{' '}
           <Quantity def="isoVG" value={summary.isoVG === null ? 'outside ISO 3448' : `VG ${summary.isoVG}`} units={units} withSymbol /> ·{' '}
-          <Quantity def="lubricantFactor" value={summary.lubricantFactorXL} units={units} sig={2} withSymbol />
+          <Quantity def="lubricantFactor" value={summary.lubricantFactorXL} units={units} sig={3} withSymbol />
         </p>
       ) : null}
       <button type="button" className="link-button" onClick={() => dispatch({ type: 'removeItem', list: 'oils', index })}>

@@ -39,7 +39,7 @@ export function changeFindings(review: Review, cases: readonly CaseResult[]): Ch
       const finding: ChangeFindingCode = beyond || hardShort.length > 0 ? 'not-supported' : filmShort.length > 0 ? 'supported-with-conditions' : 'supported';
       const conditions =
         finding === 'supported-with-conditions'
-          ? [`Raise the film towards λmin ≥ ${review.policy.lambdaTarget}, or accept it knowingly: a heavier grade, a cooler sump or smoother flanks thicken the film; EP chemistry does not.`]
+          ? [`Raise the film towards the λ target (λmin ≥ ${review.policy.lambdaTarget}), or accept it knowingly: a heavier grade, a cooler sump or smoother flanks thicken the film; EP chemistry does not.`]
           : [];
       const statement =
         finding === 'supported'

@@ -45,6 +45,11 @@ describe('the polish an engineer expects', () => {
     await shootPanel(page, 'oils', 'oils-drop-downs');
   });
 
+  it('the disclaimer appears once on the Verdict, not on every card', async () => {
+    const text = await s.page.locator('[data-panel=verdict]').innerText();
+    expect(text.match(/lubricant list/g)).toHaveLength(1);
+  });
+
   it('Methods and sources explains “[memory]” once', async () => {
     const { page, harness } = s;
     harness.sendMenu({ command: 'methods' });

@@ -31,3 +31,15 @@ describe('US customary: diametral pitch, and the record paper never changed sile
     expect(s.pageErrors).toEqual([]);
   });
 });
+
+describe('reasons and cautions follow the display units', () => {
+  it('in US customary, a reason reads °F where the engine wrote °C', async () => {
+    const { page } = s;
+    await page.locator('[data-testid=units-us]').check();
+    const reasons = await page.locator('details.reasons-box[open] .reasons').first().innerText();
+    expect(reasons).toMatch(/\d °F/);
+    expect(reasons).not.toMatch(/\d °C/);
+    await page.locator('[data-testid=units-si]').check();
+    await expect(page.locator('details.reasons-box[open] .reasons').first().innerText()).resolves.toMatch(/\d °C/);
+  });
+});

@@ -5,6 +5,8 @@ import { defineConfig } from 'vitest/config';
 export default defineConfig({
   test: {
     include: ['tests/e2e/**/*.test.ts'],
+    // No Chromium: fail at once with how to install one (tests/e2e/findChromium.ts).
+    globalSetup: ['tests/e2e/globalSetup.ts'],
     environment: 'node',
     pool: 'forks',
     fileParallelism: false,

@@ -36,7 +36,7 @@ export function menuTemplate(input: MenuInput): MenuItemConstructorOptions[] {
   const file: MenuItemConstructorOptions = {
     label: '&File',
     submenu: [
-      cmd('New', 'new', 'CmdOrCtrl+N'),
+      cmd('New review…', 'new', 'CmdOrCtrl+N'),
       cmd('Open…', 'open', 'CmdOrCtrl+O'),
       { label: 'Open recent', submenu: recent },
       { type: 'separator' },

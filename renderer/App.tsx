@@ -16,6 +16,10 @@ import { CompareWith } from './components/signoff/CompareWith';
 import { TopBar } from './components/TopBar';
 import { RecoveryPrompt } from './components/RecoveryPrompt';
 import { InfoDialog } from './components/InfoDialog';
+import { NewReviewDialog } from './components/NewReviewDialog';
+import { RecordPanel } from './components/panels/RecordPanel';
+import type { DocAction } from './state/reviewState';
+import { TEMPLATE_WORDS, type TemplateKind } from '../app/review/templates';
 import { ProblemList } from './components/ProblemList';
 import { FleetView } from './components/fleet/FleetView';
 import { useDocument } from './hooks/useDocument';
@@ -28,19 +32,39 @@ import { lookupMessages, messagesByPath } from './state/messages';
 import { newReviewDraft } from './state/templates';
 import type { UnitSystem } from './units/units';
 import { basisTag, METHODS, type MethodEntry } from '../app/review/methods';
+import { decisionSubject } from '../app/review/decisionSubject';
+import { isDemoReview } from '../app/review/demo';
 
 /** One method as a line of the Help dialog: what, the formula, the source and how firmly it is held. */
 const methodLine = (m: MethodEntry): string => `${m.topic} — ${m.quantity}: ${m.formula} (${m.source}${basisTag(m.basis) ? `; ${basisTag(m.basis)}` : ''})`;
+
+/** Said once, here, rather than on every line that carries the tag. */
+const BASIS_NOTE = '“[memory]” marks a form or value recalled and checked against our own arithmetic but not read from the text; “common practice” marks a rule of thumb with no single source.';
 
 type Recovery = { text: string; handle: string | null; name: string | null; savedAt: string };
 
 /** The sheet: inputs on the left, findings on the right; state in a reducer, physics in a worker. */
 export function App({ bridge }: { readonly bridge: Bridge }) {
   const { doc, dispatch, review, issues } = useDocument();
-  const computed = useRecompute(review, doc.edition);
+  const computed = useRecompute(review, doc.edition, doc.opened);
   const [units, setUnits] = useState<UnitSystem>('si');
   const [signing, setSigning] = useState(false);
   const [compareRequest, setCompareRequest] = useState(0);
+  const [starting, setStarting] = useState(false);
+  // The record's paper follows the units (Letter with US customary) until the user chooses one.
+  const [paperChoice, setPaperChoice] = useState<'a4' | 'letter' | null>(null);
+  const paper = paperChoice ?? (units === 'us' ? 'letter' : 'a4');
+  // Fields with typed text not yet taken: the sheet says "computing" until they are.
+  const [typing, setTyping] = useState<ReadonlySet<string>>(() => new Set());
+  const pending = useCallback((key: string, on: boolean) => {
+    setTyping((s) => {
+      if (s.has(key) === on) return s;
+      const next = new Set(s);
+      if (on) next.add(key);
+      else next.delete(key);
+      return next;
+    });
+  }, []);
   const [recovery, setRecovery] = useState<Recovery | null>(null);
   const [info, setInfo] = useState<{ title: string; lines: string[] } | null>(null);
   const [view, setView] = useState<'review' | 'fleet'>('review');
@@ -64,10 +88,49 @@ export function App({ bridge }: { readonly bridge: Bridge }) {
     openText: useCallback((text: string) => void guard('open', async () => load(text, null, true, 'Opened the dropped review (not yet saved).')), [guard, load]),
   });
 
+  // Ctrl+N (Cmd+N): New review. In Electron the menu's accelerator does the same; opening twice is harmless.
+  useEffect(() => {
+    const onKey = (e: KeyboardEvent) => {
+      if ((e.ctrlKey || e.metaKey) && !e.shiftKey && !e.altKey && e.key.toLowerCase() === 'n') {
+        e.preventDefault();
+        setStarting(true);
+      }
+    };
+    window.addEventListener('keydown', onKey);
+    return () => window.removeEventListener('keydown', onKey);
+  }, []);
+  const { setNotice } = actions;
+  /** The unit switch; when it moves the record's paper too, it says so (never silently). */
+  const switchUnits = useCallback(
+    (u: UnitSystem) => {
+      setUnits(u);
+      const next = u === 'us' ? 'letter' : 'a4';
+      if (paperChoice === null && next !== paper) setNotice({ kind: 'info', text: `The record's paper is now ${next === 'letter' ? 'Letter' : 'A4'}, with the ${u === 'us' ? 'US customary' : 'SI'} units; choose the paper beside Export record to keep another.` });
+    },
+    [paperChoice, paper, setNotice],
+  );
+  const startNew = useCallback(
+    (kind: TemplateKind) => {
+      setStarting(false);
+      dispatch({ type: 'load', draft: newReviewDraft(kind), handle: null, dirty: false });
+      setUnits('si');
+      setNotice({ kind: 'info', text: `Started a new review from the ${TEMPLATE_WORDS[kind].name.toLowerCase()} template: fill in the marked inputs.` });
+    },
+    [dispatch, setNotice],
+  );
+  // An edit makes the last "Opened …" or "Saved …" notice out of date: it goes. Errors stay until the next command.
+  const edit = useCallback(
+    (a: DocAction) => {
+      if (a.type !== 'load' && a.type !== 'saved') setNotice((n) => (n?.kind === 'info' ? null : n));
+      dispatch(a);
+    },
+    [dispatch, setNotice],
+  );
+
   const messages = useMemo(() => messagesByPath(issues, review ? computed.error : null), [issues, review, computed.error]);
   const sheet = useMemo<SheetContext | null>(
-    () => (doc.draft ? { draft: doc.draft, units, dispatch, messagesAt: (k) => lookupMessages(messages, k) } : null),
-    [doc.draft, units, dispatch, messages],
+    () => (doc.draft ? { draft: doc.draft, units, dispatch: edit, messagesAt: (k) => lookupMessages(messages, k), pending } : null),
+    [doc.draft, units, edit, messages, pending],
   );
 
   const status: ReviewStatus = review ? (computed.status ?? 'draft') : doc.draft?.signoff ? 'changed-since-signing' : 'draft';
@@ -79,19 +142,19 @@ export function App({ bridge }: { readonly bridge: Bridge }) {
   const onMenu = useRef<(c: MenuCommand, handle?: string) => void>(() => undefined);
   onMenu.current = (command, handle) => {
     const table: Record<MenuCommand, () => void> = {
-      new: () => dispatch({ type: 'load', draft: newReviewDraft(), handle: null, dirty: true }),
+      new: () => setStarting(true),
       open: () => void actions.open(handle),
       save: () => void actions.save(false),
       'save-as': () => void actions.save(true),
-      'export-record': () => void actions.exportRecord(units === 'us' ? 'letter' : 'a4'),
+      'export-record': () => void actions.exportRecord(paper),
       'export-csv': () => void actions.exportCsv(),
       sign: () => setSigning(true),
       compare: () => setCompareRequest((n) => n + 1),
-      methods: () => setInfo({ title: 'Methods and sources', lines: [...(computed.results?.assumptions ?? []), ...METHODS.map(methodLine)] }),
+      methods: () => setInfo({ title: 'Methods and sources', lines: [BASIS_NOTE, ...(computed.results?.assumptions ?? []), ...METHODS.map(methodLine)] }),
       about: () =>
         void bridge.appInfo({}).then((a) => setInfo({ title: 'About Flankfilm', lines: [`Flankfilm ${a.version}`, `Engine ${a.engineVersion}`, `Platform ${a.platform}`] })),
-      'units-si': () => setUnits('si'),
-      'units-us': () => setUnits('us'),
+      'units-si': () => switchUnits('si'),
+      'units-us': () => switchUnits('us'),
     };
     table[command]();
   };
@@ -127,17 +190,22 @@ export function App({ bridge }: { readonly bridge: Bridge }) {
         busy={actions.busy}
         notice={actions.notice}
         canExport={review !== null}
-        computing={computed.computing}
-        onUnits={setUnits}
+        computing={computed.computing || typing.size > 0}
+        onUnits={switchUnits}
+        paper={paper}
+        paperChosen={paperChoice !== null}
+        onPaper={setPaperChoice}
+        onNew={() => setStarting(true)}
         onOpen={() => void actions.open()}
         onSave={() => void actions.save(false)}
         onRecord={(paper) => void actions.exportRecord(paper)}
-        onCsv={() => void actions.exportCsv()}
+        onCsv={(table) => void actions.exportCsv(table)}
         onSign={() => setSigning(true)}
         progress={actions.progress}
         onCancelRecord={actions.cancelRecord}
       />
       {recovery ? <RecoveryPrompt savedAt={recovery.savedAt} name={recovery.name} onRecover={() => recover(recovery)} onDiscard={discard} /> : null}
+      {starting ? <NewReviewDialog dirty={doc.dirty} onStart={startNew} onClose={() => setStarting(false)} /> : null}
       {info ? <InfoDialog title={info.title} lines={info.lines} onClose={() => setInfo(null)} /> : null}
       <nav className="view-switch" aria-label="View">
         <button type="button" aria-pressed={view === 'review'} onClick={() => setView('review')}>Review</button>
@@ -148,7 +216,13 @@ export function App({ bridge }: { readonly bridge: Bridge }) {
         <Sheet.Provider value={sheet}>
           <main className="sheet">
             <div className="sheet__inputs" aria-label="Inputs" role="group">
+              {doc.draft && isDemoReview(doc.draft) ? (
+                <p className="demo-banner" role="note" data-testid="demo-banner">
+                  <strong>Invented demo.</strong> The Harrow Creek aggregate plant is made up; every number in this review (gear pair, duty, oils) is invented. Start your own with New review….
+                </p>
+              ) : null}
               <ProblemList issues={issues} engineError={review ? computed.error : null} stale={stale} />
+              <RecordPanel />
               <GearPairPanel results={results ?? null} stale={stale} />
               <DutyPanel />
               <OilsPanel summaries={results?.oils ?? []} />
@@ -160,7 +234,7 @@ export function App({ bridge }: { readonly bridge: Bridge }) {
               <SideBySidePanel results={results} units={units} />
               <MeshPanel results={results} review={review} limits={limits} units={units} />
               <MapPanel review={review} edition={doc.edition} results={results} units={units} />
-              <SignoffPanel status={status} signoff={review?.signoff} canSign={review !== null} onOpen={() => setSigning(true)}>
+              <SignoffPanel status={status} signoff={review?.signoff} review={review} canSign={review !== null} onOpen={() => setSigning(true)}>
                 <ChangesSinceSigning review={review} results={results ?? null} status={status} units={units} />
                 <CompareWith review={review} units={units} pickOther={pickOther} request={compareRequest} />
               </SignoffPanel>
@@ -169,6 +243,7 @@ export function App({ bridge }: { readonly bridge: Bridge }) {
           <SignoffDialog
             open={signing}
             previous={review?.signoff}
+            subject={review ? decisionSubject(review) : 'the review as a whole'}
             onClose={() => setSigning(false)}
             onSign={async (form) => {
               await actions.sign(form);

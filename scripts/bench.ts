@@ -33,7 +33,7 @@ function review(mutate: (r: RawReview) => void): Review {
 function workload(points: number): Review {
   return review((r) => {
     r.policy.pathPoints = points;
-    r.oils.push({ ...(r.oils[1] as Record<string, unknown>), name: 'Candidate: ISO VG 460 EP mineral (invented data sheet)', role: 'candidate', kv40_mm2s: 460, kv100_mm2s: 30.6, viscosityIndex: undefined });
+    r.oils.push({ ...(r.oils[1] as Record<string, unknown>), name: 'ISO VG 460 EP mineral', role: 'candidate', kv40_mm2s: 460, kv100_mm2s: 30.6, viscosityIndex: undefined });
   });
 }
 

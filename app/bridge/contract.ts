@@ -34,9 +34,9 @@ export const contract = {
   },
   /** Stop the record export under way (its worker is ended; nothing is written); canceled: whether one was running. */
   cancelExport: { args: z.object({}), result: z.object({ canceled: z.boolean() }) },
-  /** Write the along-path CSV of every case. */
+  /** Write a CSV: every point along the path of every case, or the summary (one row per case × oil). */
   exportCsv: {
-    args: z.strictObject({ text: z.string().max(2_000_000), handle: documentHandle.nullable().optional() }),
+    args: z.strictObject({ text: z.string().max(2_000_000), handle: documentHandle.nullable().optional(), table: z.enum(['points', 'summary']).optional() }),
     result: z.union([z.object({ canceled: z.literal(false), name: fileName }), canceled]),
   },
   /** Render the fleet record (PDF) of reviews (by file name and text) against a candidate-oil file, and save it by a dialog. */

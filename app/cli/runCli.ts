@@ -3,6 +3,7 @@ import { EXIT, USAGE, UsageError, type CliIo } from './io';
 import { reviewCommand } from './commands/review';
 import { schemaCommand } from './commands/schema';
 import { demoCommand } from './commands/demo';
+import { newCommand } from './commands/new';
 
 type Command = (args: string[], io: CliIo) => Promise<number>;
 
@@ -10,6 +11,7 @@ const COMMANDS: Record<string, Command> = {
   review: reviewCommand,
   schema: schemaCommand,
   demo: demoCommand,
+  new: newCommand,
   sign: async (args, io) => (await import('./commands/sign')).signCommand(args, io),
   verify: async (args, io) => (await import('./commands/verify')).verifyCommand(args, io),
   diff: async (args, io) => (await import('./commands/diff')).diffCommand(args, io),

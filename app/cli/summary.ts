@@ -1,5 +1,6 @@
 import type { CaseResult, ChangeSide, GearResult, LimitCheck, PlanetaryResult, Results, Shortfall } from '../review/results';
-import { DECISION_WORDS, SHORTFALL_ORDER, HELD_WORDS, MESH_WORDS, OIL_FIT_WORDS, REGIME_WORDS, SHORTFALL_SHORT, VERDICT_WORDS } from '../review/vocabulary';
+import { SHORTFALL_ORDER, HELD_WORDS, MESH_WORDS, OIL_FIT_WORDS, REGIME_WORDS, SHORTFALL_SHORT, VERDICT_WORDS } from '../review/vocabulary';
+import { decisionLine } from '../review/decisionSubject';
 import type { ReviewStatus } from '../review/results';
 import type { Review } from '../review/schema';
 import { STATUS_WORDS } from '../review/status';
@@ -12,6 +13,7 @@ const shortfallList = (xs: readonly Shortfall[]) => SHORTFALL_ORDER.filter((s) =
 
 /** A figure against its limit, with the word that says pass or fail (never colour alone). */
 export function checkText(k: LimitCheck): string {
+  if (k.value === null) return `${k.symbol} not defined (limit ${k.limit})`;
   const mark = k.pass === null ? 'not defined' : k.pass ? 'pass' : 'FAIL';
   return `${k.symbol} ${f(k.value)} ${k.pass === false ? '<' : '≥'} ${k.limit} ${mark}`;
 }
@@ -25,7 +27,7 @@ export function summaryText(r: Results, state?: { status: ReviewStatus; review: 
   const lines = [
     `${r.title}`,
     `Flankfilm ${r.flankfilm}`,
-    ...(state ? [`Status: ${STATUS_WORDS[state.status]}${so ? ` — ${DECISION_WORDS[so.decision]} by ${so.reviewer} (${so.role}) on ${so.signedAt.slice(0, 10)}` : ''}`] : []),
+    ...(state ? [`Status: ${STATUS_WORDS[state.status]}${so && state ? ` — ${decisionLine(so, state.review)}, by ${so.reviewer} (${so.role}) on ${so.signedAt.slice(0, 10)}` : ''}`] : []),
     '',
   ];
   if (r.need) lines.push(`What the duty needs — ${VERDICT_WORDS[r.need.code]}`, `  ${r.need.statement}`, '');

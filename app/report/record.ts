@@ -86,10 +86,15 @@ export function recordDate(review: Review): Date {
   return Number.isNaN(d.getTime()) ? new Date(0) : d;
 }
 
-/** File name of the attached review. */
+/** The review id as a file-name stem ("PL 2026/014" → "PL-2026-014"), or null without an id. */
+export function idStem(review: Pick<Review, 'id'>): string | null {
+  const id = (review.id ?? '').replace(/[^A-Za-z0-9._-]+/g, '-').replace(/^-+|-+$/g, '');
+  return id || null;
+}
+
+/** File name of the attached review: it follows the review id. */
 export function attachmentName(review: Review): string {
-  const id = (review.id ?? 'review').replace(/[^A-Za-z0-9._-]+/g, '-').replace(/^-+|-+$/g, '') || 'review';
-  return `${id}.flankfilm.json`;
+  return `${idStem(review) ?? 'review'}.flankfilm.json`;
 }
 
 /** The review holds text the record's font cannot draw (it would print as boxes); the message names each field. */

@@ -51,7 +51,7 @@ export function changeFindings(review: Review, cases: readonly CaseResult[]): Ch
       const conditions =
         finding === 'supported-with-conditions'
           ? [
-              ...(filmShort.length > 0 ? [`Raise the film towards λmin ≥ ${review.policy.lambdaTarget} in ${quoted(filmShort)}, or accept it knowingly: a heavier grade, a cooler sump or smoother flanks thicken the film; EP chemistry does not.`] : []),
+              ...(filmShort.length > 0 ? [`Raise the film towards the λ target (λmin ≥ ${review.policy.lambdaTarget}) in ${quoted(filmShort)}, or accept it knowingly: a heavier grade, a cooler sump or smoother flanks thicken the film; EP chemistry does not.`] : []),
               ...(mpUnknown.length > 0
                 ? [`The proposed oil's micropitting failure stage (FVA 54, C-GF gear) is not given: obtain it before the change; the duty needs stage ${micropittingNeedWords(mpNeeded > 10 ? '>10' : mpNeeded)} in ${quoted(mpUnknown.map((x) => x.c.loadCase))}. Some EP additive systems lower micropitting resistance.`]
                 : []),

@@ -8,3 +8,7 @@ export const DEMO_REVIEWS: Readonly<Record<string, unknown>> = {
   'harrow-creek-conveyor-spur-pair.flankfilm.json': conveyor,
   'harrow-creek-ball-mill-planetary.flankfilm.json': ballMill,
 };
+
+/** The demo reviews' ids start so; a review with such an id is the invented demo, and the sheet says so once. */
+export const DEMO_ID_PREFIX = 'HC-DEMO-';
+export const isDemoReview = (draft: { readonly id?: unknown }): boolean => typeof draft.id === 'string' && draft.id.startsWith(DEMO_ID_PREFIX);

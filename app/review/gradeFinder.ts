@@ -7,6 +7,7 @@ import { makeOilModel } from '../engine/oil/oilModel';
 import { kv100ForViscosityIndex } from '../engine/oil/viscosityIndex';
 import { centistokes, micrometres, type KilogramsPerCubicMetre, type SquareMetresPerSecond } from '../engine/units';
 import { engineDutyOf } from './engineInputs';
+import { usableOverCases } from './gradeLimits';
 import type { ReviewOil } from './oils';
 import type { GradeFinderResult, GradeFinderRow } from './results';
 import type { PairReview } from './schema';
@@ -34,22 +35,32 @@ export function gradeFinder(review: PairReview, geometry: GearPairGeometry, pini
   const roughnessRa2 = micrometres(review.gearPair.wheel.roughnessRa_um);
   const finderPolicy = { ...policy, pathPoints: Math.min(policy.pathPoints, FINDER_PATH_POINTS) };
   const cases = review.loadCases.map((_, li) => prepareSweep({ geometry, pinion, wheel, roughnessRa1, roughnessRa2, duty: engineDutyOf(review, li), policy: finderPolicy, caseField: `loadCases[${li}]` }));
+  // Only grades the lubrication method can use at every case's pitch-line velocity are offered.
+  const usable = usableOverCases(
+    review.loadCases.map((lc) => {
+      const w1 = (2 * Math.PI * lc.pinionSpeed_rpm) / 60;
+      return { name: lc.name, lubrication: lc.lubrication, pitchLineVelocity_mps: (w1 * geometry.workingDiameter1) / 2 };
+    }),
+  );
   // Oils that share base oil, VI and density share a table.
   const tables = new Map<string, GradeFinderRow[]>();
   return oils.map((oil) => {
     const vi = oil.model.viscosityIndex.value;
     const key = `${oil.baseOil}|${vi}|${oil.source.density15_kgm3}`;
-    const table = tables.get(key) ?? gradeTable(review, cases, oil, tHigh);
+    const table = (tables.get(key) ?? gradeTable(review, cases, oil, tHigh)).map((r) => ({ ...r, usable: r.isoVG <= usable.maxVG }));
     tables.set(key, table);
-    const hit = table.find((r) => r.lambdaMin >= policy.lambdaTarget);
+    const hit = table.find((r) => r.usable && r.lambdaMin >= policy.lambdaTarget);
+    const heavier = table.some((r) => !r.usable);
     return {
       oil: oil.name,
       recommendedVG: hit?.isoVG ?? null,
       currentVG: oil.model.isoVG,
       table,
+      usableMaxVG: usable.maxVG,
+      leftOut: heavier ? `Grades above ISO VG ${usable.maxVG} are left out: ${usable.reason}.` : '',
       note: hit
         ? `ISO VG ${hit.isoVG} is the lowest grade (VI ${vi.toFixed(0)}, ${oil.baseOil}) with λmin ≥ ${policy.lambdaTarget} in every load case up to ${tHigh} °C.`
-        : `No grade from VG ${CANDIDATE_GRADES[0]} to VG ${CANDIDATE_GRADES[CANDIDATE_GRADES.length - 1]} reaches λmin ≥ ${policy.lambdaTarget} in every load case up to ${tHigh} °C: smoother flanks, a cooler sump or a higher VI would.`,
+        : `No grade from VG ${CANDIDATE_GRADES[0]} to VG ${Math.min(usable.maxVG, CANDIDATE_GRADES[CANDIDATE_GRADES.length - 1] ?? usable.maxVG)} reaches λmin ≥ ${policy.lambdaTarget} in every load case up to ${tHigh} °C: smoother flanks, a cooler sump or a higher VI would.`,
     };
   });
 }
@@ -75,7 +86,7 @@ function gradeTable(review: PairReview, cases: readonly SweepCase[], oil: Review
       evaluateCell(sc, so, t, 1, cell);
       if (cell.lambdaMin < lambdaMin) lambdaMin = cell.lambdaMin;
     });
-    if (Number.isFinite(lambdaMin)) table.push({ isoVG: vg, lambdaMin });
+    if (Number.isFinite(lambdaMin)) table.push({ isoVG: vg, lambdaMin, usable: true });
   }
   return table;
 }

@@ -50,9 +50,10 @@ export const BASE_OIL_WORDS: Readonly<Record<(typeof BASE_OILS)[number], string>
 };
 
 export const CHEMISTRY_WORDS: Readonly<Record<(typeof CHEMISTRIES)[number], string>> = {
-  'r-and-o': 'R&O (rust and oxidation)',
-  'anti-wear': 'AW (anti-wear)',
-  'extreme-pressure': 'EP (extreme pressure)',
+  // The trade's classes: R&O gear oil DIN 51517-2 CL, EP gear oil DIN 51517-3 CLP; anti-wear oils are mostly the hydraulic class DIN 51524-2 HLP.
+  'r-and-o': 'R&O, rust and oxidation (DIN 51517-2 CL)',
+  'anti-wear': 'AW, anti-wear (as DIN 51524-2 HLP)',
+  'extreme-pressure': 'EP, extreme pressure (DIN 51517-3 CLP)',
 };
 
 export const FILM_FORMULA_WORDS: Readonly<Record<(typeof FILM_FORMULAS)[number], string>> = {

@@ -41,8 +41,9 @@ export function dutyNeed(review: Review, cases: readonly CaseResult[], grades: r
   const stagePart = [flash !== null ? `FZG stage ${stageWords(flash)} by the flash temperature method` : null, integral !== null ? `${stageWords(integral)} by the integral temperature method` : null]
     .filter((x): x is string => x !== null)
     .join(' and ');
-  const topVG = CANDIDATE_GRADES[CANDIDATE_GRADES.length - 1];
-  const vgPart = isoVG !== null ? `ISO VG ${isoVG} at least for λmin ≥ ${review.policy.lambdaTarget}` : `no ISO VG up to ${topVG} reaches λmin ≥ ${review.policy.lambdaTarget}`;
+  // The heaviest grade offered is the one the lubrication method can use at the cases' speeds.
+  const topVG = Math.min(CANDIDATE_GRADES[CANDIDATE_GRADES.length - 1] ?? Infinity, ...grades.map((g) => g.usableMaxVG));
+  const vgPart = isoVG !== null ? `ISO VG ${isoVG} at least for λmin ≥ ${review.policy.lambdaTarget}` : `no ISO VG up to ${topVG} (the heaviest the lubrication method can use) reaches λmin ≥ ${review.policy.lambdaTarget}`;
   const needed = Math.max(stageNumber(flash), stageNumber(integral));
   const p = review.policy;
   const chemistryReason =

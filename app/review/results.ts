@@ -225,6 +225,8 @@ export interface OverallVerdict {
 export interface GradeFinderRow {
   isoVG: number;
   lambdaMin: number;
+  /** The lubrication method can use this grade at the cases' speeds (app/review/gradeLimits.ts). */
+  usable: boolean;
 }
 
 export interface GradeFinderResult {
@@ -233,6 +235,9 @@ export interface GradeFinderResult {
   currentVG: number | null;
   table: GradeFinderRow[];
   note: string;
+  /** The heaviest grade offered, and why heavier ones are left out. */
+  usableMaxVG: number;
+  leftOut: string;
 }
 
 export interface GearResult {

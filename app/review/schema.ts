@@ -254,6 +254,17 @@ export const signoffSchema = z.strictObject({
   history: z.array(earlierSignoffSchema).max(MAX_SIGNOFF_HISTORY).optional(),
 });
 
+/** A gear pair review gives every load case its pinion speed (a planetary stage gives the sun's or carrier's). */
+function pinionSpeedGiven(raw: unknown, ctx: z.RefinementCtx): void {
+  const r = raw as { gearPair?: unknown; planetary?: unknown; loadCases?: unknown };
+  if (typeof r !== 'object' || r === null || r.gearPair === undefined || r.planetary !== undefined || !Array.isArray(r.loadCases)) return;
+  r.loadCases.forEach((c: unknown, i: number) => {
+    if (typeof c === 'object' && c !== null && (c as { pinionSpeed_rpm?: unknown }).pinionSpeed_rpm === undefined) {
+      ctx.addIssue({ code: 'custom', path: ['loadCases', i, 'pinionSpeed_rpm'], message: 'is required for a gear pair' });
+    }
+  });
+}
+
 export const reviewSchema = z
   .strictObject({
     format: z.literal(REVIEW_FORMAT),
@@ -281,7 +292,6 @@ export const reviewSchema = z
         for (const k of keys) if ((c as Record<string, unknown>)[k] !== undefined) need(k, why);
       };
       if (r.gearPair) {
-        if (c.pinionSpeed_rpm === undefined) need('pinionSpeed_rpm', 'is required for a gear pair');
         forbid(['sunSpeed_rpm', 'carrierSpeed_rpm', 'sunTorque_Nm'], 'belongs to a planetary stage; a gear pair gives pinionSpeed_rpm and pinionTorque_Nm or power_kW');
       } else if (r.planetary) {
         const sunHeld = r.planetary.held === 'sun';
@@ -291,7 +301,9 @@ export const reviewSchema = z
         forbid(['pinionSpeed_rpm', 'pinionTorque_Nm'], 'belongs to a gear pair; a planetary stage gives sunSpeed_rpm and sunTorque_Nm or power_kW');
       }
     });
-  });
+  })
+  // Checked even while other fields are missing, so a new review marks the pinion speed at once.
+  .check(z.superRefine(pinionSpeedGiven, { when: () => true }));
 
 /** A review as written in a file (defaults may be absent). */
 export type ReviewInput = z.input<typeof reviewSchema>;

@@ -4,11 +4,15 @@ import { pathClash } from '../../app/files/sameFile';
 import type { Documents } from './documents';
 import { signReview as signOff } from '../../app/review/signoff';
 import { explainFsError, UserError } from './errors';
+import { idStem } from '../../app/report/record';
 import { slugOf } from './paths';
 import { resultsOf } from './compute';
 import { listIssues, reviewJson, reviewOf } from './reviewText';
 import { ExportCanceled } from './report';
 import type { Dialogs, RecordProgress, ReportPort, SaveKind, ServiceArgs, Services } from './types';
+
+/** Exported files are named by the review id, else by the title. */
+const stemOf = (review: { id?: string | undefined; title: string }): string => idStem(review) ?? slugOf(review.title);
 
 type ExportDeps = { dialogs: Dialogs; report: ReportPort; documents: Documents; onExportProgress?: (p: RecordProgress) => void; exports: ExportControl };
 
@@ -63,15 +67,18 @@ export async function exportRecord(deps: ExportDeps, args: ServiceArgs<'exportRe
   } finally {
     deps.exports.end(control);
   }
-  const path = await writeExport(deps, args.handle, 'record', `${slugOf(review.title)}.pdf`, pdf);
+  const path = await writeExport(deps, args.handle, 'record', `${stemOf(review)}.pdf`, pdf);
   return path === null ? { canceled: true } : { canceled: false, name: basename(path), bytes: pdf.byteLength };
 }
 
-/** The along-path CSV of every case. */
+/** The along-path CSV of every case, or the summary CSV (one row per case × oil). */
 export async function exportCsv(deps: ExportDeps, args: ServiceArgs<'exportCsv'>): ReturnType<Services['exportCsv']> {
   const { review } = reviewOf(args.text, 'no CSV written');
-  const csv = deps.report.casesCsv(resultsOf(review, 'no CSV written'), review.displayUnits);
-  const path = await writeExport(deps, args.handle, 'csv', `${slugOf(review.title)}-cases.csv`, csv);
+  const results = resultsOf(review, 'no CSV written');
+  const summary = args.table === 'summary';
+  if (summary && !deps.report.summaryCsv) throw new UserError('no CSV written: the summary table is not available');
+  const csv = summary && deps.report.summaryCsv ? deps.report.summaryCsv(results, review.displayUnits) : deps.report.casesCsv(results, review.displayUnits);
+  const path = await writeExport(deps, args.handle, 'csv', `${stemOf(review)}-${summary ? 'summary' : 'cases'}.csv`, csv);
   return path === null ? { canceled: true } : { canceled: false, name: basename(path) };
 }
 

@@ -6,6 +6,7 @@
 import { Worker } from 'node:worker_threads';
 import { renderFleetRecord } from '../../app/report/fleet/fleetRecord';
 import { resultsToCsv } from '../../app/report/csv';
+import { summaryCsv } from '../../app/report/summaryCsv';
 import { loadRecordFonts } from '../../app/report/fonts';
 import { RecordTextError, renderRecord } from '../../app/report/record';
 import { operatingMaps } from '../../app/review/operatingMaps';
@@ -35,6 +36,7 @@ export function createReportPort(fontsDir?: string, worker?: WorkerSpec): Report
       worker ? inWorker(worker, { review, paper, ...(fontsDir ? { fontsDir } : {}) }, onProgress, signal) : inThread(review, paper, fontsDir),
     casesCsv: (results, units) => resultsToCsv(results, units),
     renderFleetRecord: async (result, inputs, { paper }) => renderFleetRecord(result, inputs, { paper, ...(fontsDir ? { fonts: loadRecordFonts(fontsDir) } : {}) }),
+    summaryCsv: (results, units) => summaryCsv(results, units),
   };
 }
 

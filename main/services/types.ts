@@ -39,6 +39,8 @@ export interface ReportPort {
   casesCsv(results: Results, units: Review['displayUnits']): string;
   /** The fleet record; app/report's own when not injected. */
   renderFleetRecord?(result: FleetResult, inputs: FleetInputs, options: { paper: Paper }): Promise<Uint8Array>;
+  /** One row per case × oil: key figures, limits, pass or fail. */
+  summaryCsv?(results: Results, units: Review['displayUnits']): string;
 }
 
 export interface DocumentState {

@@ -1,5 +1,6 @@
 import { useEffect, useRef } from 'react';
 import { trapTab } from './focusTrap';
+import { isoDateTime } from '../../app/review/decisionSubject';
 
 interface Props {
   readonly savedAt: string;
@@ -22,7 +23,7 @@ export function RecoveryPrompt({ savedAt, name, onRecover, onDiscard }: Props) {
     <dialog ref={ref} className="dialog" aria-labelledby="recover-title" onCancel={(e) => e.preventDefault()} onKeyDown={trapTab} data-testid="recovery">
       <h2 id="recover-title">Recover unsaved edits?</h2>
       <p>
-        Edits that were not saved were kept on {new Date(savedAt).toLocaleString()}
+        Edits that were not saved were kept on {isoDateTime(savedAt)}
         {name ? ` for ${name}` : ''}.
       </p>
       <div className="dialog__buttons">

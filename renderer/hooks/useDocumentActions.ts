@@ -104,11 +104,11 @@ export function useDocumentActions({ bridge, doc, review, dispatch, setUnits }: 
   );
 
   const exportCsv = useCallback(
-    () =>
+    (table: 'points' | 'summary' = 'points') =>
       guard('csv', async () => {
         if (!doc.draft || !review) throw new Error('Correct the marked inputs before exporting the CSV.');
-        const r = await bridge.exportCsv({ text: draftText(doc.draft), handle: doc.handle });
-        return r.canceled ? null : `CSV saved to ${r.name}`;
+        const r = await bridge.exportCsv({ text: draftText(doc.draft), handle: doc.handle, table });
+        return r.canceled ? null : `${table === 'summary' ? 'Summary CSV' : 'CSV'} saved as ${r.name}`;
       }),
     [bridge, doc.draft, doc.handle, review, guard],
   );
@@ -129,7 +129,7 @@ export function useDocumentActions({ bridge, doc, review, dispatch, setUnits }: 
         });
         const { draft } = draftOf(r.text);
         if (!draft) throw new Error('The signed review came back unreadable.');
-        dispatch({ type: 'load', draft, handle: doc.handle, name: doc.name, dirty: true });
+        dispatch({ type: 'load', draft, handle: doc.handle, name: doc.name, dirty: true, sameReview: true });
         setNotice({ kind: 'info', text: `Signed by ${form.reviewer.trim()}. Save the review to keep the sign-off.` });
       } finally {
         setBusy(null);

@@ -17,13 +17,18 @@ export interface Computed {
 }
 
 /** Recompute each valid edition in the worker, latest wins; the UI thread only posts and receives. */
-export function useRecompute(review: Review | null, edition: number): Computed {
+export function useRecompute(review: Review | null, edition: number, opened = 0): Computed {
   const [state, setState] = useState<Computed>({ results: null, status: null, edition: -1, error: null, computing: false, millis: null });
   const client = useRef<RecomputeClient | null>(null);
   const asked = useRef(-1);
+  // Answers for editions before the review was opened belong to the previous review: dropped.
+  const floor = useRef(-1);
+  const latest = useRef(edition);
+  latest.current = edition;
 
   useEffect(() => {
     const c = new RecomputeClient((res) => {
+      if (res.edition < floor.current) return;
       const done = res.edition >= asked.current;
       startTransition(() =>
         setState((s) =>
@@ -39,6 +44,12 @@ export function useRecompute(review: Review | null, edition: number): Computed {
       if (client.current === c) client.current = null;
     };
   }, []);
+
+  // Another review opened: the last one's results are not "the last valid entry" of this one.
+  useEffect(() => {
+    floor.current = latest.current;
+    setState((s) => (s.results || s.error ? { results: null, status: null, edition: -1, error: null, computing: false, millis: null } : s));
+  }, [opened]);
 
   useEffect(() => {
     if (!review || !client.current) return;

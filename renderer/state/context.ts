@@ -9,6 +9,8 @@ export interface SheetContext {
   readonly dispatch: Dispatch<DocAction>;
   /** Messages for a field by its dotted path (schema issues, then an engine input error). */
   readonly messagesAt: (pathKey: string) => readonly string[];
+  /** A field has typed text not yet taken into the draft (on), or has taken it (off). */
+  readonly pending: (pathKey: string, on: boolean) => void;
 }
 
 export const Sheet = createContext<SheetContext | null>(null);

@@ -6,6 +6,8 @@ export function friendlyMessage(message: string): string {
   if (/^Invalid input: expected number/.test(message)) return 'enter a number';
   if (/^Invalid input: expected string/.test(message)) return 'enter some text';
   if (/^Too small: expected string to have >=1 char/.test(message)) return 'must not be empty';
+  if (/^Invalid option: expected one of/.test(message)) return 'choose one';
+  if (/^Invalid ISO date/.test(message)) return 'enter the date as yyyy-mm-dd (ISO 8601)';
   return message;
 }
 

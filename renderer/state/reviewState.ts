@@ -13,12 +13,19 @@ export interface DocState {
   readonly dirty: boolean;
   /** Bumped by every edit: the recompute of an older edition is dropped (latest wins). */
   readonly edition: number;
+  /**
+   * Oils (by index) whose viscosity index the user typed since the review was opened. Only such a
+   * VI survives a change of KV40 or KV100; any other is dropped, and D2270 computes it afresh.
+   */
+  readonly typedVi: readonly number[];
+  /** Bumped when another review is opened (not when the same one comes back signed): its results start afresh. */
+  readonly opened: number;
 }
 
-export const initialDocState: DocState = { draft: null, handle: null, name: null, dirty: false, edition: 0 };
+export const initialDocState: DocState = { draft: null, handle: null, name: null, dirty: false, edition: 0, typedVi: [], opened: 0 };
 
 export type DocAction =
-  | { type: 'load'; draft: Draft; handle: string | null; name?: string | null; dirty?: boolean }
+  | { type: 'load'; draft: Draft; handle: string | null; name?: string | null; dirty?: boolean; sameReview?: boolean }
   | { type: 'set'; path: FieldPath; value: unknown }
   | { type: 'setDrive'; index: number; given: 'torque' | 'power'; value: unknown }
   | { type: 'addItem'; list: 'loadCases' | 'oils'; item: Record<string, unknown> }
@@ -31,15 +38,35 @@ export type DocAction =
 export function docReducer(state: DocState, action: DocAction): DocState {
   switch (action.type) {
     case 'load':
-      return { draft: action.draft, handle: action.handle, name: action.name ?? null, dirty: action.dirty ?? false, edition: state.edition + 1 };
+      return { draft: action.draft, handle: action.handle, name: action.name ?? null, dirty: action.dirty ?? false, edition: state.edition + 1, typedVi: action.sameReview ? state.typedVi : [], opened: state.opened + (action.sameReview ? 0 : 1) };
     case 'saved':
       return { ...state, handle: action.handle, name: action.name, dirty: false };
     default: {
       if (!state.draft) return state;
-      const draft = edit(state.draft, action);
-      return draft === state.draft ? state : { ...state, draft, dirty: true, edition: state.edition + 1 };
+      const typedVi = trackTypedVi(state.typedVi, action);
+      const draft = dropStaleVi(edit(state.draft, action), action, typedVi);
+      return draft === state.draft ? state : { ...state, draft, dirty: true, edition: state.edition + 1, typedVi };
     }
   }
+}
+
+/** Which oils have a VI the user typed, after this action (removing an oil shifts the indices after it). */
+function trackTypedVi(typed: readonly number[], action: DocAction): readonly number[] {
+  if (action.type === 'set' && action.path[0] === 'oils' && action.path[2] === 'viscosityIndex' && typeof action.path[1] === 'number') {
+    const i = action.path[1];
+    const rest = typed.filter((t) => t !== i);
+    return action.value === undefined ? rest : [...rest, i];
+  }
+  if (action.type === 'removeItem' && action.list === 'oils') return typed.filter((t) => t !== action.index).map((t) => (t > action.index ? t - 1 : t));
+  return typed;
+}
+
+/** A new KV40 or KV100 makes a VI the user did not type stale: drop it, so ASTM D2270 computes it from the new pair. */
+function dropStaleVi(draft: Draft, action: DocAction, typed: readonly number[]): Draft {
+  if (action.type !== 'set' || action.path[0] !== 'oils' || typeof action.path[1] !== 'number') return draft;
+  const i = action.path[1];
+  if ((action.path[2] !== 'kv40_mm2s' && action.path[2] !== 'kv100_mm2s') || typed.includes(i)) return draft;
+  return getIn(draft, ['oils', i, 'viscosityIndex']) === undefined ? draft : setIn(draft, ['oils', i, 'viscosityIndex'], undefined);
 }
 
 function edit(draft: Draft, action: Exclude<DocAction, { type: 'load' | 'saved' }>): Draft {
@@ -49,6 +76,8 @@ function edit(draft: Draft, action: Exclude<DocAction, { type: 'load' | 'saved' 
     case 'setDrive': {
       // A load case gives exactly one of torque and power; the one typed last is the one given.
       const torque = caseKeys(draft).torque;
+      // Text that is not (yet) a number is kept at its field and leaves the other one alone.
+      if (typeof action.value !== 'number') return setIn(draft, ['loadCases', action.index, action.given === 'torque' ? torque : 'power_kW'], action.value);
       const keep = action.given === 'torque' ? torque : 'power_kW';
       const drop = action.given === 'torque' ? 'power_kW' : torque;
       const next = setIn(draft, ['loadCases', action.index, drop], undefined);

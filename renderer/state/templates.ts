@@ -1,39 +1,33 @@
-import { REVIEW_FORMAT, REVIEW_VERSION } from '../../app/review/schema';
+import { newCase, newReview, type TemplateKind } from '../../app/review/templates';
 import type { Draft } from './reviewState';
 
-/** A new load case: copies the last one so the user changes only what differs. */
-export function newLoadCase(previous: unknown, count: number): Record<string, unknown> {
-  // Copying the last case keeps the gear set's keys (pinion or sun speed and torque).
-  const base = previous && typeof previous === 'object' ? { ...(previous as Record<string, unknown>) } : { pinionSpeed_rpm: 1500, pinionTorque_Nm: 500, applicationFactor: 1, oilTemperature_C: 60, lubrication: 'dip', timeShare: 1 };
-  return { ...base, name: `Load case ${count + 1}` };
+/**
+ * A new load case. It keeps what belongs to the machine (the last case's speed, oil temperature and
+ * lubrication) and leaves the load to be entered, so it never computes as a silent copy. Its share
+ * of time is what the other cases leave over, or left to be entered if they already fill it.
+ */
+export function newLoadCase(previous: unknown, cases: readonly unknown[]): Record<string, unknown> {
+  const base = newCase(cases.length + 1);
+  const last = previous && typeof previous === 'object' ? (previous as Record<string, unknown>) : {};
+  const kept: Record<string, unknown> = {};
+  // The gear set's speed key comes along: the pinion's on a pair, the sun's or carrier's on a planetary stage.
+  for (const key of ['pinionSpeed_rpm', 'sunSpeed_rpm', 'carrierSpeed_rpm', 'oilTemperature_C', 'lubrication', 'applicationFactor']) if (last[key] !== undefined) kept[key] = last[key];
+  const used = cases.reduce<number>((sum, c) => sum + (c && typeof c === 'object' && typeof (c as { timeShare?: unknown }).timeShare === 'number' ? (c as { timeShare: number }).timeShare : 0), 0);
+  const left = Math.round((1 - used) * 1000) / 1000;
+  const { timeShare: _unused, ...rest } = base;
+  void _unused;
+  return { ...rest, ...kept, ...(left > 0 && left <= 1 ? { timeShare: left } : {}) };
 }
 
 /** A new candidate oil: copies the last one, renamed, as a candidate. */
 export function newOil(previous: unknown, count: number): Record<string, unknown> {
   const base = previous && typeof previous === 'object'
     ? { ...(previous as Record<string, unknown>) }
-    : { kv40_mm2s: 220, kv100_mm2s: 19, density15_kgm3: 885, baseOil: 'mineral', chemistry: 'anti-wear', fzgFailureStage: 10 };
+    : { baseOil: 'mineral' };
   return { ...base, name: `Candidate oil ${count + 1}`, role: 'candidate' };
 }
 
-/** The "new" command: a blank-but-valid review the user fills in (all values to be replaced). */
-export function newReviewDraft(): Draft {
-  return {
-    format: REVIEW_FORMAT,
-    version: REVIEW_VERSION,
-    title: 'New review',
-    revision: 0,
-    displayUnits: 'si',
-    gearPair: {
-      normalModule_mm: 4,
-      normalPressureAngle_deg: 20,
-      helixAngle_deg: 0,
-      faceWidth_mm: 50,
-      pinion: { teeth: 20, roughnessRa_um: 0.8, material: 'steel-carburized' },
-      wheel: { teeth: 60, roughnessRa_um: 0.8, material: 'steel-carburized' },
-      components: [],
-    },
-    loadCases: [newLoadCase(null, 0)],
-    oils: [newOil(null, 0)],
-  };
+/** The "New review" command: an unfilled review from a template (app/review/templates.ts). */
+export function newReviewDraft(kind: TemplateKind = 'spur'): Draft {
+  return newReview(kind);
 }

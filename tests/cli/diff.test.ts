@@ -43,8 +43,8 @@ describe('flankfilm diff REVIEW (against its own signed state)', () => {
     });
     const r = await cli('diff', f);
     expect(r.code, r.err).toBe(3);
-    expect(r.out).toMatch(/\nDuty\n {2}Hard-rock peak \(invented\): Oil temperature θoil: 68 °C → 75 °C\n/);
-    expect(r.out).toMatch(/\nOils\n {2}In service: ISO VG 220 R&O mineral \(invented data sheet\): Viscosity at 40 °C: 220 mm²\/s → 240 mm²\/s\n/);
+    expect(r.out).toMatch(/\nDuty\n {2}Hard-rock peak: Oil temperature θoil: 68 °C → 75 °C\n/);
+    expect(r.out).toMatch(/\nOils\n {2}ISO VG 220 R&O mineral: Viscosity at 40 °C: 220 mm²\/s → 240 mm²\/s\n/);
     expect(r.out).toMatch(/The verdict (did not change|changed)\./);
     expect(r.out).not.toMatch(/kv40_mm2s|oilTemperature_C/); // the reader sees labels, not paths
     const j = JSON.parse((await cli('diff', f, '--json')).out);
@@ -57,8 +57,8 @@ describe('flankfilm diff REVIEW (against its own signed state)', () => {
     const now = run(parseOrThrow(readFileSync(f, 'utf8')));
     const moved = was.verdicts.some((v, i) => v.code !== now.verdicts[i]?.code) || was.cases.some((c, i) => c.verdict?.code !== now.cases[i]?.verdict?.code);
     expect(j.verdictChanged).toBe(moved);
-    const sb = j.resultsChanged.find((m: any) => m.quantity === 'scuffingSafety' && m.loadCase === 'Hard-rock peak (invented)' && m.oil.startsWith('In service'));
-    const wasCase = was.cases.find((c) => c.loadCase === 'Hard-rock peak (invented)' && c.oil?.startsWith('In service'))!;
+    const sb = j.resultsChanged.find((m: any) => m.quantity === 'scuffingSafety' && m.loadCase === 'Hard-rock peak' && m.oil === 'ISO VG 220 R&O mineral');
+    const wasCase = was.cases.find((c) => c.loadCase === 'Hard-rock peak' && c.oil === 'ISO VG 220 R&O mineral')!;
     expect(sb.before).toBe(Number(wasCase.scuffingSafety!.toPrecision(3)));
   }, T);
 

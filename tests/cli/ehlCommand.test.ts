@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { cli } from './cliHarness';
 
 const DEMO = 'assets/demo/harrow-creek-crusher-hs-pair.flankfilm.json';
-const CASE = 'Hard-rock peak (invented)';
+const CASE = 'Hard-rock peak';
 
 describe('flankfilm ehl', () => {
   it('--json gives the issue\'s keys, with a converged solution and a profile across the contact', async () => {

@@ -96,7 +96,7 @@ describe('accessibility, tooltips, theme and PNG export', () => {
   it('each Mesh chart exports a PNG through a download link', async () => {
     const s = await openApp(file.browser);
     try {
-      for (const id of ['hertz', 'velocity', 'film', 'temperature']) {
+      for (const id of ['hertz', 'velocity', 'film', 'hmin', 'temperature', 'flash']) {
         await s.page.locator(`[data-chart=${id}] button`).click();
         const link = s.page.locator(`[data-testid=png-${id}]`);
         await expect(link.getAttribute('href')).resolves.toMatch(/^data:image\/png;base64,/);

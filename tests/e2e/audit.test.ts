@@ -35,7 +35,7 @@ describe('changes since signing, on the Sign-off panel', () => {
     const paths = await items(page).evaluateAll((li) => li.map((l) => (l as HTMLElement).dataset.changePath));
     expect(paths).toEqual(['loadCases[1].oilTemperature_C', 'oils[0].kv40_mm2s']);
     const text = await page.locator('[data-testid=change-list]').textContent();
-    expect(text).toContain('Hard-rock peak (invented): Oil temperature θoil: 68 °C → 75 °C');
+    expect(text).toContain('Hard-rock peak: Oil temperature θoil: 68 °C → 75 °C');
     expect(text).toContain('Viscosity at 40 °C: 220 mm²/s → 240 mm²/s');
     expect(text).not.toMatch(/kv40_mm2s|oilTemperature_C/);
     await expect(page.locator('[data-testid=verdict-moved]').textContent()).resolves.toMatch(/The verdict (did not change|changed)/);
@@ -71,7 +71,7 @@ describe('changes since signing, on the Sign-off panel', () => {
     await page.locator('[data-testid=compare-with]').click();
     await expect.poll(() => items(page, 'compare-list').count(), { timeout: WAIT }).toBe(1);
     await expect(items(page, 'compare-list').first().getAttribute('data-change-kind')).resolves.toBe('added');
-    await expect(page.locator('[data-testid=compare-list]').textContent()).resolves.toContain('Load case “Hard-rock peak (invented)” added');
+    await expect(page.locator('[data-testid=compare-list]').textContent()).resolves.toContain('Load case “Hard-rock peak” added');
     // The review on screen is not replaced by the compared file.
     await expect(status(page)).resolves.toBe('signed');
     await shootPanel(page, 'sign-off', 'sign-off-compare');

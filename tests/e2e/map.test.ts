@@ -18,7 +18,7 @@ const nodeMaps = operatingMaps(demo);
 if (!nodeMaps) throw new Error('the sweep was not cancelled');
 const OILS = demo.oils.length;
 // In the demo both oils' overall verdicts are governed by the hard-rock peak (results.verdicts), case 2 of 3.
-const GOVERNING = demo.loadCases.findIndex((c) => c.name === 'Hard-rock peak (invented)');
+const GOVERNING = demo.loadCases.findIndex((c) => c.name === 'Hard-rock peak');
 const mapsOf = (all: readonly OperatingMapResult[], li: number) => all.slice(li * OILS, (li + 1) * OILS);
 
 const status = (page: Page) => page.locator('[data-testid=map-status]');

@@ -15,7 +15,7 @@ describe('open the demo, change the torque', () => {
       await shootPanel(page, id, id === 'map' ? 'map-idle' : id); // map.png, with the maps drawn, is map.test.ts's
     }
     // Four charts along the path, A to E marked.
-    await expect(page.locator('[data-chart]').count()).resolves.toBe(4);
+    await expect(page.locator('[data-chart]').count()).resolves.toBe(6);
     // The demo has two oils and three load cases: six case verdicts, each with a verdict word.
     await expect(page.locator('[data-testid=case-verdict] .vbadge').count()).resolves.toBe(6);
     // The caution to defer to the maker, codes and a licensed engineer is on screen.

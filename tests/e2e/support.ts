@@ -1,6 +1,6 @@
 /**
- * Shared set-up of the e2e specs: Debian's Chromium driven by playwright-core (never a downloaded
- * browser), the built renderer served with the contract by tests/harness/server.ts, and helpers
+ * Shared set-up of the e2e specs: a Chromium (findChromium.ts: environment variable, playwright's
+ * own browser, Debian's) driven by playwright-core, the built renderer served with the contract by tests/harness/server.ts, and helpers
  * that read what the sheet shows.
  */
 import { mkdirSync } from 'node:fs';
@@ -8,6 +8,7 @@ import { join } from 'node:path';
 import { chromium, type Browser, type BrowserContext, type Locator, type Page } from 'playwright-core';
 import { afterAll, beforeAll, expect } from 'vitest';
 import { startHarness, type Harness } from '../harness/server';
+import { findChromium } from './findChromium';
 
 export const SCREENSHOTS = join('test-output', 'screenshots');
 const CHROMIUM_ARGS = ['--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--disable-sync', '--no-first-run'];
@@ -25,7 +26,7 @@ export interface Session {
 }
 
 export async function launch(): Promise<Browser> {
-  return chromium.launch({ executablePath: '/usr/bin/chromium', args: CHROMIUM_ARGS });
+  return chromium.launch({ executablePath: findChromium().path, args: CHROMIUM_ARGS });
 }
 
 /** A fresh harness (its own work folder) and a page on it, with the demo open and computed. */

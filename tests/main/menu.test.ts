@@ -24,7 +24,7 @@ describe('the native menu', () => {
     const { template, sent, quit } = build('win32');
     const file = submenu(template[0]);
     const rows: Array<[string, string | undefined, MenuEvent['command'] | null]> = [
-      ['New', 'CmdOrCtrl+N', 'new'],
+      ['New review…', 'CmdOrCtrl+N', 'new'],
       ['Open…', 'CmdOrCtrl+O', 'open'],
       ['Save', 'CmdOrCtrl+S', 'save'],
       ['Save as…', 'CmdOrCtrl+Shift+S', 'save-as'],

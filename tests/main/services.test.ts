@@ -196,7 +196,7 @@ describe('exports', () => {
   it('exportRecord renders first, then writes the bytes where the dialog says', async () => {
     const { call, calls } = setup();
     const r = await call('exportRecord', { text: DEMO_TEXT, paper: 'a4' });
-    expect(calls.save[0]).toMatch(/^record:harrow-creek-.*\.pdf$/);
+    expect(calls.save[0]).toBe('record:HC-DEMO-001.pdf'); // named by the review id (the demo's id is HC-DEMO-001)
     expect(r).toEqual({ canceled: false, name: expect.stringMatching(/\.pdf$/) as unknown as string, bytes: FAKE_PDF.byteLength });
     expect(await readFile(join(dir, (r as { name: string }).name))).toEqual(Buffer.from(FAKE_PDF));
   });

@@ -9,7 +9,7 @@ const parsed = parseReviewValue(DEMO_REVIEWS['harrow-creek-crusher-hs-pair.flank
 if (!parsed.ok) throw new Error('the demo must parse');
 const review = parsed.review;
 const maps = operatingMaps(review) as OperatingMapResult[];
-const HARD = review.loadCases.findIndex((c) => c.name === 'Hard-rock peak (invented)');
+const HARD = review.loadCases.findIndex((c) => c.name === 'Hard-rock peak');
 const hard = maps.slice(HARD * review.oils.length, (HARD + 1) * review.oils.length);
 const SB_MIN = review.policy.scuffingSafetyMin;
 const say = { temperature: (c: number) => `${c.toFixed(1)} °C`, number: (x: number) => x.toFixed(1), level: levelText };

@@ -3,7 +3,7 @@ import { DEMO_REVIEWS } from '../../app/review/demo';
 import { parseReviewValue } from '../../app/review/parse';
 import { getIn, setIn } from '../../renderer/state/paths';
 import { docReducer, draftPower, draftText, draftTorque, initialDocState, type Draft } from '../../renderer/state/reviewState';
-import { newReviewDraft } from '../../renderer/state/templates';
+import { newLoadCase, newReviewDraft } from '../../renderer/state/templates';
 
 const demo = () => structuredClone(DEMO_REVIEWS['harrow-creek-crusher-hs-pair.flankfilm.json']) as Draft;
 const loaded = () => docReducer(initialDocState, { type: 'load', draft: demo(), handle: null });
@@ -23,7 +23,7 @@ describe('paths', () => {
     expect('centerDistance_mm' in next.gearPair).toBe(false);
   });
   it('getIn reads through arrays and returns undefined past the end', () => {
-    expect(getIn(demo(), ['loadCases', 1, 'name'])).toBe('Hard-rock peak (invented)');
+    expect(getIn(demo(), ['loadCases', 1, 'name'])).toBe('Hard-rock peak');
     expect(getIn(demo(), ['loadCases', 9, 'name'])).toBeUndefined();
   });
 });
@@ -66,7 +66,7 @@ describe('docReducer', () => {
     s = docReducer(s, { type: 'addItem', list: 'oils', item: { name: 'x' } });
     expect((getIn(s.draft, ['oils']) as unknown[]).length).toBe(3);
     s = docReducer(s, { type: 'removeItem', list: 'loadCases', index: 0 });
-    expect(getIn(s.draft, ['loadCases', 0, 'name'])).toBe('Hard-rock peak (invented)');
+    expect(getIn(s.draft, ['loadCases', 0, 'name'])).toBe('Hard-rock peak');
     s = docReducer(s, { type: 'toggleComponent', component: 'clutch', on: true });
     expect(getIn(s.draft, ['gearPair', 'components'])).toEqual(['backstop', 'clutch']);
     s = docReducer(s, { type: 'toggleComponent', component: 'backstop', on: false });
@@ -78,8 +78,20 @@ describe('docReducer', () => {
     expect(s.handle).toBe('doc-00000000-0000-4000-8000-000000000000');
     expect(s.name).toBe('x.flankfilm.json');
   });
-  it('the new review and the text written are valid review files', () => {
-    expect(parseReviewValue(newReviewDraft()).ok).toBe(true);
+  it('the text written is a valid review file; a new review waits for the user’s own values', () => {
     expect(parseReviewValue(JSON.parse(draftText(demo()))).ok).toBe(true);
+    const fresh = parseReviewValue(newReviewDraft('helical'));
+    expect(fresh.ok).toBe(false);
+    if (!fresh.ok) expect(fresh.issues.map((i) => i.path)).toContain('gearPair.normalModule_mm');
+    expect(JSON.stringify(newReviewDraft('spur'))).not.toMatch(/Harrow|DEMO|invented/i);
+  });
+  it('a new load case keeps the machine’s speed and oil temperature, leaves the load to enter, and takes the time left over', () => {
+    const cases = [{ name: 'A', pinionSpeed_rpm: 300, pinionTorque_Nm: 7000, oilTemperature_C: 55, lubrication: 'dip', timeShare: 0.85 }];
+    const next = newLoadCase(cases[0], cases);
+    expect(next).toMatchObject({ name: 'Load case 2', pinionSpeed_rpm: 300, oilTemperature_C: 55, lubrication: 'dip', timeShare: 0.15 });
+    expect(next.pinionTorque_Nm).toBeUndefined();
+    expect(next.power_kW).toBeUndefined();
+    // shares already fill the time: the new share is left to be entered
+    expect(newLoadCase(cases[0], [{ ...cases[0], timeShare: 1 }]).timeShare).toBeUndefined();
   });
 });

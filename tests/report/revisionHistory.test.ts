@@ -31,7 +31,7 @@ describe('the record of a review signed, changed and signed again', () => {
     const text = (await recordText(second, 'resigned.pdf')).replace(/\s+/g, ' ');
     expect(text).toContain('Revision history');
     expect(text).toMatch(/2026-12-01T09:30:00Z Dana Okafor \(invented\) \(Reliability engineer\) Approved earliest signing kept in the file/);
-    expect(text).toMatch(/2026-12-02T14:00:00Z Lee Marsh \(invented\) \(Plant engineer\) Not approved Duty: Hard-rock peak \(invented\): Oil temperature θoil/);
+    expect(text).toMatch(/2026-12-02T14:00:00Z Lee Marsh \(invented\) \(Plant engineer\) Not approved Duty: Hard-rock peak: Oil temperature θoil/);
   }, 120_000);
 
   it('a review signed once has no revision history section', async () => {

@@ -87,14 +87,14 @@ describe('changes since signing', () => {
       ['oils[0].kv40_mm2s', 220, 240],
     ]);
     expect(c.map((x) => x.panel)).toEqual(['Duty', 'Oils']);
-    expect(changeLine(c[0]!)).toBe('Hard-rock peak (invented): Oil temperature θoil: 68 °C → 75 °C');
+    expect(changeLine(c[0]!)).toBe('Hard-rock peak: Oil temperature θoil: 68 °C → 75 °C');
     // Independently: did any verdict word change between the two computations?
     const was = run(s);
     const now = run(e);
     const expected = was.verdicts.some((v, i) => v.code !== now.verdicts[i]?.code) || was.cases.some((x, i) => x.verdict?.code !== now.cases[i]?.verdict?.code);
     expect(since.comparison.moved?.verdictChanged).toBe(expected);
     // λmin of the edited oil at the edited case moved (a warmer sump thins the film).
-    expect(since.comparison.moved?.moves.some((m) => m.quantity === 'lambdaMin' && m.loadCase === 'Hard-rock peak (invented)')).toBe(true);
+    expect(since.comparison.moved?.moves.some((m) => m.quantity === 'lambdaMin' && m.loadCase === 'Hard-rock peak')).toBe(true);
   });
 
   it('inserting a load case in the middle is one added case', () => {
@@ -119,7 +119,7 @@ describe('changes since signing', () => {
       j.oils[1].chemistry = 'anti-wear';
       j.gearPair.wheel.material = { youngsModulus_GPa: 206, poissonRatio: 0.3, thermalConductivity_WmK: 50, density_kgm3: 7800, specificHeat_JkgK: 470, structuralFactorXW: 1 };
     })).changes;
-    expect(c.map((x) => changeLine(x))).toEqual(['Wheel: Material: Steel, case carburized → Custom material', 'Proposed: ISO VG 320 EP mineral (invented data sheet): Additive chemistry: EP (extreme pressure) → AW (anti-wear)']);
+    expect(c.map((x) => changeLine(x))).toEqual(['Wheel: Material: Steel, case carburized → Custom material', 'ISO VG 320 EP mineral: Additive chemistry: EP, extreme pressure (DIN 51517-3 CLP) → AW, anti-wear (as DIN 51524-2 HLP)']);
   });
 });
 

@@ -10,7 +10,9 @@ import { operatingMaps, operatingMapsCsv } from '../../review/operatingMaps';
 import { atomicWrite } from '../../files/atomicWrite';
 import { pathClash } from '../../files/sameFile';
 
-/** `flankfilm review FILE [--json] [--pdf OUT [--film-detail]] [--csv OUT] [--map OUT.csv] [--p12 ID.p12] [--paper a4|letter]` */
+import { summaryCsv } from '../../report/summaryCsv';
+
+/** `flankfilm review FILE [--json] [--pdf OUT [--film-detail]] [--csv OUT] [--summary-csv OUT] [--map OUT.csv] [--p12 ID.p12] [--paper a4|letter]` */
 export async function reviewCommand(args: string[], io: CliIo): Promise<number> {
   const { values, positionals } = parseArgs({
     args,
@@ -19,6 +21,7 @@ export async function reviewCommand(args: string[], io: CliIo): Promise<number> 
       json: { type: 'boolean', default: false },
       pdf: { type: 'string' },
       csv: { type: 'string' },
+      'summary-csv': { type: 'string' },
       map: { type: 'string' },
       p12: { type: 'string' },
       paper: { type: 'string', default: 'a4' },
@@ -32,7 +35,7 @@ export async function reviewCommand(args: string[], io: CliIo): Promise<number> 
   if (values['film-detail'] && !values.pdf) throw new UsageError('--film-detail adds a page to the record: give --pdf OUT too');
   const file = positionals[0] as string;
   // An output that resolves (through links, symbolic or hard) to an input or to another output is refused before anything runs.
-  const outputs = (['pdf', 'csv', 'map'] as const).filter((k) => values[k] !== undefined).map((k) => [`--${k}`, values[k] as string] as const);
+  const outputs = (['pdf', 'csv', 'summary-csv', 'map'] as const).filter((k) => values[k] !== undefined).map((k) => [`--${k}`, values[k] as string] as const);
   const clash = await pathClash([['the review', file], ...(values.p12 ? [['--p12', values.p12] as const] : [])], outputs);
   if (clash) throw new UsageError(clash);
   const loaded = await loadReviewFile(file);
@@ -52,6 +55,16 @@ export async function reviewCommand(args: string[], io: CliIo): Promise<number> 
   }
   if (values.json) io.out(`${JSON.stringify(results, null, 2)}\n`);
   else io.out(summaryText(results, { status: status(loaded.review, results), review: loaded.review }));
+  const summaryOut = values['summary-csv'];
+  if (summaryOut) {
+    try {
+      await atomicWrite(summaryOut, summaryCsv(results, loaded.review.displayUnits));
+      io.err(`wrote ${summaryOut}\n`);
+    } catch (e) {
+      io.err(`${summaryOut}: cannot write (${(e as NodeJS.ErrnoException).code ?? (e as Error).message})\n`);
+      return EXIT.invalid;
+    }
+  }
   if (values.map) {
     const maps = operatingMaps(loaded.review) ?? [];
     if (maps.length === 0) io.err(`${values.map}: the review has no oils, so the map has no cells (header only)\n`);

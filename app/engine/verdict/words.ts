@@ -7,9 +7,10 @@ import type { ScuffingMethod } from './types';
  * often classed as hydraulic oils, DIN 51524-2 HLP.
  */
 export const CHEMISTRY_WORDS: Readonly<Record<Chemistry, string>> = {
-  'r-and-o': 'R&O (rust and oxidation inhibited)',
-  'anti-wear': 'anti-wear (AW)',
-  'extreme-pressure': 'EP (extreme pressure)',
+  // No brackets of their own: these words often stand inside brackets, "oil (R&O, rust and oxidation inhibited)".
+  'r-and-o': 'R&O, rust and oxidation inhibited',
+  'anti-wear': 'AW, anti-wear',
+  'extreme-pressure': 'EP, extreme pressure',
 };
 
 export const BASE_OIL_WORDS: Readonly<Record<BaseOil, string>> = {

@@ -7,6 +7,7 @@ import { caseTitle } from './caseResults';
 import { DECISION_WORDS, GREY, STATUS_LABELS } from '../words';
 import { revisionHistory, type Signing } from '../../review/audit/history';
 import type { Signoff } from '../../review/schema';
+import { decisionLine, decisionSubject, isoDateTime } from '../../review/decisionSubject';
 
 /** Methods and sources: the static list, then the assumptions the engine states for this review. */
 export function drawMethods(ctx: RecordContext): void {
@@ -79,9 +80,9 @@ export function drawSignoff(ctx: RecordContext): void {
         ['Reviewer', s.reviewer],
         ['Role', s.role],
         ['Organisation', s.organisation ?? '—'],
-        ['Decision', DECISION_WORDS[s.decision]],
+        ['Decision', decisionLine(s, review)],
         ['Conditions', s.conditions ?? '—'],
-        ['Signed at', s.signedAt],
+        ['Signed at', isoDateTime(s.signedAt)],
         ['Engine version at signing', s.engineVersion],
         ['Fingerprint at signing', s.fingerprint],
       ],
@@ -92,7 +93,7 @@ export function drawSignoff(ctx: RecordContext): void {
       L.para('The fingerprint recomputed for this record differs from the one signed: this sign-off does not cover the record as it stands. Sign the review again after checking the changes.', { size: 8.5 });
     }
   } else {
-    L.para('Not signed. To sign, the reviewer runs: flankfilm sign REVIEW.flankfilm.json --reviewer NAME --role ROLE --decision approved|approved-with-conditions|not-approved', { size: 8.5 });
+    L.para(`Not signed. The reviewer signs the review in Flankfilm (Sign off…) and exports the record again, or signs below. The decision is on ${decisionSubject(review)}.`, { size: 8.5 });
     L.y += 6;
     for (const label of ['Reviewer', 'Role and organisation', 'Decision and conditions', 'Date and signature']) {
       L.ensure(24);

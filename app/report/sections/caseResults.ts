@@ -1,11 +1,11 @@
 import type { CaseResult } from '../../review/results';
-import { drawChart, type Box, type ChartSpec } from '../chart';
+import { drawChart, type ChartSpec } from '../chart';
 import type { RecordContext } from '../context';
 import { drawVerdictIcon } from '../icons';
 import { formatNumber, formatPercent, DASH, type Units } from '../units';
 import { GREY, OIL_FIT_WORDS, OKABE_ITO, REGIME_COLOURS, REGIME_WORDS, VERDICT_WORDS } from '../words';
 
-/** One page per load case × oil: the key figures and four charts along the line of action. */
+/** One page per load case × oil: the key figures, then one strip of four charts on a shared A–E axis with their figures beside them. */
 export function drawCaseResults(ctx: RecordContext): void {
   ctx.results.cases.forEach((c, i) => drawCase(ctx, c, i));
 }
@@ -49,18 +49,43 @@ function drawCase(ctx: RecordContext, c: CaseResult, index: number): void {
   );
   for (const note of [c.filmNote, c.micropittingAdvisory]) if (note) L.para(note, { size: 7.5, color: GREY, gap: 2 });
 
-  // Four charts in a 2 × 2 grid below the figures, or on the next page if they do not fit.
-  if (L.room < 380) L.newPage();
-  const gap = 14;
-  const w = (L.width - gap) / 2;
-  const h = Math.min(250, (L.room - gap - 4) / 2);
-  const top = L.y + 4;
+  // One stacked strip: the four charts share one position axis A–E (same box left and width, the
+  // axis title under the last only), each with the figures that matter beside it.
+  if (L.room < 440) L.newPage();
+  const gap = 8;
+  const side = 132;
+  const w = L.width - side - 10;
   const specs = chartsOf(ctx, c);
+  const h = Math.min(165, (L.room - gap * (specs.length - 1) - 4) / specs.length);
+  const top = L.y + 4;
+  const figures = stripFigures(u, c);
   specs.forEach((spec, i) => {
-    const box: Box = { x: L.left + (i % 2) * (w + gap), y: top + Math.floor(i / 2) * (h + gap), w, h };
-    drawChart(doc, box, spec);
+    const y = top + i * (h + gap);
+    drawChart(doc, { x: L.left, y, w, h }, i === specs.length - 1 ? spec : { ...spec, xLabel: '' });
+    let fy = y + 22;
+    for (const [label, value] of figures[i] ?? []) {
+      L.font(false, 7.5, GREY).text(label, L.left + w + 10, fy, { width: side, lineBreak: false });
+      L.font(true, 8.5).text(value, L.left + w + 10, fy + 9, { width: side, lineBreak: false });
+      fy += 24;
+    }
   });
-  L.y = top + 2 * h + gap;
+  L.y = top + specs.length * (h + gap);
+}
+
+/** Beside each chart of the strip, in its order: the figures a reader looks for there. */
+function stripFigures(u: Units, c: CaseResult): Row[][] {
+  const hminAtMin = c.path.reduce<number | null>((m, p) => (p.filmThicknessMin_um === null ? m : m === null ? p.filmThicknessMin_um : Math.min(m, p.filmThicknessMin_um)), null);
+  return [
+    [['σH,max', u.fmt(c.maxHertzStress_MPa, 'stress')], ['σH at C', u.fmt(c.pitch.hertzStress_MPa, 'stress')]],
+    [['v on the pitch line', u.fmt(c.pitchLineVelocity_mps, 'velocity')]],
+    [['λmin', formatNumber(c.lambdaMin, 3)], ['regime at λmin', c.regime ? REGIME_WORDS[c.regime] : DASH], ['least hmin', u.fmt(hminAtMin, 'film', 3)]],
+    [
+      ['θB,max', u.fmt(c.maxContactTemperature_C, 'temperature')],
+      c.scuffingTemperatureAtLeast ? ['θS (oil above stage 12)', 'not limiting'] : ['θS', u.fmt(c.scuffingTemperature_C, 'temperature')],
+      ['θfl,max (a rise)', u.fmt(c.maxFlashTemperature_K, 'temperatureRise')],
+      ['SB', formatNumber(c.scuffingSafety, 3)],
+    ],
+  ];
 }
 
 type Row = [string, string];
@@ -91,7 +116,8 @@ function keyFigures(u: Units, c: CaseResult): Row[] {
     ['Bulk temperature θM', u.fmt(c.bulkTemperature_C, 'temperature')],
     ['Flash temperature θfl,max', u.fmt(c.maxFlashTemperature_K, 'temperatureRise')],
     ['Contact temperature θB,max', `${u.fmt(c.maxContactTemperature_C, 'temperature')}${at(c.maxContactTemperaturePosition_mm)}`],
-    ['Scuffing temperature θS', `${c.scuffingTemperatureAtLeast && c.scuffingTemperature_C !== null ? '≥ ' : ''}${u.fmt(c.scuffingTemperature_C, 'temperature')}`],
+    // An oil that passed stage 12 has no measured θS: the stage-12 value is a floor, not a limit.
+    ['Scuffing temperature θS', c.scuffingTemperatureAtLeast ? 'above stage 12: not limiting' : u.fmt(c.scuffingTemperature_C, 'temperature')],
     ['Scuffing safety SB', formatNumber(c.scuffingSafety, 3)],
     ['Integral temperature θint / θintS', `${u.num(c.integralTemperature_C, 'temperature')} / ${u.fmt(c.integralScuffingTemperature_C, 'temperature')}`],
     ['Integral safety SintS', formatNumber(c.integralSafety, 3)],
@@ -136,9 +162,8 @@ function chartsOf(ctx: RecordContext, c: CaseResult): ChartSpec[] {
 
   const lo = review.policy.boundaryBelowLambda;
   const hi = review.policy.fullFilmFromLambda;
-  const ratio = filmRatio(path);
   const film: ChartSpec = {
-    title: ratio ? 'Specific film thickness λ and hmin' : 'Specific film thickness λ',
+    title: 'Specific film thickness λ, with the regimes',
     xLabel,
     yLabel: 'λ (–)',
     series: [{ label: 'λ', points: path.map((pt) => [X(pt.position_mm), pt.lambda]), color: OKABE_ITO.black }],
@@ -150,7 +175,6 @@ function chartsOf(ctx: RecordContext, c: CaseResult): ChartSpec[] {
     ],
     yInclude: [0, lo * 1.15],
     emptyText: 'no film: no oil in scope',
-    ...(ratio ? { rightAxis: { label: `hmin (${u.unit('film')})`, factor: u.value(ratio, 'film') } } : {}),
   };
 
   const temps: ChartSpec = {
@@ -159,8 +183,9 @@ function chartsOf(ctx: RecordContext, c: CaseResult): ChartSpec[] {
     yLabel: `temperature (${u.unit('temperature')})`,
     series: [{ label: 'θB = θM + θfl', points: series((pt) => pt.contactTemperature_C, 'temperature'), color: OKABE_ITO.vermillion }],
     refLines: [
-      ...(c.scuffingTemperature_C !== null
-        ? [{ y: u.value(c.scuffingTemperature_C, 'temperature'), label: `θS${c.scuffingTemperatureAtLeast ? ' (at least)' : ''}`, color: OKABE_ITO.blue, dash: [6, 3] as [number, number] }]
+      // An oil above stage 12 has no limiting θS: no line is drawn (the figure beside says so).
+      ...(c.scuffingTemperature_C !== null && !c.scuffingTemperatureAtLeast
+        ? [{ y: u.value(c.scuffingTemperature_C, 'temperature'), label: 'θS', color: OKABE_ITO.blue, dash: [6, 3] as [number, number] }]
         : []),
       ...(c.bulkTemperature_C !== null ? [{ y: u.value(c.bulkTemperature_C, 'temperature'), label: 'θM bulk', color: GREY, dash: [1.5, 2] as [number, number] }] : []),
     ],
@@ -171,17 +196,3 @@ function chartsOf(ctx: RecordContext, c: CaseResult): ChartSpec[] {
   return [hertz, velocity, film, temps];
 }
 
-/**
- * hmin/λ when it is the same at every point (λ = hmin/σ with one composite roughness σ), so
- * that one curve can carry both axes; null otherwise.
- */
-function filmRatio(path: CaseResult['path']): number | null {
-  let ratio: number | null = null;
-  for (const pt of path) {
-    if (pt.lambda === null || pt.filmThicknessMin_um === null || pt.lambda <= 0) continue;
-    const r = pt.filmThicknessMin_um / pt.lambda;
-    if (ratio === null) ratio = r;
-    else if (Math.abs(r - ratio) > 1e-6 * ratio) return null;
-  }
-  return ratio;
-}

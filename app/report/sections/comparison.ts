@@ -44,7 +44,7 @@ export function drawComparison(ctx: RecordContext): void {
       { text: `VG ${vg}`, bold: true },
       ...results.gradeFinder.map((g): Cell => {
         const row = g.table.find((r) => r.isoVG === vg);
-        const marks = [vg === g.currentVG ? 'current' : '', vg === g.recommendedVG ? 'recommended' : ''].filter(Boolean).join(', ');
+        const marks = [vg === g.currentVG ? 'current' : '', vg === g.recommendedVG ? 'recommended' : '', row && !row.usable ? 'left out' : ''].filter(Boolean).join(', ');
         const text = `${row ? formatNumber(row.lambdaMin, 3) : DASH}${marks ? ` (${marks})` : ''}`;
         return vg === g.recommendedVG ? { text, bold: true } : text;
       }),
@@ -55,6 +55,9 @@ export function drawComparison(ctx: RecordContext): void {
     const rec = g.recommendedVG === null ? 'no grade in the table reaches the target' : `recommended ISO VG ${g.recommendedVG}`;
     L.bullet(`${g.oil}: current ${g.currentVG === null ? 'grade not an ISO VG' : `ISO VG ${g.currentVG}`}; ${rec}. ${g.note}`, { size: 8.5 });
   }
+  // Said once: the left-out grades follow from the duty, the same for every oil.
+  const leftOut = results.gradeFinder.find((g) => g.leftOut)?.leftOut;
+  if (leftOut) L.para(leftOut, { size: 8.5 });
 }
 
 function cellOf(c: CaseResult | undefined): Cell {

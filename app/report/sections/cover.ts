@@ -1,6 +1,7 @@
 import { drawStatusIcon, STATUS_COLOURS } from '../icons';
 import type { RecordContext } from '../context';
-import { DECISION_WORDS, DEFER_TEXT, GREY, INK, STATUS_LABELS } from '../words';
+import { decisionLine } from '../../review/decisionSubject';
+import { DEFER_TEXT, GREY, INK, STATUS_LABELS } from '../words';
 import { ROLE_WORDS } from '../../review/vocabulary';
 import { drawChanges, drawNeedAndFindings } from './decision';
 
@@ -31,7 +32,7 @@ export function drawCover(ctx: RecordContext): void {
   if (s) {
     const line =
       status === 'signed'
-        ? `Signed by ${s.reviewer} (${s.role}${s.organisation ? `, ${s.organisation}` : ''}) on ${s.signedAt.slice(0, 10)}: ${DECISION_WORDS[s.decision]}.`
+        ? `Signed by ${s.reviewer} (${s.role}${s.organisation ? `, ${s.organisation}` : ''}) on ${s.signedAt.slice(0, 10)}. ${decisionLine(s, review)}.`
         : `The sign-off by ${s.reviewer} (${s.signedAt.slice(0, 10)}) no longer matches: an input, a result or the engine version has changed since signing. The sign-off is shown on the last page for reference only.`;
     L.para(line, { size: 9 });
     if (s.conditions) L.para(`Conditions of the decision: ${s.conditions}`, { size: 9 });

@@ -42,7 +42,7 @@ export function governAcrossMeshes(meshes: readonly MeshVerdicts[]): GovernedVer
     for (const x of mine) {
       for (const k of x.v.checks) {
         const prev = worst.get(k.quantity);
-        if (!prev || (k.value !== null && (prev.value === null || k.value < prev.value))) worst.set(k.quantity, { ...k, loadCase: `${k.loadCase} (${MESH_WORDS[x.mesh]})` });
+        if (!prev || (k.value !== null && (prev.value === null || k.value < prev.value))) worst.set(k.quantity, { ...k, loadCase: `${k.loadCase}, ${MESH_WORDS[x.mesh]} mesh` });
       }
     }
     out.push({
@@ -104,7 +104,7 @@ export function needAcrossMeshes(meshes: ReadonlyArray<{ mesh: PlanetaryMesh; ne
     fzgStageIntegral: maxStage((n) => n.fzgStageIntegral),
     isoVG: vgs.every((v): v is number => v !== null) ? Math.max(...vgs) : null,
     micropittingStage: mostDemandingMicropitting(withNeed.map((m) => m.need.micropittingStage)),
-    governingLoadCase: `${gov.need.governingLoadCase} (${MESH_WORDS[gov.mesh]} mesh)`,
+    governingLoadCase: `${gov.need.governingLoadCase}, ${MESH_WORDS[gov.mesh]} mesh`,
     statement: `${gov.need.statement} The ${MESH_WORDS[gov.mesh]} mesh governs.`,
   };
 }
@@ -121,7 +121,7 @@ export function changesAcrossMeshes(meshes: ReadonlyArray<{ mesh: PlanetaryMesh;
       if (other && FINDING_ORDER.indexOf(other.finding) > FINDING_ORDER.indexOf(worst.ch.finding)) worst = { mesh: m.mesh, ch: other };
     }
     const conditions = [...new Set(meshes.flatMap((m) => m.changes.find((x) => x.to === ch.to)?.conditions ?? []))];
-    return { ...worst.ch, conditions, statement: `${worst.ch.statement} (${MESH_WORDS[worst.mesh]} mesh, the one where the change fares worst.)` };
+    return { ...worst.ch, conditions, statement: `${worst.ch.statement} The ${MESH_WORDS[worst.mesh]} mesh is the one where the change fares worst.` };
   });
 }
 

@@ -1,4 +1,4 @@
-import { useEffect, useRef, useState } from 'react';
+import { useEffect, useRef, useState, type KeyboardEvent } from 'react';
 import { useSheet } from '../../state/context';
 import { getIn, pathKey, type FieldPath } from '../../state/paths';
 import { formatInput, parseInput } from '../../units/format';
@@ -24,15 +24,20 @@ interface Props {
   readonly note?: string;
 }
 
+/** The pause after the last keystroke at which a typed value is taken (Enter and leaving the field take it at once). */
+export const ENTRY_PAUSE_MS = 600;
+
 const close = (a: number, b: number) => Math.abs(a - b) <= 1e-12 * Math.max(Math.abs(a), Math.abs(b), 1e-300);
 
 /**
- * A number input in the chosen unit system. The text typed is kept while the user types; the
- * draft holds the value in file units. Text that is not a number goes into the draft as text, so
- * the schema marks the field and the last valid results stay on screen.
+ * A number input in the chosen unit system. The text typed is kept while the user types and goes
+ * into the draft (in file units) only on a pause, Enter or leaving the field, so the results never
+ * belong to a keystroke on the way ("16" on the way to "160"); meanwhile the sheet shows
+ * "computing". Text that is not a number goes into the draft as text, so the schema marks the
+ * field and the last valid results stay on screen.
  */
 export function NumberField({ path, label, kind = 'none', unit, optional, hint, value, onValue, derived, note }: Props) {
-  const { draft, units, dispatch, messagesAt } = useSheet();
+  const { draft, units, dispatch, messagesAt, pending } = useSheet();
   const key = pathKey(path);
   const id = fieldId(key);
   const stored = getIn(draft, path);
@@ -42,9 +47,12 @@ export function NumberField({ path, label, kind = 'none', unit, optional, hint, 
   const shown = current === undefined ? '' : display(toDisplay(kind, current, units));
   const [text, setText] = useState(typeof stored === 'string' ? stored : shown);
   const last = useRef({ units, current });
+  const timer = useRef<ReturnType<typeof setTimeout> | null>(null);
+  const waiting = useRef<string | null>(null);
 
   // Follow the draft when it changes from elsewhere (open, undo of a unit switch), not while typing it.
   useEffect(() => {
+    if (waiting.current !== null) return;
     const typed = parseInput(text);
     const typedValue = Number.isNaN(typed) ? undefined : fromDisplay(kind, typed, units);
     const sameValue = current === undefined ? typeof stored === 'string' || (optional && text.trim() === '') : typedValue !== undefined && close(typedValue, current);
@@ -53,13 +61,34 @@ export function NumberField({ path, label, kind = 'none', unit, optional, hint, 
   }, [current, units, shown, stored, kind, optional, text]);
 
   const commit = (next: string) => {
+    if (timer.current) clearTimeout(timer.current);
+    timer.current = null;
+    if (waiting.current === null) return;
+    waiting.current = null;
+    pending(key, false);
     // Start of the edit-to-chart latency (tests/e2e/bench.ts measures it to 'chart-updated').
     performance.mark('edit');
-    setText(next);
     const n = parseInput(next);
     const v = next.trim() === '' && optional ? undefined : Number.isNaN(n) ? next : fromDisplay(kind, n, units);
     if (onValue) onValue(v);
     else dispatch({ type: 'set', path, value: v });
+  };
+  const commitRef = useRef(commit);
+  commitRef.current = commit;
+  // Leaving the sheet with a value still waiting: take it rather than lose it.
+  useEffect(() => () => {
+    if (waiting.current !== null) commitRef.current(waiting.current);
+  }, []);
+
+  const typed = (next: string) => {
+    setText(next);
+    if (waiting.current === null) pending(key, true);
+    waiting.current = next;
+    if (timer.current) clearTimeout(timer.current);
+    timer.current = setTimeout(() => commitRef.current(next), ENTRY_PAUSE_MS);
+  };
+  const onKeyDown = (e: KeyboardEvent<HTMLInputElement>) => {
+    if (e.key === 'Enter' && waiting.current !== null) commit(waiting.current);
   };
 
   const local = text.trim() !== '' && Number.isNaN(parseInput(text)) ? ['enter a number'] : text.trim() === '' && !optional && !derived ? ['required'] : [];
@@ -80,7 +109,11 @@ export function NumberField({ path, label, kind = 'none', unit, optional, hint, 
         aria-describedby={messages.length ? `${id}-msg` : note ? `${id}-note` : undefined}
         aria-label={unitText ? `${label} (${unitText})` : label}
         placeholder={optional ? 'optional' : undefined}
-        onChange={(e) => commit(e.target.value)}
+        onChange={(e) => typed(e.target.value)}
+        onKeyDown={onKeyDown}
+        onBlur={() => {
+          if (waiting.current !== null) commit(waiting.current);
+        }}
       />
     </FieldShell>
   );

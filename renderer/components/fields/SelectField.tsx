@@ -21,7 +21,11 @@ export function SelectField<V extends string | number>({ path, label, options, h
   const stored = value ?? getIn(draft, path);
   const index = options.findIndex(([v]) => v === stored);
   const messages = messagesAt(key);
+  // A long option gets room in the grid, so the chosen one is never cut off (about 0.5 rem per character).
+  const longest = Math.max(label.length, ...options.map(([, t]) => t.length));
+  const span = longest > 34 ? 'field-wide' : longest > 17 ? 'field-span2' : undefined;
   return (
+    <div className={span}>
     <FieldShell id={id} label={label} messages={messages} hint={hint}>
       <select
         id={id}
@@ -45,5 +49,6 @@ export function SelectField<V extends string | number>({ path, label, options, h
         ))}
       </select>
     </FieldShell>
+    </div>
   );
 }

@@ -7,29 +7,32 @@ interface Props {
   readonly label: string;
   readonly optional?: boolean;
   readonly wide?: boolean;
+  /** Several lines (notes). */
+  readonly multiline?: boolean;
+  readonly placeholder?: string;
+  readonly note?: string;
 }
 
 /** A text input; an optional one left empty removes its key. */
-export function TextField({ path, label, optional, wide }: Props) {
+export function TextField({ path, label, optional, wide, multiline, placeholder, note }: Props) {
   const { draft, dispatch, messagesAt } = useSheet();
   const key = pathKey(path);
   const id = fieldId(key);
   const stored = getIn(draft, path);
   const messages = messagesAt(key);
+  const common = {
+    id,
+    value: typeof stored === 'string' ? stored : '',
+    'data-path': key,
+    'aria-invalid': messages.length > 0,
+    'aria-describedby': messages.length ? `${id}-msg` : note ? `${id}-note` : undefined,
+    placeholder: placeholder ?? (optional ? 'optional' : undefined),
+    onChange: (e: { target: { value: string } }) => dispatch({ type: 'set', path, value: optional && e.target.value === '' ? undefined : e.target.value }),
+  };
   return (
     <div className={wide ? 'field-wide' : undefined}>
-      <FieldShell id={id} label={label} messages={messages}>
-        <input
-          id={id}
-          className="field__input field__input--text"
-          type="text"
-          value={typeof stored === 'string' ? stored : ''}
-          data-path={key}
-          aria-invalid={messages.length > 0}
-          aria-describedby={messages.length ? `${id}-msg` : undefined}
-          placeholder={optional ? 'optional' : undefined}
-          onChange={(e) => dispatch({ type: 'set', path, value: optional && e.target.value === '' ? undefined : e.target.value })}
-        />
+      <FieldShell id={id} label={label} messages={messages} note={note}>
+        {multiline ? <textarea className="field__input field__input--text" rows={3} {...common} /> : <input className="field__input field__input--text" type="text" {...common} />}
       </FieldShell>
     </div>
   );

@@ -4,20 +4,28 @@ import { cssVar, useColorScheme } from '../../hooks/useColorScheme';
 import { formatResult } from '../../units/format';
 import { Chart, registerCharts } from './chartSetup';
 import { summarise, type ChartSpec } from './series';
+import { toDisplay, unitLabel, type UnitSystem } from '../../units/units';
 
 registerCharts();
+
+const Y_AXIS_PX = 56;
 
 function configOf(spec: ChartSpec): ChartConfiguration<'line', { x: number; y: number | null }[]> {
   const fg = cssVar('--fg') || '#1b1b1b';
   const grid = cssVar('--grid') || 'rgba(0,0,0,0.1)';
   const surface = cssVar('--surface') || '#ffffff';
-  const scale = (title: string, position: 'left' | 'right' | 'bottom') => ({
+  // The y title is drawn upright above the axis (axisCaption), so λ never reads as a rotated γ.
+  const scale = (title: string, position: 'left' | 'bottom') => ({
     type: 'linear' as const,
     position,
-    title: { display: true, text: title, color: fg },
+    // bounds 'ticks' (chart.js's default for linear scales) ends each axis on a round tick.
+    bounds: 'ticks' as const,
+    title: { display: position === 'bottom', text: title, color: fg },
     ticks: { color: fg, maxTicksLimit: 8 },
-    grid: { color: grid, drawOnChartArea: position !== 'right' },
+    grid: { color: grid },
   });
+  const lows = spec.series.flatMap((s) => s.points.map((p) => p.y)).filter((y): y is number => y !== null);
+  const startAtZero = spec.bands !== undefined || (lows.length > 0 && Math.min(...lows) >= 0 && spec.id !== 'temperature');
   return {
     type: 'line',
     data: {
@@ -42,12 +50,25 @@ function configOf(spec: ChartSpec): ChartConfiguration<'line', { x: number; y: n
       normalized: true,
       interaction: { mode: 'index', intersect: false },
       scales: {
-        x: { ...scale(spec.xLabel, 'bottom'), min: spec.markers[0]?.x, max: spec.markers[spec.markers.length - 1]?.x },
-        y: scale(spec.yLabel, 'left'),
-        ...(spec.y2Label ? { y2: { ...scale(spec.y2Label, 'right'), ...(spec.bands ? { min: 0, max: spec.y2Max } : {}) } } : {}),
+        x: { ...scale(spec.xLabel, 'bottom'), suggestedMin: spec.markers[0]?.x, suggestedMax: spec.markers[spec.markers.length - 1]?.x },
+        // A fixed width for the y axis: every chart of the strip puts A…E at the same place.
+        y: { ...scale(spec.yLabel, 'left'), afterFit: (s: { width: number }) => { s.width = Y_AXIS_PX; }, ...(startAtZero ? { min: 0 } : {}), ...(spec.yMax !== undefined ? { suggestedMax: spec.yMax } : {}) },
       },
+      layout: { padding: { top: 16 } },
       plugins: {
-        legend: { labels: { color: fg, boxHeight: 2 } },
+        // Line samples, dashed as the line is (a filled box would hide the dash).
+        legend: {
+          labels: {
+            color: fg,
+            usePointStyle: true,
+            pointStyle: 'line',
+            pointStyleWidth: 30,
+            // chart.js takes a point-style sample's dash from the point, which has none: give it the line's.
+            generateLabels: (chart) =>
+              Chart.defaults.plugins.legend.labels.generateLabels(chart).map((item) => ({ ...item, lineDash: [...(((chart.data.datasets[item.datasetIndex ?? 0] as { borderDash?: number[] } | undefined)?.borderDash) ?? [])] })),
+          },
+        },
+        axisCaption: { text: spec.yLabel, color: fg },
         tooltip: {
           callbacks: {
             title: (items) => (items[0] ? `${spec.xLabel.replace(/^Position along the path of contact/, 'Position')}: ${formatResult(items[0].parsed.x, 4)}` : ''),
@@ -63,7 +84,7 @@ function configOf(spec: ChartSpec): ChartConfiguration<'line', { x: number; y: n
 }
 
 /** One Mesh chart, with its data summary on the element and a PNG export. */
-export function MeshChart({ spec, fileStem }: { readonly spec: ChartSpec; readonly fileStem: string }) {
+export function MeshChart({ spec, fileStem, units }: { readonly spec: ChartSpec; readonly fileStem: string; readonly units: UnitSystem }) {
   const canvas = useRef<HTMLCanvasElement>(null);
   const chart = useRef<Chart<'line', { x: number; y: number | null }[]> | null>(null);
   const scheme = useColorScheme();
@@ -107,8 +128,18 @@ export function MeshChart({ spec, fileStem }: { readonly spec: ChartSpec; readon
           ) : null}
         </span>
       </figcaption>
-      <div className="mesh-chart__plot">
-        <canvas ref={canvas} role="img" aria-label={`${spec.title}: ${described}. A to E marked.`} />
+      <div className="mesh-chart__body">
+        <div className="mesh-chart__plot">
+          <canvas ref={canvas} role="img" aria-label={`${spec.title}: ${described}. A to E marked.`} />
+        </div>
+        <dl className="mesh-chart__figures" data-testid={`figures-${spec.id}`}>
+          {spec.figures.map((f) => (
+            <div key={f.label}>
+              <dt>{f.label}</dt>
+              <dd>{f.text ?? (f.value === null ? '—' : `${formatResult(toDisplay(f.kind, f.value, units), 4)}${unitLabel(f.kind, units) ? ` ${unitLabel(f.kind, units)}` : ''}`)}</dd>
+            </div>
+          ))}
+        </dl>
       </div>
     </figure>
   );

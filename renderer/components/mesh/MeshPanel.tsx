@@ -28,28 +28,48 @@ const FILM_POINTS: ReadonlyArray<{ value: EhlPointSpec & string; label: string }
   { value: 'E', label: 'E' },
 ];
 
-/** Charts along the path of contact, A to E, for one load case × oil (and, on a planetary stage, one mesh). */
+/** The load cases in the results' order, each with its rows (one per oil). */
+function byLoadCase(cases: readonly CaseResult[]): { name: string; rows: CaseResult[] }[] {
+  const out: { name: string; rows: CaseResult[] }[] = [];
+  for (const c of cases) {
+    const last = out[out.length - 1];
+    if (last && last.name === c.loadCase) last.rows.push(c);
+    else out.push({ name: c.loadCase, rows: [c] });
+  }
+  return out;
+}
+
+/**
+ * One strip of charts along the path of contact, A to E, for one load case with every oil drawn on
+ * the same chart (on a planetary stage, for the chosen mesh); Film detail at a point on demand.
+ */
 function MeshPanelView({ results, review = null, limits, units }: Props) {
   const [picked, setPicked] = useState(0);
   const [pickedMesh, setPickedMesh] = useState<PlanetaryMesh | null>(null);
   const [filmAt, setFilmAt] = useState<EhlPointSpec & string>('lambda-min');
+  const [filmOil, setFilmOil] = useState(0);
   const [film, setFilm] = useState<EhlPointRequest | null>(null);
   const selectId = useId();
   const meshSelectId = useId();
   const pointId = useId();
+  const oilId = useId();
   const meshes = results?.meshes ?? null;
   const mesh = meshes ? (meshes.find((m) => m.mesh === pickedMesh) ?? meshes.find((m) => m.mesh === results?.planetary?.shownMesh) ?? meshes[0]) : null;
-  const cases = mesh?.cases ?? results?.cases ?? [];
+  const cases = mesh?.cases ?? results?.cases;
   const gear = mesh?.gear ?? results?.gear;
-  const index = picked < cases.length ? picked : 0;
-  const c = cases[index];
-  const specs = useMemo(() => (c && gear ? meshCharts(c, gear, limits, units) : []), [c, gear, limits, units]);
+  const groups = useMemo(() => byLoadCase(cases ?? []), [cases]);
+  const index = picked < groups.length ? picked : 0;
+  const rows = groups[index]?.rows;
+  const c = rows?.[0];
+  const specs = useMemo(() => (rows && gear && cases ? meshCharts(rows, gear, limits, units, cases) : []), [rows, gear, cases, limits, units]);
   // The charts (children) have drawn their new data by now: the end of the edit-to-chart latency.
   useEffect(() => {
     if (specs.length) performance.mark('chart-updated');
   }, [specs]);
-  if (!results || !c) return <Panel id="mesh" title="Mesh"><p className="note">No results yet.</p></Panel>;
-  const stem = `flankfilm-mesh-${mesh ? `${mesh.mesh}-` : ''}${index + 1}`;
+  if (!results || !c || !rows) return <Panel id="mesh" title="Mesh"><p className="note">No results yet.</p></Panel>;
+  const stem = `flankfilm-mesh-${index + 1}`;
+  const oils = rows.filter((r) => r.oil !== null);
+  const filmRow = oils[filmOil < oils.length ? filmOil : 0];
   return (
     <Panel
       id="mesh"
@@ -69,48 +89,63 @@ function MeshPanelView({ results, review = null, limits, units }: Props) {
             </span>
           ) : null}
           <span className="field field--inline">
-            <label htmlFor={selectId}>Case</label>
+            <label htmlFor={selectId}>Load case</label>
             <select id={selectId} value={index} onChange={(e) => setPicked(Number(e.target.value))} data-testid="mesh-case">
-              {cases.map((x, i) => (
+              {groups.map((g, i) => (
                 <option key={i} value={i}>
-                  {x.loadCase} — {x.oil ?? 'no oil'}
+                  {g.name}
                 </option>
               ))}
             </select>
-            {review && c?.oil && !meshes ? (
-              <>
-                <label htmlFor={pointId}>Film at</label>
-                <select id={pointId} value={filmAt} onChange={(e) => setFilmAt(e.target.value as EhlPointSpec & string)} data-testid="film-point">
-                  {FILM_POINTS.map((p) => (
-                    <option key={p.value} value={p.value}>
-                      {p.label}
-                    </option>
-                  ))}
-                </select>
-                <button type="button" onClick={() => setFilm({ caseName: c.loadCase, oilName: c.oil as string, at: filmAt })} data-testid="film-open">
-                  Film detail…
-                </button>
-              </>
-            ) : null}
           </span>
+          {review && filmRow && !meshes ? (
+            <span className="field field--inline">
+              {oils.length > 1 ? (
+                <>
+                  <label htmlFor={oilId}>Oil</label>
+                  <select id={oilId} value={filmOil < oils.length ? filmOil : 0} onChange={(e) => setFilmOil(Number(e.target.value))} data-testid="film-oil">
+                    {oils.map((o, i) => (
+                      <option key={i} value={i}>
+                        {o.oil}
+                      </option>
+                    ))}
+                  </select>
+                </>
+              ) : null}
+              <label htmlFor={pointId}>Film at</label>
+              <select id={pointId} value={filmAt} onChange={(e) => setFilmAt(e.target.value as EhlPointSpec & string)} data-testid="film-point">
+                {FILM_POINTS.map((p) => (
+                  <option key={p.value} value={p.value}>
+                    {p.label}
+                  </option>
+                ))}
+              </select>
+              <button type="button" onClick={() => setFilm({ caseName: filmRow.loadCase, oilName: filmRow.oil as string, at: filmAt })} data-testid="film-open">
+                Film detail…
+              </button>
+            </span>
+          ) : null}
         </>
       }
     >
       <dl className="qlist qlist--row">
         <QuantityRow def="maxHertzStress" value={c.maxHertzStress_MPa} units={units} sig={4} testId="mesh-max-hertz" />
-        <QuantityRow def="pitchLineVelocity" value={c.pitchLineVelocity_mps} units={units} sig={3} />
-        <QuantityRow def="lambdaMin" value={c.lambdaMin} units={units} sig={2} testId="mesh-lambda-min" />
-        <QuantityRow def="frictionCoefficient" value={c.frictionCoefficient} units={units} sig={2} />
-        <QuantityRow def="bulkTemperature" value={c.bulkTemperature_C} units={units} sig={3} />
-        <QuantityRow def="maxFlashTemperature" value={c.maxFlashTemperature_K} units={units} sig={3} />
-        <QuantityRow def="maxContactTemperature" value={c.maxContactTemperature_C} units={units} sig={3} />
-        <QuantityRow def="scuffingTemperature" value={c.scuffingTemperature_C} units={units} sig={3} />
+        <QuantityRow def="pitchLineVelocity" value={c.pitchLineVelocity_mps} units={units} sig={4} />
+        <QuantityRow def="lambdaMin" value={c.lambdaMin} units={units} sig={4} testId="mesh-lambda-min" />
+        <QuantityRow def="frictionCoefficient" value={c.frictionCoefficient} units={units} sig={4} />
+        <QuantityRow def="bulkTemperature" value={c.bulkTemperature_C} units={units} sig={4} />
+        <QuantityRow def="maxFlashTemperature" value={c.maxFlashTemperature_K} units={units} sig={4} />
+        <QuantityRow def="maxContactTemperature" value={c.maxContactTemperature_C} units={units} sig={4} />
+        <QuantityRow def="scuffingTemperature" value={c.scuffingTemperature_C} units={units} sig={4} />
         <QuantityRow def="micropittingSafety" value={c.micropitting?.safety ?? null} units={units} sig={3} testId="mesh-micropitting-safety" />
         <QuantityRow def="micropittingFinding" value={micropittingWords(c)} units={units} testId="mesh-micropitting-finding" />
       </dl>
-      <div className="mesh-grid">
+      <p className="note">
+        Figures of {c.oil ?? 'the case'}. Every oil of the case on the same charts, on axes fixed for the whole review; one position axis, A to E, for the strip.
+      </p>
+      <div className="mesh-strip">
         {specs.map((s) => (
-          <MeshChart key={s.id} spec={s} fileStem={stem} />
+          <MeshChart key={s.id} spec={s} fileStem={stem} units={units} />
         ))}
       </div>
       {film && review ? <FilmDetail review={review} point={film} units={units} onClose={() => setFilm(null)} /> : null}

@@ -10,6 +10,10 @@ export interface BandOptions {
   readonly bands: readonly Band[];
   readonly textColor: string;
 }
+export interface CaptionOptions {
+  readonly text: string;
+  readonly color: string;
+}
 export interface BackgroundOptions {
   readonly color: string;
 }
@@ -21,6 +25,7 @@ declare module 'chart.js' {
     flankMarkers?: MarkerOptions | false;
     regimeBands?: BandOptions | false;
     sheetBackground?: BackgroundOptions | false;
+    axisCaption?: CaptionOptions | false;
   }
 }
 
@@ -52,13 +57,29 @@ const markersPlugin: Plugin<'line', MarkerOptions> = {
   },
 };
 
-/** Regime bands on the second axis: a pale fill with the regime's word in it (colour never alone). */
+/** The y axis's title, upright above the axis (a rotated λ reads as γ). */
+const captionPlugin: Plugin<'line', CaptionOptions> = {
+  id: 'axisCaption',
+  afterDraw(chart, _args, opts) {
+    if (!opts || !opts.text) return;
+    const { ctx, chartArea: area } = chart;
+    ctx.save();
+    ctx.fillStyle = opts.color;
+    ctx.font = '12px system-ui, sans-serif';
+    ctx.textAlign = 'left';
+    ctx.textBaseline = 'bottom';
+    ctx.fillText(opts.text, Math.max(2, area.left - 28), area.top - 3);
+    ctx.restore();
+  },
+};
+
+/** Regime bands on the λ axis: a pale fill with the regime's word in it (colour never alone). */
 const bandsPlugin: Plugin<'line', BandOptions> = {
   id: 'regimeBands',
   beforeDatasetsDraw(chart, _args, opts) {
     if (!opts || !opts.bands) return;
     const { ctx, chartArea: area, scales } = chart;
-    const y2 = scales.y2;
+    const y2 = scales.y;
     if (!y2) return;
     ctx.save();
     ctx.font = '11px system-ui, sans-serif';
@@ -109,7 +130,7 @@ let registered = false;
 /** Register only what the Mesh charts use (tree-shaken chart.js). */
 export function registerCharts(): void {
   if (registered) return;
-  Chart.register(LineController, LineElement, PointElement, LinearScale, Tooltip, Legend, markersPlugin, bandsPlugin, backgroundPlugin, tooltipMirrorPlugin);
+  Chart.register(LineController, LineElement, PointElement, LinearScale, Tooltip, Legend, markersPlugin, bandsPlugin, backgroundPlugin, tooltipMirrorPlugin, captionPlugin);
   registered = true;
 }
 

@@ -18,18 +18,19 @@ export interface Band {
 }
 
 export interface ChartSpec {
-  readonly id: 'hertz' | 'velocity' | 'film' | 'temperature';
+  readonly id: 'hertz' | 'velocity' | 'film' | 'hmin' | 'temperature' | 'flash';
   readonly title: string;
   readonly xLabel: string;
   readonly yLabel: string;
-  readonly y2Label?: string;
   readonly series: readonly SeriesSpec[];
   /** A–E positions in display units. */
   readonly markers: readonly { label: string; x: number }[];
-  /** Horizontal bands on the second axis (the regimes on λ). */
+  /** Horizontal bands on the y axis (the regimes on λ). */
   readonly bands?: readonly Band[];
-  /** y2 axis upper bound hint, so the bands stay readable. */
-  readonly y2Max?: number;
+  /** Upper bound the axis must reach, the same for every case of the review, so switching compares like with like. */
+  readonly yMax?: number;
+  /** The figures that matter for this chart, shown beside it. */
+  readonly figures: readonly { readonly label: string; readonly value: number | null; readonly kind: QuantityKind; readonly text?: string }[];
 }
 
 export interface RegimeLimits {
@@ -48,13 +49,44 @@ const axis = (name: string, kind: QuantityKind, units: UnitSystem) => {
   return u ? `${name} (${u})` : name;
 };
 
-/** The four Mesh charts of one case, in display units. Pure, so it is tested without a canvas. */
-export function meshCharts(c: CaseResult, gear: GearResult, limits: RegimeLimits, units: UnitSystem): ChartSpec[] {
+/** Oil colours, in the order of the review's oils: the first (usually in service) solid, the others dashed. */
+const OIL_COLOURS = [OKABE_ITO.vermillion, OKABE_ITO.blue, OKABE_ITO.bluishGreen, OKABE_ITO.reddishPurple, OKABE_ITO.orange, OKABE_ITO.skyBlue];
+const oilStyle = (i: number) => ({ color: OIL_COLOURS[i % OIL_COLOURS.length] as string, ...(i === 0 ? {} : { dash: i === 1 ? [7, 4] : [2, 3] }) });
+
+const maxOf = (cases: readonly CaseResult[], pick: (p: PointResult) => number | null, kind: QuantityKind, units: UnitSystem): number | undefined => {
+  let m = -Infinity;
+  for (const c of cases) for (const p of c.path) {
+    const v = pick(p);
+    if (v !== null && Number.isFinite(v)) m = Math.max(m, toDisplay(kind, v, units));
+  }
+  return Number.isFinite(m) ? m : undefined;
+};
+
+/**
+ * The Mesh charts of one load case, every oil of it drawn on the same chart, in display units:
+ * one strip sharing the A–E position axis. λ is its own chart with the regime bands on its axis,
+ * h_min apart; the contact temperature θB = θM + θfl is drawn against θS on one temperature axis
+ * and the flash temperature θfl (a difference, K) on its own. `all` (every case of the review)
+ * fixes the upper ends of the axes, so switching the case compares like with like. Pure.
+ */
+export function meshCharts(cases: CaseResult | readonly CaseResult[], gear: GearResult, limits: RegimeLimits, units: UnitSystem, all?: readonly CaseResult[]): ChartSpec[] {
+  const list: readonly CaseResult[] = Array.isArray(cases) ? cases : [cases as CaseResult];
+  const c = list[0] as CaseResult;
+  const every = all ?? list;
   const xLabel = axis('Position along the path of contact', 'length', units);
   const markers = (['A', 'B', 'C', 'D', 'E'] as const).map((k) => ({ label: k, x: toDisplay('length', gear.points_mm[k], units) }));
-  const lambdas = c.path.map((p) => p.lambda).filter((l): l is number => l !== null);
-  const lambdaTop = Math.max(limits.fullFilmFrom * 1.25, ...lambdas.map((l) => l * 1.1));
-  const theta = c.scuffingTemperature_C;
+  const lambdaAll = every.flatMap((x) => x.path.map((p) => p.lambda)).filter((l): l is number => l !== null && Number.isFinite(l));
+  const lambdaTop = Math.max(limits.fullFilmFrom * 1.25, ...lambdaAll.map((l) => l * 1.1));
+  const oilName = (x: CaseResult) => x.oil ?? 'no oil';
+  const many = list.length > 1;
+  const named = (sym: string, x: CaseResult) => (many ? `${sym} ${oilName(x)}` : sym);
+  const minOf = (pick: (x: CaseResult) => number | null) => {
+    const v = list.map(pick).filter((y): y is number => y !== null && Number.isFinite(y));
+    return v.length ? Math.min(...v) : null;
+  };
+  // θS of an oil above stage 12 is only a floor (not limiting): it is neither drawn nor sets the axis.
+  const limiting = (x: CaseResult) => x.scuffingTemperature_C !== null && !x.scuffingTemperatureAtLeast;
+  const tempMax = Math.max(maxOf(every, (p) => p.contactTemperature_C, 'temperature', units) ?? -Infinity, ...every.map((x) => (limiting(x) ? toDisplay('temperature', x.scuffingTemperature_C as number, units) : -Infinity)));
   return [
     {
       id: 'hertz',
@@ -62,49 +94,73 @@ export function meshCharts(c: CaseResult, gear: GearResult, limits: RegimeLimits
       xLabel,
       yLabel: axis('σH', 'stress', units),
       markers,
+      yMax: maxOf(every, (p) => p.hertzStress_MPa, 'stress', units),
       series: [{ label: 'σH', axis: 'y', color: OKABE_ITO.blue, points: along(c.path, units, 'stress', (p) => p.hertzStress_MPa) }],
+      figures: [{ label: 'σH,max', value: c.maxHertzStress_MPa, kind: 'stress' }],
     },
     {
       id: 'velocity',
       title: 'Sliding and sum velocity',
       xLabel,
-      yLabel: axis('Velocity', 'velocity', units),
+      yLabel: axis('v', 'velocity', units),
       markers,
+      yMax: maxOf(every, (p) => Math.max(p.sumVelocity_mps, Math.abs(p.slidingVelocity_mps)), 'velocity', units),
       series: [
         { label: 'vg sliding', axis: 'y', color: OKABE_ITO.vermillion, points: along(c.path, units, 'velocity', (p) => p.slidingVelocity_mps) },
-        { label: 'vΣ sum', axis: 'y', color: OKABE_ITO.blue, dash: [6, 3], points: along(c.path, units, 'velocity', (p) => p.sumVelocity_mps) },
+        { label: 'vΣ sum', axis: 'y', color: OKABE_ITO.blue, dash: [7, 4], points: along(c.path, units, 'velocity', (p) => p.sumVelocity_mps) },
       ],
+      figures: [{ label: 'v at the pitch line', value: c.pitchLineVelocity_mps, kind: 'velocity' }],
     },
     {
       id: 'film',
-      title: 'Film thickness hmin and λ',
+      title: 'Specific film λ, with the regimes',
       xLabel,
-      yLabel: axis('hmin', 'film', units),
-      y2Label: 'λ',
+      yLabel: 'λ',
       markers,
-      y2Max: lambdaTop,
+      yMax: lambdaTop,
       bands: [
         { from: 0, to: limits.boundaryBelow, label: REGIME_WORDS.boundary, color: REGIME_COLOURS.boundary },
         { from: limits.boundaryBelow, to: limits.fullFilmFrom, label: REGIME_WORDS.mixed, color: REGIME_COLOURS.mixed },
         { from: limits.fullFilmFrom, to: lambdaTop, label: REGIME_WORDS['full-film'], color: REGIME_COLOURS['full-film'] },
       ],
-      series: [
-        { label: 'hmin', axis: 'y', color: OKABE_ITO.blue, points: along(c.path, units, 'film', (p) => p.filmThicknessMin_um) },
-        { label: 'λ', axis: 'y2', color: OKABE_ITO.reddishPurple, dash: [6, 3], points: along(c.path, units, 'none', (p) => p.lambda) },
-      ],
+      series: list.map((x, i) => ({ label: named('λ', x), axis: 'y' as const, ...oilStyle(i), points: along(x.path, units, 'none', (p) => p.lambda) })),
+      figures: list.map((x) => ({ label: named('λmin', x), value: x.lambdaMin, kind: 'none' as const })),
+    },
+    {
+      id: 'hmin',
+      title: 'Minimum film thickness hmin',
+      xLabel,
+      yLabel: axis('hmin', 'film', units),
+      markers,
+      yMax: maxOf(every, (p) => p.filmThicknessMin_um, 'film', units),
+      series: list.map((x, i) => ({ label: named('hmin', x), axis: 'y' as const, ...oilStyle(i), points: along(x.path, units, 'film', (p) => p.filmThicknessMin_um) })),
+      figures: [{ label: 'least hmin', value: minOf((x) => Math.min(...x.path.map((p) => p.filmThicknessMin_um ?? Infinity))), kind: 'film' }],
     },
     {
       id: 'temperature',
-      title: 'Contact and flash temperature against θS',
+      title: 'Contact temperature θB = θM + θfl against θS',
       xLabel,
-      yLabel: axis('Temperature', 'temperature', units),
-      y2Label: axis('θfl', 'temperatureDifference', units),
+      yLabel: axis('θ', 'temperature', units),
       markers,
-      series: [
-        { label: 'θB contact', axis: 'y', color: OKABE_ITO.vermillion, points: along(c.path, units, 'temperature', (p) => p.contactTemperature_C) },
-        { label: 'θS scuffing', axis: 'y', color: OKABE_ITO.bluishGreen, dash: [2, 3], points: along(c.path, units, 'temperature', () => theta) },
-        { label: 'θfl flash', axis: 'y2', color: OKABE_ITO.blue, dash: [6, 3], points: along(c.path, units, 'temperatureDifference', (p) => p.flashTemperature_K) },
-      ],
+      ...(Number.isFinite(tempMax) ? { yMax: tempMax } : {}),
+      series: list.flatMap((x, i) => [
+        { label: named('θB', x), axis: 'y' as const, ...oilStyle(i), points: along(x.path, units, 'temperature', (p) => p.contactTemperature_C) },
+        ...(limiting(x) ? [{ label: named('θS', x), axis: 'y' as const, color: OIL_COLOURS[i % OIL_COLOURS.length] as string, dash: [2, 3], points: along(x.path, units, 'temperature', () => x.scuffingTemperature_C) }] : []),
+      ]),
+      figures: list.flatMap((x) => [
+        { label: named('θB,max', x), value: x.maxContactTemperature_C, kind: 'temperature' as const },
+        limiting(x) ? { label: named('θS', x), value: x.scuffingTemperature_C, kind: 'temperature' as const } : { label: named('θS', x), value: null, kind: 'temperature' as const, text: 'above stage 12: not limiting' },
+      ]),
+    },
+    {
+      id: 'flash',
+      title: 'Flash temperature θfl (a rise above θM)',
+      xLabel,
+      yLabel: axis('θfl', 'temperatureDifference', units),
+      markers,
+      yMax: maxOf(every, (p) => p.flashTemperature_K, 'temperatureDifference', units),
+      series: list.map((x, i) => ({ label: named('θfl', x), axis: 'y' as const, ...oilStyle(i), points: along(x.path, units, 'temperatureDifference', (p) => p.flashTemperature_K) })),
+      figures: list.map((x) => ({ label: named('θfl,max', x), value: x.maxFlashTemperature_K, kind: 'temperatureDifference' as const })),
     },
   ];
 }

@@ -2,6 +2,7 @@ import type { CaseResult } from '../../../app/review/results';
 import type { UnitSystem } from '../../units/units';
 import { Quantity } from '../Quantity';
 import { VerdictBadge } from '../VerdictBadge';
+import { inDisplayUnits } from '../../units/inText';
 import { CheckChip } from '../verdict/CheckChip';
 
 interface Props {
@@ -37,7 +38,7 @@ export function CaseVerdictCard({ result: c, units, governing }: Props) {
         <Quantity def="maxHertzStress" value={c.maxHertzStress_MPa} units={units} sig={4} withSymbol testId="max-hertz" /> ·{' '}
         <Quantity def="maxContactTemperature" value={c.maxContactTemperature_C} units={units} sig={4} withSymbol /> ·{' '}
         {c.scuffingTemperatureAtLeast ? (
-          <span className="note">θS: the oil is above stage 12, not limiting</span>
+          <span className="note">θS: above stage 12: not limiting</span>
         ) : (
           <Quantity def="scuffingTemperature" value={c.scuffingTemperature_C} units={units} sig={4} withSymbol />
         )}
@@ -50,7 +51,7 @@ export function CaseVerdictCard({ result: c, units, governing }: Props) {
           <ol className="reasons" aria-label="Reasons">
             {v.reasons.map((r) => (
               <li key={r.rule}>
-                {r.text} <span className="reason__meta">Threshold: {r.threshold}. Source: {r.source}.</span>
+                {inDisplayUnits(r.text, units)} <span className="reason__meta">Threshold: {inDisplayUnits(r.threshold, units)}. Source: {r.source}.</span>
               </li>
             ))}
           </ol>

@@ -8,7 +8,6 @@ import { getIn } from '../../state/paths';
 import { CheckField } from '../fields/CheckField';
 import { NumberField } from '../fields/NumberField';
 import { SelectField } from '../fields/SelectField';
-import { TextField } from '../fields/TextField';
 import { DerivedGeometry } from './DerivedGeometry';
 import { GearMember } from './GearMember';
 import { Panel } from './Panel';
@@ -20,6 +19,8 @@ const KINDS: readonly (readonly [GearSetKind, string])[] = [
   ['planetary', 'Planetary stage (sun, planets, ring)'],
 ];
 
+const MM_PER_INCH = 25.4;
+
 /** The gear set, its kind chosen first: a pair (external or internal) or a planetary stage, with the derived geometry. */
 export function GearPairPanel({ results, stale }: { readonly results: Results | null; readonly stale: boolean }) {
   const { draft, dispatch, units } = useSheet();
@@ -30,7 +31,6 @@ export function GearPairPanel({ results, stale }: { readonly results: Results | 
   const gear = results?.gear ?? null;
   return (
     <Panel id="gear-pair" title="Gear set">
-      <TextField path={['title']} {...inputProps('title')} wide />
       <SelectField path={['gearSet']} label="Kind of gear set" options={KINDS} value={kind} onValue={(k) => dispatch({ type: 'setGearSet', kind: k })} />
       {kind === 'planetary' ? <PlanetaryFields /> : <PairFields internal={kind === 'internal'} />}
       <fieldset className="subgroup">
@@ -57,11 +57,25 @@ export function GearPairPanel({ results, stale }: { readonly results: Results | 
 
 /** The inputs of a pair, external or internal (the wheel a ring). */
 function PairFields({ internal }: { readonly internal: boolean }) {
+  const { draft, dispatch, units } = useSheet();
   const gp = ['gearPair'] as const;
+  const module = getIn(draft, [...gp, 'normalModule_mm']);
   return (
     <>
       <div className="grid-fields">
         <NumberField path={[...gp, 'normalModule_mm']} {...inputProps('gearPair.normalModule_mm')} />
+        {units === 'us' ? (
+          // US gear practice gives the normal diametral pitch Pnd = 25.4 / mn (mn in mm, Pnd in 1/in); either sets the module.
+          <NumberField
+            path={[...gp, 'normalDiametralPitch']}
+            label="Normal diametral pitch Pnd"
+            unit="1/in"
+            derived
+            value={typeof module === 'number' && module > 0 ? MM_PER_INCH / module : undefined}
+            onValue={(v) => dispatch({ type: 'set', path: [...gp, 'normalModule_mm'], value: typeof v === 'number' && v > 0 ? MM_PER_INCH / v : v })}
+            note="Pnd = 25.4 / mn"
+          />
+        ) : null}
         <NumberField path={[...gp, 'normalPressureAngle_deg']} {...inputProps('gearPair.normalPressureAngle_deg')} />
         <NumberField path={[...gp, 'helixAngle_deg']} {...inputProps('gearPair.helixAngle_deg')} />
         <NumberField path={[...gp, 'faceWidth_mm']} {...inputProps('gearPair.faceWidth_mm')} />

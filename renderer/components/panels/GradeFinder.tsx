@@ -1,8 +1,8 @@
 import type { Results } from '../../../app/review/results';
-import { formatResult } from '../../units/format';
+import { GradeChart } from './GradeChart';
 
-/** The viscosity grade that would reach the λ target, per oil, with the λmin of each grade tried. */
-export function GradeFinder({ results }: { readonly results: Results }) {
+/** The viscosity grade that would reach the λ target, per oil: λmin against ISO VG as a curve, with the grades the lubrication method cannot use left out and why. */
+export function GradeFinder({ results, target }: { readonly results: Results; readonly target: number }) {
   if (!results.gradeFinder.length) return null;
   return (
     <div className="grade-finder" data-testid="grade-finder">
@@ -14,31 +14,8 @@ export function GradeFinder({ results }: { readonly results: Results }) {
             <strong data-testid="recommended-vg">{g.recommendedVG === null ? 'none in range' : `ISO VG ${g.recommendedVG}`}</strong>.
           </p>
           <p className="note">{g.note}</p>
-          {g.table.length ? (
-            <table className="grade-table">
-              <caption className="sr-only">λmin by ISO viscosity grade for {g.oil}</caption>
-              <thead>
-                <tr>
-                  <th scope="row">ISO VG</th>
-                  {g.table.map((r) => (
-                    <th key={r.isoVG} scope="col" className={r.isoVG === g.recommendedVG ? 'is-picked' : undefined}>
-                      {r.isoVG}
-                    </th>
-                  ))}
-                </tr>
-              </thead>
-              <tbody>
-                <tr>
-                  <th scope="row" title="Smallest specific film thickness over the load cases with this grade (same base oil and VI)">λmin</th>
-                  {g.table.map((r) => (
-                    <td key={r.isoVG} className={r.isoVG === g.recommendedVG ? 'is-picked' : undefined} title={`λmin with ISO VG ${r.isoVG} (same base oil and VI), over the load cases. Source: film formula of the policy; grades per ISO 3448.`}>
-                      {formatResult(r.lambdaMin, 2)}
-                    </td>
-                  ))}
-                </tr>
-              </tbody>
-            </table>
-          ) : null}
+          {g.table.length ? <GradeChart g={g} target={target} /> : null}
+          {g.leftOut ? <p className="note" data-testid="grades-left-out">{g.leftOut}</p> : null}
         </div>
       ))}
     </div>

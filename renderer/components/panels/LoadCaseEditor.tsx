@@ -12,12 +12,13 @@ import { TextField } from '../fields/TextField';
  * One load case. Torque and power are both shown; the one typed last is the one the file keeps
  * (the schema wants exactly one), the other follows from it.
  */
-export function LoadCaseEditor({ index, canRemove }: { readonly index: number; readonly canRemove: boolean }) {
+export function LoadCaseEditor({ index, canRemove, shareNote }: { readonly index: number; readonly canRemove: boolean; readonly shareNote?: string | undefined }) {
   const { draft, dispatch } = useSheet();
   const p = ['loadCases', index] as const;
   const name = getIn(draft, [...p, 'name']);
   const k = caseKeys(draft);
   const givesTorque = getIn(draft, [...p, k.torque]) !== undefined;
+  const noLoad = !givesTorque && getIn(draft, [...p, 'power_kW']) === undefined;
   const legend = typeof name === 'string' && name ? name : `Load case ${index + 1}`;
   return (
     <fieldset className="item" data-testid={`load-case-${index}`}>
@@ -28,7 +29,7 @@ export function LoadCaseEditor({ index, canRemove }: { readonly index: number; r
         <NumberField
           path={[...p, k.torque]}
           {...inputProps(`loadCases[].${k.torque}`)}
-          note={givesTorque ? undefined : 'from the power'}
+          note={noLoad ? 'enter the torque or the power' : givesTorque ? undefined : 'from the power'}
           value={draftTorque(draft, index)}
           derived={!givesTorque}
           onValue={(value) => dispatch({ type: 'setDrive', index, given: 'torque', value })}
@@ -51,7 +52,7 @@ export function LoadCaseEditor({ index, canRemove }: { readonly index: number; r
             ['spray', LUBRICATION_WORDS.spray],
           ]}
         />
-        <NumberField path={[...p, 'timeShare']} {...inputProps('loadCases[].timeShare')} hint="Fraction of the time, 0 to 1" />
+        <NumberField path={[...p, 'timeShare']} {...inputProps('loadCases[].timeShare')} hint="Fraction of the time, 0 to 1" note={shareNote} />
       </div>
       {canRemove ? (
         <button type="button" className="link-button" onClick={() => dispatch({ type: 'removeItem', list: 'loadCases', index })}>

@@ -9,6 +9,18 @@ import { BASE_OIL_WORDS, CHEMISTRY_WORDS, INPUT_LABELS, OIL_ROLE_WORDS } from '.
 import { SelectField } from '../fields/SelectField';
 import { TextField } from '../fields/TextField';
 import { Quantity } from '../Quantity';
+import { viscosityIndex } from '../../../app/engine/oil/viscosityIndex';
+import { centistokes } from '../../../app/engine/units';
+
+/** VI by ASTM D2270 from the draft's KV40 and KV100 as they stand now; null while either is missing or outside the standard. */
+function d2270Of(kv40: unknown, kv100: unknown): number | null {
+  if (typeof kv40 !== 'number' || typeof kv100 !== 'number' || kv100 >= kv40) return null;
+  try {
+    return viscosityIndex(centistokes(kv40), centistokes(kv100)).value;
+  } catch {
+    return null;
+  }
+}
 
 const STAGES: readonly (readonly [FzgStage, string])[] = [...FZG_STAGES.map((s) => [s, String(s)] as const), ['>12', INPUT_LABELS['oils[].fzgFailureStage']?.words?.['>12'] ?? '>12'] as const];
 /** FVA 54 micropitting stages on the C-GF gear, and "not given" (the field left out). */
@@ -20,6 +32,16 @@ export function OilEditor({ index, summary }: { readonly index: number; readonly
   const p = ['oils', index] as const;
   const name = getIn(draft, [...p, 'name']);
   const legend = typeof name === 'string' && name ? name : `Oil ${index + 1}`;
+  const computedVi = d2270Of(getIn(draft, [...p, 'kv40_mm2s']), getIn(draft, [...p, 'kv100_mm2s']));
+  const enteredVi = getIn(draft, [...p, 'viscosityIndex']);
+  const viNote =
+    typeof enteredVi === 'number'
+      ? computedVi !== null && computedVi !== enteredVi
+        ? `entered; ASTM D2270 gives ${computedVi} from KV40 and KV100`
+        : 'entered'
+      : computedVi !== null
+        ? 'computed by ASTM D2270 from KV40 and KV100'
+        : 'computed by ASTM D2270 once KV40 and KV100 are entered';
   return (
     <fieldset className="item" data-testid={`oil-${index}`}>
       <legend>{legend}</legend>
@@ -36,7 +58,15 @@ export function OilEditor({ index, summary }: { readonly index: number; readonly
         />
         <NumberField path={[...p, 'kv40_mm2s']} {...inputProps('oils[].kv40_mm2s', units)} />
         <NumberField path={[...p, 'kv100_mm2s']} {...inputProps('oils[].kv100_mm2s', units)} />
-        <NumberField path={[...p, 'viscosityIndex']} {...inputProps('oils[].viscosityIndex')} optional hint="Empty: computed by ASTM D2270" />
+        <NumberField
+          path={[...p, 'viscosityIndex']}
+          {...inputProps('oils[].viscosityIndex')}
+          optional
+          derived
+          value={computedVi ?? undefined}
+          note={viNote}
+          hint="Computed by ASTM D2270 from KV40 and KV100 unless you type one; a typed VI is kept, any other is recomputed when a viscosity changes"
+        />
         <NumberField path={[...p, 'density15_kgm3']} {...inputProps('oils[].density15_kgm3', units)} />
         <SelectField path={[...p, 'baseOil']} {...inputProps('oils[].baseOil')} options={BASE_OILS.map((b) => [b, BASE_OIL_WORDS[b]] as const)} />
         <SelectField path={[...p, 'chemistry']} {...inputProps('oils[].chemistry')} options={CHEMISTRIES.map((c) => [c, CHEMISTRY_WORDS[c]] as const)} />
@@ -53,9 +83,9 @@ export function OilEditor({ index, summary }: { readonly index: number; readonly
       </div>
       {summary ? (
         <p className="derived-line">
-          <Quantity def="viscosityIndex" value={summary.viscosityIndex} units={units} sig={2} withSymbol /> ({summary.viscosityIndexSource}) ·{' '}
+          <Quantity def="viscosityIndex" value={summary.viscosityIndex} units={units} sig={4} withSymbol /> ({summary.viscosityIndexSource}) ·{' '}
           <Quantity def="isoVG" value={summary.isoVG === null ? 'outside ISO 3448' : `VG ${summary.isoVG}`} units={units} withSymbol /> ·{' '}
-          <Quantity def="lubricantFactor" value={summary.lubricantFactorXL} units={units} sig={2} withSymbol />
+          <Quantity def="lubricantFactor" value={summary.lubricantFactorXL} units={units} sig={3} withSymbol />
         </p>
       ) : null}
       <button type="button" className="link-button" onClick={() => dispatch({ type: 'removeItem', list: 'oils', index })}>

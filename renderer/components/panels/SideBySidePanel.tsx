@@ -94,7 +94,7 @@ function SideBySidePanelView({ results, units }: { readonly results: Results | n
           </tbody>
         </table>
       </div>
-      <GradeFinder results={results} />
+      <GradeFinder results={results} target={results.cases.flatMap((c) => c.verdict?.checks ?? []).find((k) => k.quantity === 'lambdaMin')?.limit ?? 1} />
     </Panel>
   );
 }

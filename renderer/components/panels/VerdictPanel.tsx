@@ -53,7 +53,7 @@ function VerdictPanelView({ results, units }: { readonly results: Results | null
           );
         })}
       </div>
-      {results.cautions.length ? <CautionSummaryList cautions={results.cautions} caseCount={caseCount} /> : <p className="note">{DEFER}</p>}
+      {results.cautions.length ? <CautionSummaryList cautions={results.cautions} caseCount={caseCount} units={units} /> : <p className="note">{DEFER}</p>}
     </Panel>
   );
 }

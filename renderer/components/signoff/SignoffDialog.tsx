@@ -7,6 +7,8 @@ import type { SignoffForm } from './words';
 interface Props {
   readonly open: boolean;
   readonly previous: Signoff | undefined;
+  /** What the decision approves, in words (decisionSubject). */
+  readonly subject: string;
   readonly onClose: () => void;
   /** Resolves when signed; rejects with the reason shown in the dialog. */
   readonly onSign: (form: SignoffForm) => Promise<void>;
@@ -16,7 +18,7 @@ interface Props {
  * The Sign-off dialog: a modal <dialog>, so the rest of the sheet is inert and Tab stays inside;
  * Escape cancels. Reviewer and role are required, as the contract's signReview wants.
  */
-export function SignoffDialog({ open, previous, onClose, onSign }: Props) {
+export function SignoffDialog({ open, previous, subject, onClose, onSign }: Props) {
   const ref = useRef<HTMLDialogElement>(null);
   const [form, setForm] = useState<SignoffForm>(() => initial(previous));
   const [error, setError] = useState<string | null>(null);
@@ -62,8 +64,11 @@ export function SignoffDialog({ open, previous, onClose, onSign }: Props) {
         <input id="so-role" required maxLength={200} value={form.role} onChange={(e) => set('role', e.target.value)} />
         <label htmlFor="so-org">Organisation</label>
         <input id="so-org" maxLength={200} value={form.organisation} onChange={(e) => set('organisation', e.target.value)} />
-        <fieldset className="decision">
+        <fieldset className="decision" aria-describedby="so-subject">
           <legend>Decision</legend>
+          <p className="note" id="so-subject" data-testid="signoff-subject">
+            The decision is on {subject}.
+          </p>
           {DECISIONS.map((d) => (
             <label key={d} className="radio">
               <input type="radio" name="decision" value={d} checked={form.decision === d} onChange={() => set('decision', d)} /> {DECISION_WORDS[d]}

@@ -1,13 +1,15 @@
 import type { ReactNode } from 'react';
 import type { ReviewStatus } from '../../../app/review/results';
-import type { Signoff } from '../../../app/review/schema';
+import type { Review, Signoff } from '../../../app/review/schema';
+import { decisionLine, isoDateTime } from '../../../app/review/decisionSubject';
 import { Panel } from '../panels/Panel';
 import { StatusBadge } from '../StatusBadge';
-import { DECISION_WORDS } from '../../../app/review/vocabulary';
 
 interface Props {
   readonly status: ReviewStatus;
   readonly signoff: Signoff | undefined;
+  /** The oils, to name what the decision approves. */
+  readonly review: Pick<Review, 'oils'> | null;
   readonly canSign: boolean;
   readonly onOpen: () => void;
   /** The changes since signing and the comparison with another revision. */
@@ -15,7 +17,7 @@ interface Props {
 }
 
 /** Who signed, when and what they decided; the button to sign (again); and what changed since. */
-export function SignoffPanel({ status, signoff, canSign, onOpen, children }: Props) {
+export function SignoffPanel({ status, signoff, review, canSign, onOpen, children }: Props) {
   return (
     <Panel
       id="sign-off"
@@ -34,9 +36,9 @@ export function SignoffPanel({ status, signoff, canSign, onOpen, children }: Pro
           <div className="qrow"><dt>Reviewer</dt><dd data-testid="signoff-reviewer">{signoff.reviewer}</dd></div>
           <div className="qrow"><dt>Role</dt><dd>{signoff.role}</dd></div>
           {signoff.organisation ? <div className="qrow"><dt>Organisation</dt><dd>{signoff.organisation}</dd></div> : null}
-          <div className="qrow"><dt>Decision</dt><dd>{DECISION_WORDS[signoff.decision]}</dd></div>
+          <div className="qrow"><dt>Decision</dt><dd data-testid="signoff-decision">{decisionLine(signoff, review ?? { oils: [] })}</dd></div>
           {signoff.conditions ? <div className="qrow"><dt>Conditions</dt><dd>{signoff.conditions}</dd></div> : null}
-          <div className="qrow"><dt>Signed</dt><dd>{new Date(signoff.signedAt).toLocaleString()}</dd></div>
+          <div className="qrow"><dt>Signed</dt><dd>{isoDateTime(signoff.signedAt)}</dd></div>
           <div className="qrow"><dt>Engine</dt><dd>{signoff.engineVersion}</dd></div>
           <div className="qrow"><dt title="SHA-256 over the inputs, the results summary and the engine version">Fingerprint</dt><dd><code>{signoff.fingerprint.slice(0, 16)}…</code></dd></div>
         </dl>

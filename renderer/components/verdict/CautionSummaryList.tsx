@@ -1,4 +1,6 @@
 import type { CautionSummary } from '../../../app/review/results';
+import { inDisplayUnits } from '../../units/inText';
+import type { UnitSystem } from '../../units/units';
 
 const where = (k: CautionSummary) => {
   const cases = [...new Set(k.appliesTo.map((a) => a.loadCase))];
@@ -7,7 +9,7 @@ const where = (k: CautionSummary) => {
 };
 
 /** Every caution once: those the inputs trigger, with where they apply; the standing rest folded. */
-export function CautionSummaryList({ cautions, caseCount }: { readonly cautions: readonly CautionSummary[]; readonly caseCount: number }) {
+export function CautionSummaryList({ cautions, caseCount, units = 'si' }: { readonly cautions: readonly CautionSummary[]; readonly caseCount: number; readonly units?: UnitSystem }) {
   const applying = cautions.filter((k) => k.applies);
   const standing = cautions.filter((k) => !k.applies);
   return (
@@ -18,7 +20,7 @@ export function CautionSummaryList({ cautions, caseCount }: { readonly cautions:
           <li key={k.id} className="caution caution--triggered" data-caution={k.id}>
             <span aria-hidden="true" className="caution__icon">⚠</span>
             <span>
-              {k.text}
+              {inDisplayUnits(k.text, units)}
               {k.id !== 'defer' && new Set(k.appliesTo.map((a) => a.loadCase)).size < caseCount ? <span className="caution__where"> Applies to {where(k)}.</span> : null}
             </span>
           </li>
@@ -31,7 +33,7 @@ export function CautionSummaryList({ cautions, caseCount }: { readonly cautions:
             {standing.map((k) => (
               <li key={k.id} className="caution caution--standing" data-caution={k.id}>
                 <span>
-                  <strong>{k.title}.</strong> {k.text}
+                  <strong>{k.title}.</strong> {inDisplayUnits(k.text, units)}
                 </span>
               </li>
             ))}

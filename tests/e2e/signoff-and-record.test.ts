@@ -88,7 +88,7 @@ describe('sign-off and record, by keyboard alone', () => {
   it('exports the CSV', async () => {
     const { page, harness } = s;
     await page.locator('[data-testid=export-csv]').click();
-    await expect.poll(() => page.locator('[data-testid=notice]').textContent().catch(() => ''), { timeout: WAIT }).toMatch(/CSV saved to .*cases\.csv/);
+    await expect.poll(() => page.locator('[data-testid=notice]').textContent().catch(() => ''), { timeout: WAIT }).toMatch(/CSV saved as .*cases\.csv/);
     expect(statSync(join(harness.workDir, 'cases.csv')).size).toBeGreaterThan(100);
   });
 

@@ -13,6 +13,7 @@ import { FONT_BOLD, FONT_REGULAR, Layout } from '../layout';
 import { INFO_KEYS, type Paper } from '../record';
 import { DEFER_TEXT, GREY } from '../words';
 import { drawAssignment, drawChosenSet, drawFitTable, drawFleetCautions, drawOilKey, drawUnserved } from './sections';
+import { drawFingerprintTable, drawSignatureLines } from '../sections/backMatter';
 
 export interface FleetRecordOptions {
   paper?: Paper;
@@ -104,30 +105,13 @@ function drawFleetCover(L: Layout, r: FleetResult, title: string, parts: Fingerp
 }
 
 function drawFleetSignoff(L: Layout, parts: FingerprintParts): void {
-  const doc = L.doc;
   L.ensure(300);
   L.heading('Sign-off', 1);
   L.para('To be completed by the engineer who accepts this consolidation.', { size: 8.5 });
   L.y += 6;
-  for (const label of ['Reviewer', 'Role and organisation', 'Decision and conditions', 'Date and signature']) {
-    L.ensure(24);
-    const y = L.y + 14;
-    L.font(false, 8.5).text(label, L.left, y - 10, { width: 150, lineBreak: false });
-    doc.moveTo(L.left + 150, y).lineTo(L.right, y).lineWidth(0.5).strokeColor(GREY).stroke();
-    L.y = y + 8;
-  }
+  drawSignatureLines(L);
   L.y += 4;
-  L.heading('Fingerprint of this record', 2);
-  L.keyValues(
-    [
-      ['Fingerprint (SHA-256)', parts.combined],
-      ['Inputs', parts.inputs],
-      ['Results summary', parts.results],
-      ['Engine version', `${parts.engine} (Flankfilm ${parts.engineVersion})`],
-      ['Scheme', FLEET_FINGERPRINT_SCHEME],
-    ],
-    { labelShare: 0.22, size: 7.5 },
-  );
+  drawFingerprintTable(L, parts, FLEET_FINGERPRINT_SCHEME);
   L.para('The fingerprint is SHA-256 over canonical JSON (sorted keys, no whitespace) of every review (as a review’s own fingerprint takes it) and the candidate-oil file, a summary of the results (the fit table’s marks, the set, the assignment and the unserved gearboxes) and the engine version. The inputs are attached to this PDF.', { size: 7.5, color: GREY });
 }
 

@@ -1,4 +1,5 @@
-import { FINGERPRINT_SCHEME } from '../../review/fingerprint';
+import { FINGERPRINT_SCHEME, type FingerprintParts } from '../../review/fingerprint';
+import type { Layout } from '../layout';
 import type { RecordContext } from '../context';
 import { drawStatusIcon, STATUS_COLOURS } from '../icons';
 import { basisTag, METHODS } from '../../review/methods';
@@ -95,26 +96,10 @@ export function drawSignoff(ctx: RecordContext): void {
   } else {
     L.para(`Not signed. The reviewer signs the review in Flankfilm (Sign off…) and exports the record again, or signs below. The decision is on ${decisionSubject(review)}.`, { size: 8.5 });
     L.y += 6;
-    for (const label of ['Reviewer', 'Role and organisation', 'Decision and conditions', 'Date and signature']) {
-      L.ensure(24);
-      const y = L.y + 14;
-      L.font(false, 8.5).text(label, L.left, y - 10, { width: 150, lineBreak: false });
-      doc.moveTo(L.left + 150, y).lineTo(L.right, y).lineWidth(0.5).strokeColor(GREY).stroke();
-      L.y = y + 8;
-    }
+    drawSignatureLines(L);
     L.y += 4;
   }
-  L.heading('Fingerprint of this record', 2);
-  L.keyValues(
-    [
-      ['Fingerprint (SHA-256)', parts.combined],
-      ['Inputs', parts.inputs],
-      ['Results summary', parts.results],
-      ['Engine version', `${parts.engine} (Flankfilm ${parts.engineVersion})`],
-      ['Scheme', FINGERPRINT_SCHEME],
-    ],
-    { labelShare: 0.22, size: 7.5 },
-  );
+  drawFingerprintTable(L, parts, FINGERPRINT_SCHEME);
   L.para(
     'The fingerprint is SHA-256 over canonical JSON (sorted keys, no whitespace) of the review without its sign-off’s fingerprint and signing time, a defined summary of the results (per case the key figures and verdict codes, and the verdict per oil) and the engine version. The review is attached to this PDF; `flankfilm verify` recomputes it and names the part that differs.',
     { size: 7.5, color: GREY },
@@ -151,4 +136,30 @@ function drawRevisionHistory(ctx: RecordContext, signoff: Signoff): void {
 
 function sourceWithTag(source: string, tag: string): string {
   return tag && !source.includes(tag) ? `${source} ${tag}` : source;
+}
+
+/** Blank lines for a signature by hand: reviewer, role, decision, date. */
+export function drawSignatureLines(L: Layout): void {
+  for (const label of ['Reviewer', 'Role and organisation', 'Decision and conditions', 'Date and signature']) {
+    L.ensure(24);
+    const y = L.y + 14;
+    L.font(false, 8.5).text(label, L.left, y - 10, { width: 150, lineBreak: false });
+    L.doc.moveTo(L.left + 150, y).lineTo(L.right, y).lineWidth(0.5).strokeColor(GREY).stroke();
+    L.y = y + 8;
+  }
+}
+
+/** The fingerprint and its part hashes, under its own heading. */
+export function drawFingerprintTable(L: Layout, parts: FingerprintParts, scheme: string): void {
+  L.heading('Fingerprint of this record', 2);
+  L.keyValues(
+    [
+      ['Fingerprint (SHA-256)', parts.combined],
+      ['Inputs', parts.inputs],
+      ['Results summary', parts.results],
+      ['Engine version', `${parts.engine} (Flankfilm ${parts.engineVersion})`],
+      ['Scheme', scheme],
+    ],
+    { labelShare: 0.22, size: 7.5 },
+  );
 }

@@ -19,15 +19,21 @@ export function DerivedGeometry({ gear, title, stale, units }: { readonly gear: 
         <QuantityRow def="totalContactRatio" value={gear.totalContactRatio} units={units} sig={3} />
         <QuantityRow def="lineOfAction" value={gear.lineOfAction_mm} units={units} sig={4} />
       </dl>
-      {gear.checks.length ? (
-        <ul className="checks-list">
-          {gear.checks.map((c) => (
-            <li key={c.code} className={`note note--${c.severity}`}>
-              {c.message}
-            </li>
-          ))}
-        </ul>
-      ) : null}
+      <DesignCheckNotes checks={gear.checks} />
     </div>
+  );
+}
+
+/** The design checks of a gear set (warnings and notes), each in its own words. */
+export function DesignCheckNotes({ checks }: { readonly checks: ReadonlyArray<{ code: string; severity: string; message: string }> }) {
+  if (!checks.length) return null;
+  return (
+    <ul className="checks-list">
+      {checks.map((c) => (
+        <li key={c.code} className={`note note--${c.severity}`}>
+          {c.message}
+        </li>
+      ))}
+    </ul>
   );
 }

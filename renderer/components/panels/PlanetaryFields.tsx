@@ -5,7 +5,7 @@ import { useSheet } from '../../state/context';
 import { NumberField } from '../fields/NumberField';
 import { SelectField } from '../fields/SelectField';
 import { QuantityRow } from '../Quantity';
-import { DerivedGeometry } from './DerivedGeometry';
+import { DerivedGeometry, DesignCheckNotes } from './DerivedGeometry';
 import { GearMember } from './GearMember';
 
 const HELD = ['ring', 'carrier', 'sun'] as const;
@@ -57,15 +57,7 @@ export function PlanetaryDerived({ results, stale }: { readonly results: Results
         <p className="note">
           {st.driving === 'sun' ? 'Sun' : 'Carrier'} drives the {st.driven}; governing mesh: {st.governingMesh.map((g) => MESH_WORDS[g.mesh]).filter((m, i, a) => a.indexOf(m) === i).join(', ') || '— (no oil)'}.
         </p>
-        {st.checks.length ? (
-          <ul className="checks-list">
-            {st.checks.map((c) => (
-              <li key={c.code} className={`note note--${c.severity}`}>
-                {c.message}
-              </li>
-            ))}
-          </ul>
-        ) : null}
+        <DesignCheckNotes checks={st.checks} />
       </div>
       {(results.meshes ?? []).map((m) => (
         <DerivedGeometry key={m.mesh} gear={m.gear} title={`${MESH_WORDS[m.mesh].replace(/^./, (c) => c.toUpperCase())} mesh`} stale={stale} units={units} />

@@ -1,45 +1,31 @@
 /**
- * `npm run bench`: the performance figures of issue 7, printed as a table and written to
- * bench-results.json (git-ignored). Not part of `npm test`: timings on a shared 2-core machine are
- * not a pass/fail gate. Browser figures (latency_p95_ms, first_paint_ms) come from
- * tests/e2e/bench.ts when the built renderer exists.
+ * `npm run bench`: every performance figure of the project in one command. It times the engine in
+ * this process, the largest accepted reviews each in a fresh process, and the renderer in Chromium
+ * (tests/e2e/bench.ts, after building the renderer); writes bench-results.json (git-ignored) with
+ * the machine and the date; prints each figure against its target; and regenerates the README's
+ * performance table (scripts/bench/readme.ts). Not part of `npm test`: timings on a shared 2-core
+ * machine are no pass/fail gate. `--no-browser` skips Chromium; `--no-readme` leaves README.md.
  */
-import { readFileSync, writeFileSync, existsSync } from 'node:fs';
-import { parseReviewValue } from '../app/review/parse';
+import { spawnSync } from 'node:child_process';
+import { cpus, loadavg, tmpdir, totalmem } from 'node:os';
+import { existsSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { join } from 'node:path';
 import { run } from '../app/review/run';
 import { operatingMaps } from '../app/review/operatingMaps';
-import type { Review } from '../app/review/schema';
-import { FINDER_PATH_POINTS } from '../app/review/gradeFinder';
 import { ehlPointSetup } from '../app/review/ehlPoint';
 import { lineContactEhl } from '../app/engine/ehl/lineContactEhl';
-import { readdirSync } from 'node:fs';
 import { runFleet } from '../app/fleet/fleet';
 import { smallestCover, type CoverCandidate } from '../app/fleet/cover';
-import type { Oil } from '../app/review/schema';
+import { floorLoop, opCount } from './bench/floor';
+import { fleetWorkload, largestReviews, parsed, planetaryWorkload, rawDemo, recomputeWorkload } from './bench/workloads';
+import { consoleTable, type BenchResults } from './bench/targets';
 
-const DEMO = 'assets/demo/harrow-creek-crusher-hs-pair.flankfilm.json';
+const args = new Set(process.argv.slice(2));
 
-type RawReview = { policy: Record<string, unknown>; oils: Array<Record<string, unknown>>; loadCases: unknown[] };
-
-function review(mutate: (r: RawReview) => void): Review {
-  const raw = JSON.parse(readFileSync(DEMO, 'utf8'));
-  mutate(raw);
-  const p = parseReviewValue(raw);
-  if (!p.ok) throw new Error(JSON.stringify(p.issues));
-  return p.review;
-}
-
-/** The issue's workload: 3 load cases × 3 oils × `points` points, with every derived result. */
-function workload(points: number): Review {
-  return review((r) => {
-    r.policy.pathPoints = points;
-    r.oils.push({ ...(r.oils[1] as Record<string, unknown>), name: 'ISO VG 460 EP mineral', role: 'candidate', kv40_mm2s: 460, kv100_mm2s: 30.6, viscosityIndex: undefined });
-  });
-}
-
-function median(xs: number[]): number {
+function median(xs: readonly number[]): number {
   const s = [...xs].sort((a, b) => a - b);
-  return s[Math.floor(s.length / 2)] as number;
+  const m = Math.floor(s.length / 2);
+  return s.length % 2 ? (s[m] as number) : ((s[m - 1] as number) + (s[m] as number)) / 2;
 }
 
 function time(fn: () => void, runs: number, warmup = 100): number[] {
@@ -53,110 +39,46 @@ function time(fn: () => void, runs: number, warmup = 100): number[] {
   return t;
 }
 
-/**
- * Transcendental operations the recompute needs. A case point: mechanics 2 √, Blok 3 √, film 3 ln +
- * 4 exp (h_min, h_c, h_Y, φT). A grade-finder point: 2 exp (film and φT; its logarithms are shared).
- */
-const OPS = { casePoint: { sqrt: 5, log: 3, exp: 4 }, finderPoint: { sqrt: 0, log: 0, exp: 2 } };
-
-function opCount(r: Review): { sqrt: number; log: number; exp: number } {
-  const res = run(r);
-  const main = res.cases.reduce((s, c) => s + c.path.length, 0);
-  const tables = new Set(res.gradeFinder.map((g) => JSON.stringify(g.table)));
-  const finder = [...tables].reduce((s, t) => s + (JSON.parse(t) as unknown[]).length, 0) * r.loadCases.length * Math.min(FINDER_PATH_POINTS, r.policy.pathPoints);
-  const n = (k: 'sqrt' | 'log' | 'exp') => main * OPS.casePoint[k] + finder * OPS.finderPoint[k];
-  return { sqrt: n('sqrt'), log: n('log'), exp: n('exp') };
-}
-
-/** A bare loop doing the same count of transcendental operations, on varying arguments. */
-function floorLoop(ops: { sqrt: number; log: number; exp: number }): number {
-  let acc = 0;
-  for (let i = 0; i < ops.sqrt; i++) acc += Math.sqrt(1.0001 + i * 1e-7);
-  for (let i = 0; i < ops.log; i++) acc += Math.log(1.0001 + i * 1e-7);
-  for (let i = 0; i < ops.exp; i++) acc += Math.exp(-1.0001 - i * 1e-9);
-  return acc;
-}
-
-/**
- * The issue's fleet: 50 gearboxes (the demo reviews, each at ten load levels from 0.5 to 1.4 of its
- * duty) against 20 candidate oils (the demo candidates and twelve more grades of them).
- */
-function fleetWorkload(): { gearboxes: Array<{ source: string; review: Review }>; oils: Oil[] } {
-  const files = ['assets/demo', 'assets/demo/fleet'].flatMap((d) => readdirSync(d).filter((f) => f.endsWith('.flankfilm.json')).map((f) => `${d}/${f}`));
-  const gearboxes: Array<{ source: string; review: Review }> = [];
-  for (let i = 0; gearboxes.length < 50; i++) {
-    const file = files[i % files.length] as string;
-    const k = 0.5 + 0.1 * Math.floor(i / files.length);
-    const raw = JSON.parse(readFileSync(file, 'utf8'));
-    raw.title = `${raw.title} at ${k.toFixed(1)} × duty`;
-    for (const lc of raw.loadCases) {
-      if (lc.power_kW) lc.power_kW *= k;
-      else lc.pinionTorque_Nm *= k;
-    }
-    const p = parseReviewValue(raw);
-    if (!p.ok) throw new Error(JSON.stringify(p.issues));
-    gearboxes.push({ source: file, review: p.review });
-  }
-  const base = JSON.parse(readFileSync('assets/demo/fleet/harrow-creek-candidates.flankfilm-oils.json', 'utf8')).oils as Oil[];
-  const oils: Oil[] = base.map((o) => ({ ...o, role: 'candidate' }));
-  const grades: Array<[number, number]> = [[150, 14.7], [1000, 50]];
-  for (const [vg, kv100] of grades) for (const chem of ['r-and-o', 'anti-wear', 'extreme-pressure'] as const) for (const baseOil of ['mineral', 'pao'] as const) {
-    oils.push({ name: `VG ${vg} ${chem} ${baseOil} (bench)`, role: 'candidate', kv40_mm2s: vg, kv100_mm2s: baseOil === 'pao' ? kv100 * 1.3 : kv100, density15_kgm3: 880, baseOil, chemistry: chem, fzgFailureStage: chem === 'extreme-pressure' ? '>12' : chem === 'anti-wear' ? 10 : 7 });
-  }
-  return { gearboxes, oils: oils.slice(0, 20) };
-}
-
 /** The worst time of the exact cover over seeded random instances of 30 candidates (densities 5–40 %). */
 function coverWorstMs(): number {
   let worst = 0;
-  for (const dens of [0.05, 0.1, 0.25, 0.4]) for (const n of [30, 60, 200]) for (let seed = 1; seed <= 3; seed++) {
-    let s = seed * 7919;
-    const rnd = () => ((s = (1664525 * s + 1013904223) >>> 0) / 2 ** 32);
-    const cands: CoverCandidate[] = [...Array(30).keys()].map(() => ({ covers: [...Array(n).keys()].filter(() => rnd() < dens), ep: rnd() < 0.4, grade: `VG ${[150, 220, 320, 460][Math.floor(rnd() * 4)]}` }));
-    const t = performance.now();
-    smallestCover(n, cands);
-    worst = Math.max(worst, performance.now() - t);
-  }
+  for (const dens of [0.05, 0.1, 0.25, 0.4])
+    for (const n of [30, 60, 200])
+      for (let seed = 1; seed <= 3; seed++) {
+        let s = seed * 7919;
+        const rnd = () => (s = (1664525 * s + 1013904223) >>> 0) / 2 ** 32;
+        const cands: CoverCandidate[] = [...Array(30).keys()].map(() => ({ covers: [...Array(n).keys()].filter(() => rnd() < dens), ep: rnd() < 0.4, grade: `VG ${[150, 220, 320, 460][Math.floor(rnd() * 4)]}` }));
+        const t = performance.now();
+        smallestCover(n, cands);
+        worst = Math.max(worst, performance.now() - t);
+      }
   return worst;
 }
 
-async function main() {
-  const r400 = workload(400);
-  const recompute = time(() => run(r400), 60);
+function engineFigures(): Record<string, unknown> {
+  const r400 = recomputeWorkload(400);
+  const recompute = time(() => run(r400), 200);
   const ops = opCount(r400);
   let sink = 0;
-  const floor = time(() => (sink += floorLoop(ops)), 60);
+  const floor = time(() => (sink += floorLoop(ops)), 200);
   const scaling: Record<string, number> = {};
   for (const n of [100, 200, 400, 800]) {
-    const r = workload(n);
-    scaling[String(n)] = median(time(() => run(r), 30, 10));
+    const r = recomputeWorkload(n);
+    scaling[String(n)] = median(time(() => run(r), 60, 20));
   }
-  const mapReview = review((r) => (r.policy.pathPoints = 200));
-  const mapTimes = time(() => operatingMaps({ ...mapReview, loadCases: mapReview.loadCases.slice(0, 1) }), 5, 1);
-  let pdf_ms: number | null = null;
-  try {
-    const { renderRecord } = await import('../app/report/record');
-    const demo = review(() => undefined);
-    const res = run(demo);
-    const t = [];
-    for (let i = 0; i < 6; i++) {
-      // What `review --pdf` does after run(): the operating maps, then the record.
-      const s = performance.now();
-      await renderRecord(demo, res, { maps: operatingMaps(demo) ?? [] });
-      t.push(performance.now() - s);
-    }
-    pdf_ms = median(t.slice(1));
-  } catch (e) {
-    console.error(`pdf_ms: record not measured (${(e as Error).message})`);
-  }
-  // The numerical film at the demo's least-λ point of each load case, default nodes, one solve each.
-  const demoReview = review(() => undefined);
+  const planetary = planetaryWorkload(400);
+  const planetaryTimes = time(() => run(planetary), 60, 20);
+  const mapReview = recomputeWorkload(200);
+  const oneCase = { ...mapReview, oils: mapReview.oils.slice(0, 2), loadCases: mapReview.loadCases.slice(0, 1) };
+  const mapTimes = time(() => operatingMaps(oneCase), 7, 2);
+  // The numerical film at the demo's least-λ point of each load case, default nodes.
+  const demo = parsed(rawDemo());
   const ehlTimes: number[] = [];
   let ehlIterations = 0;
   let ehlConverged = true;
-  for (const lc of demoReview.loadCases) {
-    const setup = ehlPointSetup(demoReview, { caseName: lc.name, at: 'lambda-min' });
-    lineContactEhl(setup.input); // warm-up
+  for (const lc of demo.loadCases) {
+    const setup = ehlPointSetup(demo, { caseName: lc.name, at: 'lambda-min' });
+    lineContactEhl(setup.input);
     for (let i = 0; i < 3; i++) {
       const s = performance.now();
       const r = lineContactEhl(setup.input);
@@ -167,36 +89,109 @@ async function main() {
   }
   const fleet = fleetWorkload();
   const fleetTimes = time(() => runFleet(fleet), 3, 1);
-  const cover_ms = coverWorstMs();
-  const browser = existsSync('test-output/bench-browser.json') ? JSON.parse(readFileSync('test-output/bench-browser.json', 'utf8')) : {};
-  const out = {
+  return {
     recompute_ms_median: median(recompute),
-    floor_ratio: median(recompute) / median(floor),
+    recompute_ms_p95: [...recompute].sort((a, b) => a - b)[Math.ceil(0.95 * recompute.length) - 1],
     floor_ms_median: median(floor),
+    floor_ratio: median(recompute) / median(floor),
     transcendental_ops_per_recompute: ops,
+    scaling,
+    scaling_800_over_400: (scaling['800'] as number) / (scaling['400'] as number),
+    planetary_recompute_ms: median(planetaryTimes),
     map_ms: median(mapTimes),
-    fleet_ms: median(fleetTimes),
-    fleet_cells: fleet.gearboxes.length * fleet.oils.length,
-    cover30_worst_ms: cover_ms,
-    pdf_ms,
     ehl_ms: median(ehlTimes),
     ehl_ms_max: Math.max(...ehlTimes),
     ehl_iterations_max: ehlIterations,
     ehl_converged: ehlConverged,
-    latency_p95_ms: browser.latency_p95_ms ?? null,
-    first_paint_ms: browser.first_paint_ms ?? null,
-    scaling,
-    machine: { node: process.version, cpus: (await import('node:os')).cpus().length },
+    fleet_ms: median(fleetTimes),
+    fleet_cells: fleet.gearboxes.length * fleet.oils.length,
+    cover30_worst_ms: coverWorstMs(),
+    floor_sink: sink === 42 ? 42 : undefined,
   };
-  writeFileSync('bench-results.json', `${JSON.stringify(out, null, 2)}\n`);
-  const targets: Record<string, number> = { recompute_ms_median: 2, floor_ratio: 3, map_ms: 300, pdf_ms: 1000, ehl_ms: 300, ehl_ms_max: 300, fleet_ms: 5000, cover30_worst_ms: 1000, latency_p95_ms: 50, first_paint_ms: 800 };
-  console.log('key                   value      target');
-  for (const [k, target] of Object.entries(targets)) {
-    const v = (out as Record<string, unknown>)[k] as number | null;
-    console.log(`${k.padEnd(21)} ${v === null ? '—'.padStart(9) : v.toFixed(2).padStart(9)}  ≤ ${target}${v !== null && v > target ? '  MISSED' : ''}`);
-  }
-  console.log(`scaling (ms at 100/200/400/800 points): ${Object.values(scaling).map((x) => x.toFixed(2)).join(' / ')}`);
-  if (sink === 42) console.log('');
 }
 
-void main();
+async function recordFigures(): Promise<Record<string, unknown>> {
+  const { renderRecord } = await import('../app/report/record');
+  const demo = parsed(rawDemo());
+  const t: number[] = [];
+  let bytes = 0;
+  for (let i = 0; i < 6; i++) {
+    // What `review --pdf` does after reading the file: run(), the operating maps, then the record.
+    const s = performance.now();
+    const pdf = await renderRecord(demo, run(demo), { maps: operatingMaps(demo) ?? [] });
+    t.push(performance.now() - s);
+    bytes = pdf.length;
+  }
+  return { pdf_ms: median(t.slice(1)), pdf_kb: bytes / 1024 };
+}
+
+/** Each largest shape through `review --json` in its own process; the worst time and memory. */
+function largestReviewFigures(): Record<string, unknown> {
+  const dir = mkdtempSync(join(tmpdir(), 'flankfilm-bench-'));
+  const shapes: Record<string, unknown> = {};
+  try {
+    for (const [name, raw] of Object.entries(largestReviews())) {
+      const file = join(dir, 'review.flankfilm.json');
+      writeFileSync(file, JSON.stringify(raw));
+      const child = spawnSync(process.execPath, ['--import', 'tsx', 'scripts/bench/largestReviewChild.ts', file], { encoding: 'utf8', maxBuffer: 1 << 26 });
+      const last = child.stderr.trim().split('\n').at(-1) ?? '';
+      let m: { code: number; ms: number; rss_mb: number; json_mb: number };
+      try {
+        m = JSON.parse(last);
+      } catch {
+        throw new Error(`largest review "${name}": ${child.stderr.slice(-800)}`);
+      }
+      if (m.code !== 0) throw new Error(`largest review "${name}" exited ${m.code}: ${child.stderr.slice(-800)}`);
+      shapes[name] = m;
+    }
+  } finally {
+    rmSync(dir, { recursive: true, force: true });
+  }
+  const all = Object.values(shapes) as Array<{ ms: number; rss_mb: number }>;
+  return { largest_review_ms: Math.max(...all.map((s) => s.ms)), largest_review_rss_mb: Math.max(...all.map((s) => s.rss_mb)), largest_review_shapes: shapes };
+}
+
+/** The renderer in Chromium: build it, then tests/e2e/bench.ts (it writes test-output/bench-browser.json). */
+function browserFigures(): Record<string, unknown> {
+  const out = 'test-output/bench-browser.json';
+  rmSync(out, { force: true });
+  const npx = process.platform === 'win32' ? 'npx.cmd' : 'npx';
+  const build = spawnSync(npx, ['vite', 'build', '--config', 'renderer/vite.config.ts', '--logLevel', 'error'], { stdio: 'inherit' });
+  if (build.status !== 0) return { browser_error: 'the renderer did not build' };
+  const bench = spawnSync(npx, ['tsx', 'tests/e2e/bench.ts'], { stdio: ['ignore', 'ignore', 'inherit'] });
+  if (bench.status !== 0 || !existsSync(out)) return { browser_error: 'the browser bench failed (is Chromium installed?)' };
+  return JSON.parse(readFileSync(out, 'utf8')) as Record<string, unknown>;
+}
+
+async function main(): Promise<void> {
+  const cpu = cpus();
+  const results: BenchResults = {
+    date: new Date().toISOString(),
+    machine: { node: process.version, platform: `${process.platform} ${process.arch}`, cpus: cpu.length, cpuModel: cpu[0]?.model.trim() ?? null, memory_gb: Math.round(totalmem() / 2 ** 30), loadAverage: loadavg() },
+  };
+  const step = (name: string) => process.stderr.write(`bench: ${name}…\n`);
+  step('engine');
+  Object.assign(results, engineFigures());
+  step('record');
+  Object.assign(results, await recordFigures());
+  step('largest reviews');
+  Object.assign(results, largestReviewFigures());
+  if (!args.has('--no-browser')) {
+    step('browser');
+    Object.assign(results, browserFigures());
+  }
+  (results.machine as Record<string, unknown>).loadAverageAtEnd = loadavg();
+  writeFileSync('bench-results.json', `${JSON.stringify(results, null, 2)}\n`);
+  console.log(consoleTable(results));
+  console.log(`scaling (ms at 100 / 200 / 400 / 800 points): ${Object.values(results.scaling as Record<string, number>).map((x) => x.toFixed(2)).join(' / ')}`);
+  console.log('wrote bench-results.json');
+  if (!args.has('--no-readme')) {
+    const { updateReadme } = await import('./bench/readme');
+    updateReadme();
+  }
+}
+
+void main().catch((e: unknown) => {
+  console.error(`bench: ${(e as Error).message}`);
+  process.exitCode = 1;
+});

@@ -7,6 +7,7 @@
 import type { CaseResult, PointResult, Results } from '../review/results';
 import { unitsFor, type Quantity, type UnitSystem } from './units';
 import { textCell } from '../review/csvCell';
+import { pathPoints } from '../review/pathSeries';
 
 interface CsvColumn {
   name: string;
@@ -65,7 +66,7 @@ export function resultsToCsv(results: Results, system: UnitSystem = 'si'): strin
   const lines = [header.map(quote).join(',')];
   const blocks = meshes ? meshes.map((m) => ({ lead: [m.mesh], cases: m.cases })) : [{ lead: [] as string[], cases: results.cases }];
   for (const { lead, cases } of blocks) for (const c of cases) {
-    c.path.forEach((p, i) => {
+    pathPoints(c.path).forEach((p, i) => {
       const cells = [...lead, textCell(c.loadCase), textCell(c.oil ?? ''), String(i)];
       for (const col of COLUMNS) {
         const v = col.get(p);

@@ -1,43 +1,15 @@
 import type { CaseAnalysis } from '../engine/mesh/analyseCase';
-import { REGIMES } from '../engine/mesh/film';
 import { decideVerdict } from '../engine/verdict/decide';
 import { NOMINAL_STRESS_EDITION } from '../engine/stress/iso6336Nominal';
 import type { VerdictFacts } from '../engine/verdict/types';
 import { kelvinToCelsius, toMegapascals, toMicrometres, toMillimetres, type Kelvin, type Metres, type Pascals } from '../engine/units';
 import { micropittingFacts, micropittingResult } from './micropittingResult';
 import type { ReviewOil } from './oils';
-import type { CaseResult, LimitCheck, PointResult } from './results';
+import type { CaseResult, LimitCheck } from './results';
+import { pathSeriesOf, pointOf } from './pathSeries';
 import type { PairLoadCase, PairReview, Policy } from './schema';
 
 const orNull = (x: number): number | null => (Number.isFinite(x) ? x : null);
-
-function pointAt(a: CaseAnalysis, i: number): PointResult {
-  const m = a.mechanics;
-  const { A, E } = a.input.geometry.points;
-  const s = m.position[i] as number;
-  const film = a.film;
-  const heat = a.heat;
-  return {
-    position_mm: toMillimetres(s as Metres),
-    pathFraction: (s - A) / (E - A),
-    loadShare: m.loadShare[i] as number,
-    hertzStress_MPa: toMegapascals(m.hertzPressure[i] as Pascals),
-    pinionFlankVelocity_mps: m.v1[i] as number,
-    wheelFlankVelocity_mps: m.v2[i] as number,
-    slidingVelocity_mps: m.slidingVelocity[i] as number,
-    sumVelocity_mps: m.sumVelocity[i] as number,
-    slideToRoll: m.slideToRoll[i] as number,
-    specificSlidingPinion: m.specificSliding1[i] as number,
-    specificSlidingWheel: m.specificSliding2[i] as number,
-    filmThicknessMin_um: film ? toMicrometres(film.hMin[i] as Metres) : null,
-    filmThicknessCentral_um: film ? toMicrometres(film.hCentral[i] as Metres) : null,
-    lambda: film ? (film.lambda[i] as number) : null,
-    lambdaGF: film ? (film.lambdaGF[i] as number) : null,
-    regime: film ? (REGIMES[film.regime[i] as number] ?? null) : null,
-    flashTemperature_K: heat ? (heat.flash[i] as number) : null,
-    contactTemperature_C: heat ? kelvinToCelsius(heat.contact[i] as Kelvin) : null,
-  };
-}
 
 /** The facts the verdict rules read, from one analysis. */
 function verdictFacts(review: PairReview, lc: PairLoadCase, oil: ReviewOil, all: readonly ReviewOil[], a: CaseAnalysis, maxHertz: Pascals): VerdictFacts {
@@ -79,12 +51,9 @@ function verdictFacts(review: PairReview, lc: PairLoadCase, oil: ReviewOil, all:
 /** One analysis as the results JSON shows it (display units). */
 export function caseToResult(review: PairReview, lc: PairLoadCase, oil: ReviewOil | null, all: readonly ReviewOil[], a: CaseAnalysis): CaseResult {
   const m = a.mechanics;
-  const path: PointResult[] = [];
+  const path = pathSeriesOf(a);
   let maxI = 0;
-  for (let i = 0; i < m.n; i++) {
-    path.push(pointAt(a, i));
-    if ((m.hertzPressure[i] as number) > (m.hertzPressure[maxI] as number)) maxI = i;
-  }
+  for (let i = 0; i < m.n; i++) if ((m.hertzPressure[i] as number) > (m.hertzPressure[maxI] as number)) maxI = i;
   const film = a.film;
   const heat = a.heat;
   const sc = a.scuffing;
@@ -105,7 +74,7 @@ export function caseToResult(review: PairReview, lc: PairLoadCase, oil: ReviewOi
     maxHertzStress_MPa: toMegapascals(m.hertzPressure[maxI] as Pascals),
     maxHertzStressPosition_mm: toMillimetres(m.position[maxI] as Metres),
     pitchHertzStress_MPa: toMegapascals(m.pitchHertzWholeLoad),
-    pitch: path[m.pitchIndex] as PointResult,
+    pitch: pointOf(path, m.pitchIndex),
     path,
     oilAtTemperature: st
       ? {

@@ -3,7 +3,7 @@ import type { Material } from '../engine/materials';
 import { evaluateCell, prepareSweep, prepareSweepOil, type CellResult, type SweepCase } from '../engine/sweep/operatingMap';
 import type { EnginePolicy } from '../engine/mesh/types';
 import { ISO_VG_GRADES } from '../engine/oil/isoGrade';
-import { makeOilModel } from '../engine/oil/oilModel';
+import { cachedOilModel } from '../engine/oil/oilModelCache';
 import { kv100ForViscosityIndex } from '../engine/oil/viscosityIndex';
 import { centistokes, micrometres, type KilogramsPerCubicMetre, type SquareMetresPerSecond } from '../engine/units';
 import { engineDutyOf } from './engineInputs';
@@ -71,13 +71,9 @@ function gradeTable(review: PairReview, cases: readonly SweepCase[], oil: Review
   const table: GradeFinderRow[] = [];
   const cell: CellResult = { lambdaMin: 0, scuffingSafety: 0, integralSafety: 0, verdict: 0, lambdaGFMin: 0, micropittingSafety: 0 };
   for (const vg of CANDIDATE_GRADES) {
-    let kv100: SquareMetresPerSecond;
-    try {
-      kv100 = kv100ForViscosityIndex(centistokes(vg), vi, `${oil.field}.viscosityIndex`);
-    } catch {
-      continue; // this VI is not reachable at this grade within D2270's range
-    }
-    const model = makeOilModel({ kv40: centistokes(vg), kv100, density15: oil.source.density15_kgm3 as KilogramsPerCubicMetre, baseOil: oil.baseOil }, oil.field);
+    const kv100 = gradeKv100(vg, vi);
+    if (kv100 === null) continue; // this VI is not reachable at this grade within D2270's range
+    const model = cachedOilModel({ kv40: centistokes(vg), kv100, density15: oil.source.density15_kgm3 as KilogramsPerCubicMetre, baseOil: oil.baseOil }, oil.field);
     let lambdaMin = Infinity;
     cases.forEach((sc, li) => {
       const so = prepareSweepOil(sc, { ...oil, model, micropittingFailureStage: null }); // the grade finder reads λ only
@@ -89,4 +85,20 @@ function gradeTable(review: PairReview, cases: readonly SweepCase[], oil: Review
     if (Number.isFinite(lambdaMin)) table.push({ isoVG: vg, lambdaMin, usable: true });
   }
   return table;
+}
+
+/** KV100 of grade `vg` at viscosity index `vi` (ASTM D2270 inverted), null when unreachable; kept, as a recompute asks the same again. */
+const kv100s = new Map<string, SquareMetresPerSecond | null>();
+function gradeKv100(vg: number, vi: number): SquareMetresPerSecond | null {
+  const key = `${vg}|${vi}`;
+  let kv100 = kv100s.get(key);
+  if (kv100 !== undefined) return kv100;
+  try {
+    kv100 = kv100ForViscosityIndex(centistokes(vg), vi);
+  } catch {
+    kv100 = null;
+  }
+  if (kv100s.size >= 4096) kv100s.clear();
+  kv100s.set(key, kv100);
+  return kv100;
 }

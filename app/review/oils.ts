@@ -1,5 +1,5 @@
 import type { EngineOil } from '../engine/mesh/types';
-import { makeOilModel } from '../engine/oil/oilModel';
+import { cachedOilModel } from '../engine/oil/oilModelCache';
 import { centistokes, perGigapascal, type KilogramsPerCubicMetre } from '../engine/units';
 import type { OilSummary } from './results';
 import type { Oil } from './schema';
@@ -13,7 +13,7 @@ export interface ReviewOil extends EngineOil {
 export function oilModelsOf(oils: readonly Oil[]): ReviewOil[] {
   return oils.map((o, i) => {
     const field = `oils[${i}]`;
-    const model = makeOilModel(
+    const model = cachedOilModel(
       {
         kv40: centistokes(o.kv40_mm2s),
         kv100: centistokes(o.kv100_mm2s),

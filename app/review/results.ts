@@ -35,6 +35,41 @@ export interface PointResult {
   contactTemperature_C: number | null;
 }
 
+/**
+ * The per-point values along the path of contact, one typed array per quantity (index = point,
+ * A to E), in the units of PointResult's keys. Results keep the path in columns so a recompute
+ * allocates a few arrays rather than an object per point, and the worker's message carries them as
+ * blocks; `pathPoints` (pathSeries.ts) builds the PointResult objects where they are wanted (the JSON
+ * `review --json` prints, the CSV). The arrays are read, never written.
+ */
+export interface PathSeries {
+  readonly n: number;
+  readonly position_mm: Float64Array;
+  readonly pathFraction: Float64Array;
+  readonly loadShare: Float64Array;
+  readonly hertzStress_MPa: Float64Array;
+  readonly pinionFlankVelocity_mps: Float64Array;
+  readonly wheelFlankVelocity_mps: Float64Array;
+  readonly slidingVelocity_mps: Float64Array;
+  readonly sumVelocity_mps: Float64Array;
+  readonly slideToRoll: Float64Array;
+  readonly specificSlidingPinion: Float64Array;
+  readonly specificSlidingWheel: Float64Array;
+  /** The film, with an oil (null for a case without one). */
+  readonly film: {
+    readonly filmThicknessMin_um: Float64Array;
+    readonly filmThicknessCentral_um: Float64Array;
+    readonly lambda: Float64Array;
+    readonly lambdaGF: Float64Array;
+    readonly regime: readonly Regime[];
+  } | null;
+  /** Flash and contact temperature, with an oil (null for a case without one). */
+  readonly heat: {
+    readonly flashTemperature_K: Float64Array;
+    readonly contactTemperature_C: Float64Array;
+  } | null;
+}
+
 export interface OilAtTemperature {
   /** The film is computed at the bulk temperature θM; this is that temperature. */
   temperature_C: number;
@@ -148,7 +183,8 @@ export interface CaseResult {
   maxHertzStressPosition_mm: number;
   pitchHertzStress_MPa: number;
   pitch: PointResult;
-  path: PointResult[];
+  /** Every point A…E in columns; `pathPoints(c.path)` gives them as PointResult objects. */
+  path: PathSeries;
   // issue 3: oil and film
   oilAtTemperature: OilAtTemperature | null;
   lambdaMin: number | null;

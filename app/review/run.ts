@@ -1,7 +1,7 @@
 import { EngineInputError } from '../engine/diagnostics';
 import { gearPairGeometry } from '../engine/geometry/gearPair';
 import type { GearPairGeometry } from '../engine/geometry/types';
-import { analyseCase } from '../engine/mesh/analyseCase';
+import { analyseCase, caseMechanics } from '../engine/mesh/analyseCase';
 import { ENGINE_VERSION } from '../engine/version';
 import { micrometres, radiansToDegrees, toMillimetres } from '../engine/units';
 import { asPairReview, type PairReview, type Review } from './schema';
@@ -43,8 +43,10 @@ export function runPair(review: PairReview, geometry: GearPairGeometry): Results
   review.loadCases.forEach((lc, li) => {
     const duty = engineDutyOf(review, li);
     const oilList = oils.length > 0 ? oils : [null];
+    const base = { geometry, pinion, wheel, roughnessRa1, roughnessRa2, duty, policy, caseField: `loadCases[${li}]` };
+    const mechanics = inReviewTerms(li, () => caseMechanics(base)); // once per load case: the oils share it
     for (const oil of oilList) {
-      const a = inReviewTerms(li, () => analyseCase({ geometry, pinion, wheel, roughnessRa1, roughnessRa2, duty, oil, policy, caseField: `loadCases[${li}]` }));
+      const a = inReviewTerms(li, () => analyseCase({ ...base, oil }, mechanics));
       cases.push(caseToResult(review, lc, oil, oils, a));
     }
   });

@@ -3,6 +3,7 @@ import { DEMO_REVIEWS } from '../../app/review/demo';
 import { parseReviewValue } from '../../app/review/parse';
 import { run } from '../../app/review/run';
 import { meshCharts, summarise } from '../../renderer/components/mesh/series';
+import { pathPoints } from '../../app/review/pathSeries';
 
 const parsed = parseReviewValue(DEMO_REVIEWS['harrow-creek-crusher-hs-pair.flankfilm.json']);
 if (!parsed.ok) throw new Error('the demo must parse');
@@ -52,7 +53,7 @@ describe('Mesh chart series', () => {
     expect(temp.series.map((x) => x.label)).toEqual(['θB', 'θS']);
     expect(temp.yLabel).toBe('θ (°C)');
     // θB at every point is θM + θfl there (ISO/TS 6336-20: contact temperature = bulk + flash)
-    for (const p of c.path) if (p.contactTemperature_C !== null && p.flashTemperature_K !== null) expect(p.contactTemperature_C).toBeCloseTo((c.bulkTemperature_C ?? NaN) + p.flashTemperature_K, 9);
+    for (const p of pathPoints(c.path)) if (p.contactTemperature_C !== null && p.flashTemperature_K !== null) expect(p.contactTemperature_C).toBeCloseTo((c.bulkTemperature_C ?? NaN) + p.flashTemperature_K, 9);
     const flash = charts.find((x) => x.id === 'flash')!;
     expect(flash.yLabel).toBe('θfl (K)');
     expect(flash.series.map((x) => x.label)).toEqual(['θfl']);

@@ -22,7 +22,7 @@ describe('record of a planetary stage (invented ball-mill demo)', () => {
     expect(rows[0]?.startsWith('mesh,load case,oil,point')).toBe(true);
     const meshes = new Set(rows.slice(1).map((r) => r.split(',')[0]));
     expect([...meshes]).toEqual(['sun-planet', 'planet-ring']);
-    const points = (results.meshes ?? []).reduce((n, m) => n + m.cases.reduce((k, c) => k + c.path.length, 0), 0);
+    const points = (results.meshes ?? []).reduce((n, m) => n + m.cases.reduce((k, c) => k + c.path.n, 0), 0);
     expect(rows.length - 1).toBe(points);
   });
 });

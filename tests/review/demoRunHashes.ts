@@ -9,6 +9,7 @@ import { join } from 'node:path';
 import { parseReviewValue } from '../../app/review/parse';
 import { run } from '../../app/review/run';
 import { sha256Hex } from '../../app/review/fingerprint';
+import { resultsJson } from '../../app/review/pathSeries';
 
 export const SHIPPED_REVIEWS = ['assets/demo', 'assets/demo/fleet'].flatMap((d) =>
   readdirSync(d)
@@ -22,7 +23,8 @@ export type RunHashes = Record<string, string>;
 export function demoRunHashes(file: string): RunHashes {
   const parsed = parseReviewValue(JSON.parse(readFileSync(file, 'utf8')));
   if (!parsed.ok) throw new Error(`${file}: ${JSON.stringify(parsed.issues)}`);
-  const results = run(parsed.review) as unknown as Record<string, unknown>;
+  // As JSON writes them (`review --json`): the path as one object per point.
+  const results = resultsJson(run(parsed.review)) as unknown as Record<string, unknown>;
   const out: RunHashes = { whole: sha256Hex(JSON.stringify(results)) };
   for (const [key, value] of Object.entries(results)) {
     if (key === 'cases' && Array.isArray(value)) {

@@ -11,6 +11,7 @@ import { atomicWrite } from '../../files/atomicWrite';
 import { pathClash } from '../../files/sameFile';
 
 import { summaryCsv } from '../../report/summaryCsv';
+import { resultsJson } from '../../review/pathSeries';
 
 /** `flankfilm review FILE [--json] [--pdf OUT [--film-detail]] [--csv OUT] [--summary-csv OUT] [--map OUT.csv] [--p12 ID.p12] [--paper a4|letter]` */
 export async function reviewCommand(args: string[], io: CliIo): Promise<number> {
@@ -53,7 +54,7 @@ export async function reviewCommand(args: string[], io: CliIo): Promise<number> 
     }
     throw e;
   }
-  if (values.json) io.out(`${JSON.stringify(results, null, 2)}\n`);
+  if (values.json) io.out(`${JSON.stringify(resultsJson(results), null, 2)}\n`);
   else io.out(summaryText(results, { status: status(loaded.review, results), review: loaded.review }));
   const summaryOut = values['summary-csv'];
   if (summaryOut) {

@@ -31,10 +31,11 @@ export interface CaseAnalysis {
  * temperature methods) and the FZG stage the duty needs → micropitting (ISO/TS 6336-22).
  * The film is computed at θM, the flank temperature at the contact inlet (as ISO/TR 15144-1 and
  * AGMA 925 do), so it sees the heat of the mesh; friction uses the oil temperature (ISO/TS 6336-20).
+ * `shared`: the case's mechanics (caseMechanics) when several oils run on the same load case.
  */
-export function analyseCase(input: CaseInput): CaseAnalysis {
+export function analyseCase(input: CaseInput, shared?: MeshMechanics): CaseAnalysis {
   const sink = new WarningSink();
-  const mechanics = meshMechanics(input.geometry, input.pinion, input.wheel, input.duty, input.policy.pathPoints);
+  const mechanics = shared ?? caseMechanics(input);
   const oil = input.oil;
   if (!oil) return { input, mechanics, heat: null, film: null, oilAtFilmTemperature: null, scuffing: null, micropitting: null, warnings: sink.items };
   const tField = `${input.caseField}.oilTemperature_C`;
@@ -59,5 +60,14 @@ export function analyseCase(input: CaseInput): CaseAnalysis {
   return { input, mechanics, heat, film, oilAtFilmTemperature: state, scuffing, micropitting, warnings: sink.items };
 }
 
+
+/**
+ * The mechanics of a case: they depend on the geometry, the materials, the duty and the path points,
+ * not on the oil, so a review computes them once per load case and passes them to analyseCase for
+ * each oil (they are read, never written).
+ */
+export function caseMechanics(input: Omit<CaseInput, 'oil'>): MeshMechanics {
+  return meshMechanics(input.geometry, input.pinion, input.wheel, input.duty, input.policy.pathPoints);
+}
 
 export type { KelvinDifference };

@@ -13,7 +13,7 @@ import { filmAlongPath, type FilmAlongPath } from './film';
 import { meshMechanics, type MeshMechanics } from './mechanics';
 import { oilState } from './oilState';
 import { temperaturesAlongPath } from './temperatures';
-import type { CaseInput } from './types';
+import type { CaseInput, EnginePolicy } from './types';
 
 /** A micropitting stage the duty needs: 5 … 10, or beyond the test's scale. */
 export type MicropittingStageNeed = number | '>10';
@@ -53,9 +53,10 @@ const testMechanics = new Map<string, MeshMechanics>();
  * The policy travels with it: a μ the policy gives applies to the test gear too (the same chain).
  */
 export function testGearLambdaGF(input: CaseInput, stage: MicropittingFailureStage, sink: WarningSink): number {
-  // The test depends on the oil and the policy's μ and path points only, not on the case: kept per oil model.
+  // The test depends on the oil and the policy only, not on the case: kept per oil model (which a
+  // recompute reuses while the oil's data stay the same) and per policy.
   const oil = input.oil as NonNullable<CaseInput['oil']>;
-  const key = `${String(stage)}|${input.policy.pathPoints}|${String(input.policy.frictionCoefficient)}`;
+  const key = `${String(stage)}|${policyKey(input.policy)}`;
   let perOil = testResults.get(oil.model);
   if (!perOil) testResults.set(oil.model, (perOil = new Map()));
   const known = perOil.get(key);
@@ -71,6 +72,14 @@ export function testGearLambdaGF(input: CaseInput, stage: MicropittingFailureSta
 }
 
 const testResults = new WeakMap<object, Map<string, { value: number; warnings: readonly EngineWarning[] }>>();
+
+const policyKeys = new WeakMap<EnginePolicy, string>();
+/** Every policy input, as one string: the test gear runs through the same chain, so any of them may matter. */
+function policyKey(p: EnginePolicy): string {
+  let k = policyKeys.get(p);
+  if (k === undefined) policyKeys.set(p, (k = JSON.stringify(p)));
+  return k;
+}
 
 function computeTestGearLambdaGF(input: CaseInput, stage: MicropittingFailureStage, sink: WarningSink): number {
   const steel = MATERIALS['steel-carburized'];
@@ -99,7 +108,7 @@ function computeTestGearLambdaGF(input: CaseInput, stage: MicropittingFailureSta
   const heat = temperaturesAlongPath(test, m, sink);
   const oil = input.oil as NonNullable<CaseInput['oil']>;
   const tFilm = Math.min(heat.bulkTemperature, oil.model.temperatureRange.max) as Kelvin;
-  const film = filmAlongPath(test, m, oilState(test, tFilm, `${input.caseField}.micropitting test temperature`), sink);
+  const film = filmAlongPath(test, m, oilState(test, tFilm, `${oil.field}.micropitting test temperature`), sink);
   return lambdaGFAtRisk(m.position, film.lambdaGF, geometry.points).value;
 }
 

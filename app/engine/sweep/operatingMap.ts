@@ -187,12 +187,7 @@ export function prepareSweep(input: Omit<CaseInput, 'oil'>): SweepCase {
 
 export function prepareSweepOil(sc: SweepCase, oil: EngineOil): SweepOil {
   const xL = oil.model.lubricantFactor;
-  const thetaSOf = new Float64Array(13);
-  const thetaIntSOf = new Float64Array(13);
-  for (let s = 1; s <= 12; s++) {
-    thetaSOf[s] = scuffingTemperature(s, sc.xW, xL).value;
-    thetaIntSOf[s] = kelvinToCelsius(integralScuffingTemperature(FZG_A_PINION_TORQUE[s - 1] as NewtonMetres, xL, sc.xW));
-  }
+  const { thetaSOf, thetaIntSOf } = scuffingTemperaturesByStage(sc.xW, xL);
   const mpStage = oil.micropittingFailureStage ?? null;
   const lambdaGFP =
     mpStage === null
@@ -202,6 +197,24 @@ export function prepareSweepOil(sc: SweepCase, oil: EngineOil): SweepOil {
           pairMaterialFactorWW(sc.input.pinion.micropittingFactorWW, sc.input.wheel.micropittingFactorWW),
         );
   return { oil, thetaS: scuffingTemperature(oil.fzgFailureStage, sc.xW, xL).value, thetaSOf, thetaIntSOf, oilStage: oil.fzgFailureStage === '>12' ? 12 : oil.fzgFailureStage, lambdaGFP };
+}
+
+/** θS and θintS at each FZG stage 1…12 (index = stage) for XW and XL; kept, as every grade and cell asks again. Read only. */
+const byStage = new Map<string, { thetaSOf: Float64Array; thetaIntSOf: Float64Array }>();
+function scuffingTemperaturesByStage(xW: number, xL: number): { thetaSOf: Float64Array; thetaIntSOf: Float64Array } {
+  const key = `${xW}|${xL}`;
+  const known = byStage.get(key);
+  if (known) return known;
+  const thetaSOf = new Float64Array(13);
+  const thetaIntSOf = new Float64Array(13);
+  for (let s = 1; s <= 12; s++) {
+    thetaSOf[s] = scuffingTemperature(s, xW, xL).value;
+    thetaIntSOf[s] = kelvinToCelsius(integralScuffingTemperature(FZG_A_PINION_TORQUE[s - 1] as NewtonMetres, xL, xW));
+  }
+  if (byStage.size >= 1024) byStage.clear();
+  const value = { thetaSOf, thetaIntSOf };
+  byStage.set(key, value);
+  return value;
 }
 
 const codeFacts = { requiredStage: 1 as FzgStageNeed, requiredStageIntegral: 1 as FzgStageNeed, integralSafetyAtEpFloor: null as number | null, applicationFactor: 1, regime: 'mixed' as 'boundary' | 'mixed' | 'full-film' };

@@ -4,6 +4,8 @@ import type { RecordContext } from '../context';
 import { drawVerdictIcon } from '../icons';
 import { formatNumber, formatPercent, DASH, type Units } from '../units';
 import { GREY, OIL_FIT_WORDS, OKABE_ITO, REGIME_COLOURS, REGIME_WORDS, VERDICT_WORDS } from '../words';
+import { pathPoints } from '../../review/pathSeries';
+import type { PointResult } from '../../review/results';
 
 /** One page per load case × oil: the key figures, then one strip of four charts on a shared A–E axis with their figures beside them. */
 export function drawCaseResults(ctx: RecordContext): void {
@@ -74,7 +76,8 @@ function drawCase(ctx: RecordContext, c: CaseResult, index: number): void {
 
 /** Beside each chart of the strip, in its order: the figures a reader looks for there. */
 function stripFigures(u: Units, c: CaseResult): Row[][] {
-  const hminAtMin = c.path.reduce<number | null>((m, p) => (p.filmThicknessMin_um === null ? m : m === null ? p.filmThicknessMin_um : Math.min(m, p.filmThicknessMin_um)), null);
+  const hmin = c.path.film?.filmThicknessMin_um;
+  const hminAtMin = hmin && hmin.length ? Math.min(...hmin) : null;
   return [
     [['σH,max', u.fmt(c.maxHertzStress_MPa, 'stress')], ['σH at C', u.fmt(c.pitch.hertzStress_MPa, 'stress')]],
     [['v on the pitch line', u.fmt(c.pitchLineVelocity_mps, 'velocity')]],
@@ -132,8 +135,8 @@ function chartsOf(ctx: RecordContext, c: CaseResult): ChartSpec[] {
   const p = results.gear.points_mm;
   const markers = (['A', 'B', 'C', 'D', 'E'] as const).map((k) => ({ x: X(p[k]), label: k }));
   const xLabel = `position on the line of action from T1 (${u.unit('length')})`;
-  const path = c.path;
-  const series = (get: (pt: CaseResult['path'][number]) => number | null, q: Parameters<Units['value']>[1]): Array<[number, number | null]> =>
+  const path = pathPoints(c.path);
+  const series = (get: (pt: PointResult) => number | null, q: Parameters<Units['value']>[1]): Array<[number, number | null]> =>
     path.map((pt) => {
       const v = get(pt);
       return [X(pt.position_mm), v === null ? null : u.value(v, q)];

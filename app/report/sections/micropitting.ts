@@ -7,6 +7,7 @@ import type { Cell } from '../layout';
 import { formatNumber, DASH } from '../units';
 import { GREY, OKABE_ITO } from '../words';
 import { caseTitle } from './caseResults';
+import { pathPoints } from '../../review/pathSeries';
 
 /**
  * Micropitting by ISO/TS 6336-22: a table of λGF,min, λGFT, λGFP and Sλ per case × oil, then per case
@@ -75,7 +76,7 @@ function chartOf(ctx: RecordContext, c: CaseResult & { micropitting: Micropittin
     title: `λGF along the path: ${caseTitle(c)}`,
     xLabel: `position on the line of action from T1 (${u.unit('length')})`,
     yLabel: 'λGF (–)',
-    series: [{ label: 'λGF = hY / Ra,avg', points: c.path.map((pt) => [X(pt.position_mm), pt.lambdaGF]), color: OKABE_ITO.blue }],
+    series: [{ label: 'λGF = hY / Ra,avg', points: pathPoints(c.path).map((pt) => [X(pt.position_mm), pt.lambdaGF]), color: OKABE_ITO.blue }],
     xMarkers: (['A', 'B', 'C', 'D', 'E'] as const).map((k) => ({ x: X(p[k]), label: k })),
     refLines: m.lambdaGFP === null ? [] : [{ y: m.lambdaGFP, label: `λGFP = ${formatNumber(m.lambdaGFP, 3)} (stage ${micropittingStageWords(m.failureStage ?? '>10')})`, color: OKABE_ITO.vermillion, dash: [6, 3] }],
     yInclude: [0, ...(m.lambdaGFP === null ? [] : [m.lambdaGFP * 1.15])],

@@ -1,4 +1,4 @@
-import type { CaseResult, GearResult, PointResult } from '../../../app/review/results';
+import type { CaseResult, GearResult, PathSeries } from '../../../app/review/results';
 import { OKABE_ITO, REGIME_COLOURS, REGIME_WORDS } from '../../../app/review/vocabulary';
 import { toDisplay, unitLabel, type QuantityKind, type UnitSystem } from '../../units/units';
 
@@ -38,11 +38,18 @@ export interface RegimeLimits {
   readonly fullFilmFrom: number;
 }
 
-const along = (path: readonly PointResult[], units: UnitSystem, kind: QuantityKind, pick: (p: PointResult) => number | null) =>
-  path.map((p) => {
-    const v = pick(p);
-    return { x: toDisplay('length', p.position_mm, units), y: v === null || !Number.isFinite(v) ? null : toDisplay(kind, v, units) };
-  });
+/** A column of the path (null when the case has none, e.g. no oil), or one value along the whole path. */
+type Column = (p: PathSeries) => ArrayLike<number> | null;
+
+const along = (path: PathSeries, units: UnitSystem, kind: QuantityKind, pick: Column | number | null) => {
+  const ys = typeof pick === 'function' ? pick(path) : null;
+  const out: { x: number; y: number | null }[] = new Array(path.n);
+  for (let i = 0; i < path.n; i++) {
+    const v = typeof pick === 'function' ? (ys ? (ys[i] as number) : null) : pick;
+    out[i] = { x: toDisplay('length', path.position_mm[i] as number, units), y: v === null || !Number.isFinite(v) ? null : toDisplay(kind, v, units) };
+  }
+  return out;
+};
 
 const axis = (name: string, kind: QuantityKind, units: UnitSystem) => {
   const u = unitLabel(kind, units);
@@ -53,14 +60,21 @@ const axis = (name: string, kind: QuantityKind, units: UnitSystem) => {
 const OIL_COLOURS = [OKABE_ITO.vermillion, OKABE_ITO.blue, OKABE_ITO.bluishGreen, OKABE_ITO.reddishPurple, OKABE_ITO.orange, OKABE_ITO.skyBlue];
 const oilStyle = (i: number) => ({ color: OIL_COLOURS[i % OIL_COLOURS.length] as string, ...(i === 0 ? {} : { dash: i === 1 ? [7, 4] : [2, 3] }) });
 
-const maxOf = (cases: readonly CaseResult[], pick: (p: PointResult) => number | null, kind: QuantityKind, units: UnitSystem): number | undefined => {
+const maxOf = (cases: readonly CaseResult[], pick: Column, kind: QuantityKind, units: UnitSystem): number | undefined => {
   let m = -Infinity;
-  for (const c of cases) for (const p of c.path) {
-    const v = pick(p);
-    if (v !== null && Number.isFinite(v)) m = Math.max(m, toDisplay(kind, v, units));
+  for (const c of cases) {
+    const ys = pick(c.path);
+    if (ys) for (let i = 0; i < ys.length; i++) if (Number.isFinite(ys[i] as number) && (ys[i] as number) > m) m = ys[i] as number;
   }
-  return Number.isFinite(m) ? m : undefined;
+  // The display conversions are increasing, so the largest value converts to the largest shown.
+  return Number.isFinite(m) ? toDisplay(kind, m, units) : undefined;
 };
+const lambdaOf: Column = (p) => p.film?.lambda ?? null;
+const hminOf: Column = (p) => p.film?.filmThicknessMin_um ?? null;
+const contactOf: Column = (p) => p.heat?.contactTemperature_C ?? null;
+const flashOf: Column = (p) => p.heat?.flashTemperature_K ?? null;
+const speedOf: Column = (p) => Array.from(p.sumVelocity_mps, (v, i) => Math.max(v, Math.abs(p.slidingVelocity_mps[i] as number)));
+const finite = (ys: ArrayLike<number> | null): number[] => (ys ? Array.from(ys).filter((y) => Number.isFinite(y)) : []);
 
 /**
  * The Mesh charts of one load case, every oil of it drawn on the same chart, in display units:
@@ -75,7 +89,7 @@ export function meshCharts(cases: CaseResult | readonly CaseResult[], gear: Gear
   const every = all ?? list;
   const xLabel = axis('Position along the path of contact', 'length', units);
   const markers = (['A', 'B', 'C', 'D', 'E'] as const).map((k) => ({ label: k, x: toDisplay('length', gear.points_mm[k], units) }));
-  const lambdaAll = every.flatMap((x) => x.path.map((p) => p.lambda)).filter((l): l is number => l !== null && Number.isFinite(l));
+  const lambdaAll = every.flatMap((x) => finite(lambdaOf(x.path)));
   const lambdaTop = Math.max(limits.fullFilmFrom * 1.25, ...lambdaAll.map((l) => l * 1.1));
   const oilName = (x: CaseResult) => x.oil ?? 'no oil';
   const many = list.length > 1;
@@ -86,7 +100,7 @@ export function meshCharts(cases: CaseResult | readonly CaseResult[], gear: Gear
   };
   // θS of an oil above stage 12 is only a floor (not limiting): it is neither drawn nor sets the axis.
   const limiting = (x: CaseResult) => x.scuffingTemperature_C !== null && !x.scuffingTemperatureAtLeast;
-  const tempMax = Math.max(maxOf(every, (p) => p.contactTemperature_C, 'temperature', units) ?? -Infinity, ...every.map((x) => (limiting(x) ? toDisplay('temperature', x.scuffingTemperature_C as number, units) : -Infinity)));
+  const tempMax = Math.max(maxOf(every, contactOf, 'temperature', units) ?? -Infinity, ...every.map((x) => (limiting(x) ? toDisplay('temperature', x.scuffingTemperature_C as number, units) : -Infinity)));
   return [
     {
       id: 'hertz',
@@ -104,7 +118,7 @@ export function meshCharts(cases: CaseResult | readonly CaseResult[], gear: Gear
       xLabel,
       yLabel: axis('v', 'velocity', units),
       markers,
-      yMax: maxOf(every, (p) => Math.max(p.sumVelocity_mps, Math.abs(p.slidingVelocity_mps)), 'velocity', units),
+      yMax: maxOf(every, speedOf, 'velocity', units),
       series: [
         { label: 'vg sliding', axis: 'y', color: OKABE_ITO.vermillion, points: along(c.path, units, 'velocity', (p) => p.slidingVelocity_mps) },
         { label: 'vΣ sum', axis: 'y', color: OKABE_ITO.blue, dash: [7, 4], points: along(c.path, units, 'velocity', (p) => p.sumVelocity_mps) },
@@ -123,7 +137,7 @@ export function meshCharts(cases: CaseResult | readonly CaseResult[], gear: Gear
         { from: limits.boundaryBelow, to: limits.fullFilmFrom, label: REGIME_WORDS.mixed, color: REGIME_COLOURS.mixed },
         { from: limits.fullFilmFrom, to: lambdaTop, label: REGIME_WORDS['full-film'], color: REGIME_COLOURS['full-film'] },
       ],
-      series: list.map((x, i) => ({ label: named('λ', x), axis: 'y' as const, ...oilStyle(i), points: along(x.path, units, 'none', (p) => p.lambda) })),
+      series: list.map((x, i) => ({ label: named('λ', x), axis: 'y' as const, ...oilStyle(i), points: along(x.path, units, 'none', lambdaOf) })),
       figures: list.map((x) => ({ label: named('λmin', x), value: x.lambdaMin, kind: 'none' as const })),
     },
     {
@@ -132,9 +146,9 @@ export function meshCharts(cases: CaseResult | readonly CaseResult[], gear: Gear
       xLabel,
       yLabel: axis('hmin', 'film', units),
       markers,
-      yMax: maxOf(every, (p) => p.filmThicknessMin_um, 'film', units),
-      series: list.map((x, i) => ({ label: named('hmin', x), axis: 'y' as const, ...oilStyle(i), points: along(x.path, units, 'film', (p) => p.filmThicknessMin_um) })),
-      figures: [{ label: 'least hmin', value: minOf((x) => Math.min(...x.path.map((p) => p.filmThicknessMin_um ?? Infinity))), kind: 'film' }],
+      yMax: maxOf(every, hminOf, 'film', units),
+      series: list.map((x, i) => ({ label: named('hmin', x), axis: 'y' as const, ...oilStyle(i), points: along(x.path, units, 'film', hminOf) })),
+      figures: [{ label: 'least hmin', value: minOf((x) => Math.min(...finite(hminOf(x.path)))), kind: 'film' }],
     },
     {
       id: 'temperature',
@@ -144,8 +158,8 @@ export function meshCharts(cases: CaseResult | readonly CaseResult[], gear: Gear
       markers,
       ...(Number.isFinite(tempMax) ? { yMax: tempMax } : {}),
       series: list.flatMap((x, i) => [
-        { label: named('θB', x), axis: 'y' as const, ...oilStyle(i), points: along(x.path, units, 'temperature', (p) => p.contactTemperature_C) },
-        ...(limiting(x) ? [{ label: named('θS', x), axis: 'y' as const, color: OIL_COLOURS[i % OIL_COLOURS.length] as string, dash: [2, 3], points: along(x.path, units, 'temperature', () => x.scuffingTemperature_C) }] : []),
+        { label: named('θB', x), axis: 'y' as const, ...oilStyle(i), points: along(x.path, units, 'temperature', contactOf) },
+        ...(limiting(x) ? [{ label: named('θS', x), axis: 'y' as const, color: OIL_COLOURS[i % OIL_COLOURS.length] as string, dash: [2, 3], points: along(x.path, units, 'temperature', x.scuffingTemperature_C) }] : []),
       ]),
       figures: list.flatMap((x) => [
         { label: named('θB,max', x), value: x.maxContactTemperature_C, kind: 'temperature' as const },
@@ -158,8 +172,8 @@ export function meshCharts(cases: CaseResult | readonly CaseResult[], gear: Gear
       xLabel,
       yLabel: axis('θfl', 'temperatureDifference', units),
       markers,
-      yMax: maxOf(every, (p) => p.flashTemperature_K, 'temperatureDifference', units),
-      series: list.map((x, i) => ({ label: named('θfl', x), axis: 'y' as const, ...oilStyle(i), points: along(x.path, units, 'temperatureDifference', (p) => p.flashTemperature_K) })),
+      yMax: maxOf(every, flashOf, 'temperatureDifference', units),
+      series: list.map((x, i) => ({ label: named('θfl', x), axis: 'y' as const, ...oilStyle(i), points: along(x.path, units, 'temperatureDifference', flashOf) })),
       figures: list.map((x) => ({ label: named('θfl,max', x), value: x.maxFlashTemperature_K, kind: 'temperatureDifference' as const })),
     },
   ];

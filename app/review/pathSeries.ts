@@ -1,0 +1,109 @@
+/**
+ * The path of contact of one case result in columns (PathSeries), from the engine's arrays, and
+ * back to one PointResult per point where objects are wanted: the JSON of `review --json`, the CSV,
+ * a table. Both directions use the same unit conversions, so a point read from the columns is the
+ * number the engine gave, converted once.
+ */
+import type { CaseAnalysis } from '../engine/mesh/analyseCase';
+import { REGIMES } from '../engine/mesh/film';
+import type { Regime } from '../engine/film/regime';
+import { kelvinToCelsius, toMegapascals, toMicrometres, toMillimetres, type Kelvin, type Metres, type Pascals } from '../engine/units';
+import type { CaseResult, PathSeries, PointResult, Results } from './results';
+
+function mapped(from: Float64Array, f: (x: number) => number): Float64Array {
+  const out = new Float64Array(from.length);
+  for (let i = 0; i < from.length; i++) out[i] = f(from[i] as number);
+  return out;
+}
+
+/** The columns of one analysis, in display units. Arrays already in display units are shared with the engine's, not copied. */
+export function pathSeriesOf(a: CaseAnalysis): PathSeries {
+  const m = a.mechanics;
+  const { A, E } = a.input.geometry.points;
+  const film = a.film;
+  const heat = a.heat;
+  return {
+    n: m.n,
+    position_mm: mapped(m.position, (s) => toMillimetres(s as Metres)),
+    pathFraction: mapped(m.position, (s) => (s - A) / (E - A)),
+    loadShare: m.loadShare,
+    hertzStress_MPa: mapped(m.hertzPressure, (p) => toMegapascals(p as Pascals)),
+    pinionFlankVelocity_mps: m.v1,
+    wheelFlankVelocity_mps: m.v2,
+    slidingVelocity_mps: m.slidingVelocity,
+    sumVelocity_mps: m.sumVelocity,
+    slideToRoll: m.slideToRoll,
+    specificSlidingPinion: m.specificSliding1,
+    specificSlidingWheel: m.specificSliding2,
+    film: film
+      ? {
+          filmThicknessMin_um: mapped(film.hMin, (h) => toMicrometres(h as Metres)),
+          filmThicknessCentral_um: mapped(film.hCentral, (h) => toMicrometres(h as Metres)),
+          lambda: film.lambda,
+          lambdaGF: film.lambdaGF,
+          regime: Array.from(film.regime, (r) => REGIMES[r] as Regime),
+        }
+      : null,
+    heat: heat ? { flashTemperature_K: heat.flash, contactTemperature_C: mapped(heat.contact, (t) => kelvinToCelsius(t as Kelvin)) } : null,
+  };
+}
+
+const at = (xs: Float64Array, i: number): number => xs[i] as number;
+
+/** Point i of the path as one object. */
+export function pointOf(p: PathSeries, i: number): PointResult {
+  const f = p.film;
+  const h = p.heat;
+  return {
+    position_mm: at(p.position_mm, i),
+    pathFraction: at(p.pathFraction, i),
+    loadShare: at(p.loadShare, i),
+    hertzStress_MPa: at(p.hertzStress_MPa, i),
+    pinionFlankVelocity_mps: at(p.pinionFlankVelocity_mps, i),
+    wheelFlankVelocity_mps: at(p.wheelFlankVelocity_mps, i),
+    slidingVelocity_mps: at(p.slidingVelocity_mps, i),
+    sumVelocity_mps: at(p.sumVelocity_mps, i),
+    slideToRoll: at(p.slideToRoll, i),
+    specificSlidingPinion: at(p.specificSlidingPinion, i),
+    specificSlidingWheel: at(p.specificSlidingWheel, i),
+    filmThicknessMin_um: f ? at(f.filmThicknessMin_um, i) : null,
+    filmThicknessCentral_um: f ? at(f.filmThicknessCentral_um, i) : null,
+    lambda: f ? at(f.lambda, i) : null,
+    lambdaGF: f ? at(f.lambdaGF, i) : null,
+    regime: f ? (f.regime[i] ?? null) : null,
+    flashTemperature_K: h ? at(h.flashTemperature_K, i) : null,
+    contactTemperature_C: h ? at(h.contactTemperature_C, i) : null,
+  };
+}
+
+/** Every point of the path as objects, A to E. */
+export function pathPoints(p: PathSeries): PointResult[] {
+  const out: PointResult[] = [];
+  for (let i = 0; i < p.n; i++) out.push(pointOf(p, i));
+  return out;
+}
+
+/** A case result as JSON writes it: the path as one object per point. */
+export type CaseResultJson = Omit<CaseResult, 'path'> & { path: PointResult[] };
+
+function caseJson(c: CaseResult): CaseResultJson {
+  return { ...c, path: pathPoints(c.path) };
+}
+
+/** The results as JSON writes them. */
+export type ResultsJson = Omit<Results, 'cases' | 'meshes'> & {
+  cases: CaseResultJson[];
+  meshes?: Array<Omit<NonNullable<Results['meshes']>[number], 'cases'> & { cases: CaseResultJson[] }>;
+};
+
+/**
+ * The results as JSON writes them (`review --json`, snapshots): every case's path, and every
+ * mesh's of a planetary stage, as one object per point; everything else as it is.
+ */
+export function resultsJson(r: Results): ResultsJson {
+  // Spread, then overwrite: the keys keep their order, so the JSON reads as it always has.
+  const { meshes } = r;
+  const out: ResultsJson = { ...r, cases: r.cases.map(caseJson), meshes: meshes?.map((m) => ({ ...m, cases: m.cases.map(caseJson) })) };
+  if (!meshes) delete out.meshes;
+  return out;
+}

@@ -2,7 +2,7 @@ import type { CaseAnalysis } from '../engine/mesh/analyseCase';
 import { decideVerdict } from '../engine/verdict/decide';
 import { NOMINAL_STRESS_EDITION } from '../engine/stress/iso6336Nominal';
 import type { VerdictFacts } from '../engine/verdict/types';
-import { kelvinToCelsius, toMegapascals, toMicrometres, toMillimetres, type Kelvin, type Metres, type Pascals } from '../engine/units';
+import { kelvinToCelsius, toMegapascals, toMicrometres, toMillimetres, type Metres, type Pascals } from '../engine/units';
 import { micropittingFacts, micropittingResult } from './micropittingResult';
 import type { ReviewOil } from './oils';
 import type { CaseResult, LimitCheck } from './results';

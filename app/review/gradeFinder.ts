@@ -1,6 +1,7 @@
 import type { GearPairGeometry } from '../engine/geometry/types';
 import type { Material } from '../engine/materials';
-import { evaluateCell, prepareSweep, prepareSweepOil, type CellResult, type SweepCase } from '../engine/sweep/operatingMap';
+import { cellLambdaMin, prepareSweep, type SweepCase } from '../engine/sweep/operatingMap';
+import type { OilModel } from '../engine/oil/oilModel';
 import type { EnginePolicy } from '../engine/mesh/types';
 import { ISO_VG_GRADES } from '../engine/oil/isoGrade';
 import { cachedOilModel } from '../engine/oil/oilModelCache';
@@ -69,23 +70,40 @@ export function gradeFinder(review: PairReview, geometry: GearPairGeometry, pini
 function gradeTable(review: PairReview, cases: readonly SweepCase[], oil: ReviewOil, tHigh: number): GradeFinderRow[] {
   const vi = oil.model.viscosityIndex.value;
   const table: GradeFinderRow[] = [];
-  const cell: CellResult = { lambdaMin: 0, scuffingSafety: 0, integralSafety: 0, verdict: 0, lambdaGFMin: 0, micropittingSafety: 0 };
   for (const vg of CANDIDATE_GRADES) {
-    const kv100 = gradeKv100(vg, vi);
-    if (kv100 === null) continue; // this VI is not reachable at this grade within D2270's range
-    const model = cachedOilModel({ kv40: centistokes(vg), kv100, density15: oil.source.density15_kgm3 as KilogramsPerCubicMetre, baseOil: oil.baseOil }, oil.field);
+    const model = gradeModel(vg, vi, oil);
+    if (model === null) continue; // this VI is not reachable at this grade within D2270's range
     let lambdaMin = Infinity;
     cases.forEach((sc, li) => {
-      const so = prepareSweepOil(sc, { ...oil, model, micropittingFailureStage: null }); // the grade finder reads λ only
       // The film thins as the oil warms, so the hotter of the case's own temperature and the top of the range governs.
       const t = Math.max(review.loadCases[li]?.oilTemperature_C ?? tHigh, tHigh);
-      evaluateCell(sc, so, t, 1, cell);
-      if (cell.lambdaMin < lambdaMin) lambdaMin = cell.lambdaMin;
+      const l = cellLambdaMin(sc, model, t);
+      if (l < lambdaMin) lambdaMin = l;
     });
     if (Number.isFinite(lambdaMin)) table.push({ isoVG: vg, lambdaMin, usable: true });
   }
   return table;
 }
+
+/** The model of grade `vg` with the oil's VI, base oil and density (α the base oil's default), null when the VI is unreachable at that grade. */
+function gradeModel(vg: number, vi: number, oil: ReviewOil): OilModel | null {
+  const key = `${oil.field}|${oil.baseOil}|${oil.source.density15_kgm3}|${vi}`;
+  let byGrade = gradeModels.get(key);
+  if (!byGrade) {
+    if (gradeModels.size >= 256) gradeModels.clear();
+    gradeModels.set(key, (byGrade = new Map()));
+  }
+  let model = byGrade.get(vg);
+  if (model === undefined) {
+    const kv100 = gradeKv100(vg, vi);
+    model = kv100 === null ? null : cachedOilModel({ kv40: centistokes(vg), kv100, density15: oil.source.density15_kgm3 as KilogramsPerCubicMetre, baseOil: oil.baseOil }, oil.field);
+    byGrade.set(vg, model);
+  }
+  return model;
+}
+
+/** Grade models per oil field, base oil, density and VI, then per grade: a recompute asks for the same ones again. */
+const gradeModels = new Map<string, Map<number, OilModel | null>>();
 
 /** KV100 of grade `vg` at viscosity index `vi` (ASTM D2270 inverted), null when unreachable; kept, as a recompute asks the same again. */
 const kv100s = new Map<string, SquareMetresPerSecond | null>();

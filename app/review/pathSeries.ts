@@ -10,24 +10,26 @@ import type { Regime } from '../engine/film/regime';
 import { kelvinToCelsius, toMegapascals, toMicrometres, toMillimetres, type Kelvin, type Metres, type Pascals } from '../engine/units';
 import type { CaseResult, PathSeries, PointResult, Results } from './results';
 
-function mapped(from: Float64Array, f: (x: number) => number): Float64Array {
-  const out = new Float64Array(from.length);
-  for (let i = 0; i < from.length; i++) out[i] = f(from[i] as number);
-  return out;
-}
-
 /** The columns of one analysis, in display units. Arrays already in display units are shared with the engine's, not copied. */
 export function pathSeriesOf(a: CaseAnalysis): PathSeries {
   const m = a.mechanics;
+  const n = m.n;
   const { A, E } = a.input.geometry.points;
-  const film = a.film;
-  const heat = a.heat;
+  const position_mm = new Float64Array(n);
+  const pathFraction = new Float64Array(n);
+  const hertzStress_MPa = new Float64Array(n);
+  for (let i = 0; i < n; i++) {
+    const s = m.position[i] as number;
+    position_mm[i] = toMillimetres(s as Metres);
+    pathFraction[i] = (s - A) / (E - A);
+    hertzStress_MPa[i] = toMegapascals(m.hertzPressure[i] as Pascals);
+  }
   return {
-    n: m.n,
-    position_mm: mapped(m.position, (s) => toMillimetres(s as Metres)),
-    pathFraction: mapped(m.position, (s) => (s - A) / (E - A)),
+    n,
+    position_mm,
+    pathFraction,
     loadShare: m.loadShare,
-    hertzStress_MPa: mapped(m.hertzPressure, (p) => toMegapascals(p as Pascals)),
+    hertzStress_MPa,
     pinionFlankVelocity_mps: m.v1,
     wheelFlankVelocity_mps: m.v2,
     slidingVelocity_mps: m.slidingVelocity,
@@ -35,17 +37,25 @@ export function pathSeriesOf(a: CaseAnalysis): PathSeries {
     slideToRoll: m.slideToRoll,
     specificSlidingPinion: m.specificSliding1,
     specificSlidingWheel: m.specificSliding2,
-    film: film
-      ? {
-          filmThicknessMin_um: mapped(film.hMin, (h) => toMicrometres(h as Metres)),
-          filmThicknessCentral_um: mapped(film.hCentral, (h) => toMicrometres(h as Metres)),
-          lambda: film.lambda,
-          lambdaGF: film.lambdaGF,
-          regime: Array.from(film.regime, (r) => REGIMES[r] as Regime),
-        }
-      : null,
-    heat: heat ? { flashTemperature_K: heat.flash, contactTemperature_C: mapped(heat.contact, (t) => kelvinToCelsius(t as Kelvin)) } : null,
+    film: a.film ? filmColumns(a.film, n) : null,
+    heat: a.heat ? heatColumns(a.heat, n) : null,
   };
+}
+
+function filmColumns(film: NonNullable<CaseAnalysis['film']>, n: number): NonNullable<PathSeries['film']> {
+  const filmThicknessMin_um = new Float64Array(n);
+  const filmThicknessCentral_um = new Float64Array(n);
+  for (let i = 0; i < n; i++) {
+    filmThicknessMin_um[i] = toMicrometres(film.hMin[i] as Metres);
+    filmThicknessCentral_um[i] = toMicrometres(film.hCentral[i] as Metres);
+  }
+  return { filmThicknessMin_um, filmThicknessCentral_um, lambda: film.lambda, lambdaGF: film.lambdaGF, regime: film.regime };
+}
+
+function heatColumns(heat: NonNullable<CaseAnalysis['heat']>, n: number): NonNullable<PathSeries['heat']> {
+  const contactTemperature_C = new Float64Array(n);
+  for (let i = 0; i < n; i++) contactTemperature_C[i] = kelvinToCelsius(heat.contact[i] as Kelvin);
+  return { flashTemperature_K: heat.flash, contactTemperature_C };
 }
 
 const at = (xs: Float64Array, i: number): number => xs[i] as number;
@@ -70,7 +80,7 @@ export function pointOf(p: PathSeries, i: number): PointResult {
     filmThicknessCentral_um: f ? at(f.filmThicknessCentral_um, i) : null,
     lambda: f ? at(f.lambda, i) : null,
     lambdaGF: f ? at(f.lambdaGF, i) : null,
-    regime: f ? (f.regime[i] ?? null) : null,
+    regime: f ? ((REGIMES[f.regime[i] as number] as Regime | undefined) ?? null) : null,
     flashTemperature_K: h ? at(h.flashTemperature_K, i) : null,
     contactTemperature_C: h ? at(h.contactTemperature_C, i) : null,
   };

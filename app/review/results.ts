@@ -61,7 +61,8 @@ export interface PathSeries {
     readonly filmThicknessCentral_um: Float64Array;
     readonly lambda: Float64Array;
     readonly lambdaGF: Float64Array;
-    readonly regime: readonly Regime[];
+    /** The regime at each point as an index into REGIMES (engine/mesh/film.ts): 0 boundary, 1 mixed, 2 full film. */
+    readonly regime: Uint8Array;
   } | null;
   /** Flash and contact temperature, with an oil (null for a case without one). */
   readonly heat: {

@@ -26,10 +26,24 @@ const VG460: Record<string, unknown> = { name: 'ISO VG 460 EP mineral', role: 'c
 
 /** The issue's workload: the pair demo's 3 load cases × 3 oils × `points` points, every derived result. */
 export function recomputeWorkload(points: number): Review {
-  const raw = rawDemo();
-  raw.policy.pathPoints = points;
-  raw.oils.push({ ...VG460 });
-  return parsed(raw);
+  return recomputeEdits(points, 1)[0] as Review;
+}
+
+/**
+ * The workload as a user edits it: `count` versions whose first load case's duty steps up by 1 %
+ * each (what typing a new torque does), so a timed recompute never repeats the one before it.
+ * With `oilEdit`, the in-service oil's KV40 steps as well, so nothing kept per oil model applies
+ * (the cold figure).
+ */
+export function recomputeEdits(points: number, count: number, oilEdit = false): Review[] {
+  return Array.from({ length: count }, (_, k) => {
+    const raw = rawDemo();
+    raw.policy.pathPoints = points;
+    raw.oils.push({ ...VG460 });
+    scaleDuty(raw.loadCases[0] as Record<string, unknown>, 1 + 0.01 * k);
+    if (oilEdit) (raw.oils[0] as Record<string, unknown>).kv40_mm2s = 220 * (1 + 0.001 * k) + 1e-6 * Math.random();
+    return parsed(raw);
+  });
 }
 
 /** The planetary demo (its two meshes) at `points` points. */

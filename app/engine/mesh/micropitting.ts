@@ -56,10 +56,12 @@ export function testGearLambdaGF(input: CaseInput, stage: MicropittingFailureSta
   // The test depends on the oil and the policy only, not on the case: kept per oil model (which a
   // recompute reuses while the oil's data stay the same) and per policy.
   const oil = input.oil as NonNullable<CaseInput['oil']>;
-  const key = `${String(stage)}|${policyKey(input.policy)}`;
+  const key = policyKey(input.policy);
   let perOil = testResults.get(oil.model);
   if (!perOil) testResults.set(oil.model, (perOil = new Map()));
-  const known = perOil.get(key);
+  let perPolicy = perOil.get(key);
+  if (!perPolicy) perOil.set(key, (perPolicy = new Map()));
+  const known = perPolicy.get(stage);
   if (known) {
     for (const w of known.warnings) sink.add(w);
     return known.value;
@@ -67,11 +69,12 @@ export function testGearLambdaGF(input: CaseInput, stage: MicropittingFailureSta
   const own = new WarningSink();
   const value = computeTestGearLambdaGF(input, stage, own);
   for (const w of own.items) sink.add(w);
-  perOil.set(key, { value, warnings: own.items });
+  perPolicy.set(stage, { value, warnings: own.items });
   return value;
 }
 
-const testResults = new WeakMap<object, Map<string, { value: number; warnings: readonly EngineWarning[] }>>();
+/** Per oil model, per policy (policyKey), per stage: λGF,min of the test and the warnings met computing it. */
+const testResults = new WeakMap<object, Map<string, Map<MicropittingFailureStage, { value: number; warnings: readonly EngineWarning[] }>>>();
 
 const policyKeys = new WeakMap<EnginePolicy, string>();
 /** Every policy input, as one string: the test gear runs through the same chain, so any of them may matter. */

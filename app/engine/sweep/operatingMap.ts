@@ -17,6 +17,7 @@ import { micropittingStageNumber, MICROPITTING_STAGE_MAX } from '../micropitting
 import { pairMaterialFactorWW } from '../micropitting/materialFactor';
 import { permissibleSpecificFilm } from '../micropitting/permissibleFilm';
 import type { CaseInput, EngineOil } from '../mesh/types';
+import type { OilModel } from '../oil/oilModel';
 import type { FzgStageNeed } from '../mesh/scuffing';
 import { verdictCodeOf } from '../verdict/code';
 import type { VerdictCode } from '../verdict/types';
@@ -84,6 +85,8 @@ export interface SweepCase {
   readonly intFlashPerMu: number;
   /** 1 where the point lies in the area at risk of micropitting (s ≤ B or s ≥ D), as micropitting/lambdaGFAtRisk.ts. */
   readonly atRisk: Uint8Array;
+  /** The field a warning about the oil temperature names. */
+  readonly temperatureField: string;
 }
 
 /** Per-oil constants of a sweep: scuffing temperatures per stage for this oil's XL and the pair's XW. */
@@ -161,6 +164,7 @@ export function prepareSweep(input: Omit<CaseInput, 'oil'>): SweepCase {
   const flashEPerMu = blokFlashTemperature(1, fullLoad as NewtonsPerMetre, v1E as MetresPerSecond, v2E as MetresPerSecond, bM1, bM2, bHE);
   const xEps = integralContactRatioFactor((g.points.E - g.points.C) / g.transverseBasePitch, Math.max(0, (g.points.C - g.points.A) / g.transverseBasePitch));
   return {
+    temperatureField: `${input.caseField}.oilTemperature_C`,
     input,
     n,
     flashPerMu,
@@ -219,21 +223,20 @@ function scuffingTemperaturesByStage(xW: number, xL: number): { thetaSOf: Float6
 
 const codeFacts = { requiredStage: 1 as FzgStageNeed, requiredStageIntegral: 1 as FzgStageNeed, integralSafetyAtEpFloor: null as number | null, applicationFactor: 1, regime: 'mixed' as 'boundary' | 'mixed' | 'full-film' };
 
+/** What cellFilm gives: written in place, so a cell allocates nothing. */
+const film = { mu: 0, f75: 0, flashMax: 0, thetaM: 0, lambdaMin: 0, lambdaGFMin: 0 };
+
 /**
- * λmin, SB, SintS and the verdict code of one cell: oil temperature `tOilC` (°C) and load fraction
- * `f` of the case torque. Writes into `out`; allocates nothing. A cell at the case's own temperature
- * and f = 1 equals analyseCase (tests/engine/sweep/operatingMap.test.ts).
+ * The film part of a cell: μ (ISO/TS 6336-20 or the policy's), θfl,max and θM, then λmin over the
+ * path and λGF,min in the area at risk at θM (clamped to the oil model's range as analyseCase does).
  */
-export function evaluateCell(sc: SweepCase, so: SweepOil, tOilC: number, f: number, out: CellResult): CellResult {
+function cellFilm(sc: SweepCase, model: OilModel, tOil: Kelvin, f: number): typeof film {
   const { policy } = sc.input;
-  const model = so.oil.model;
-  const tOil = celsiusToKelvin(tOilC);
-  const etaOil = model.dynamicViscosity(tOil, `${sc.input.caseField}.oilTemperature_C`);
+  const etaOil = model.dynamicViscosity(tOil, sc.temperatureField);
   const mu = policy.frictionCoefficient ?? isoMeanFriction({ wBt: (sc.unitLoad * f) as NewtonsPerMetre, vSumC: sc.vSumC, rhoRelC: sc.rhoC, etaOil, raAvg: sc.raAvg, xL: model.lubricantFactor, kBgamma: sc.kBg });
   const f75 = Math.pow(f, 0.75);
   const flashMax = mu * f75 * sc.flashPerMuMax;
   const thetaM = tOil + 0.47 * sc.xS * sc.xMp * flashMax;
-  const rise = thetaM + flashMax - tOil;
   // Film at θM, clamped to the oil model's range as analyseCase does.
   const tMax = model.temperatureRange.max;
   const tFilm = (thetaM > tMax ? tMax : thetaM) as Kelvin;
@@ -264,8 +267,32 @@ export function evaluateCell(sc: SweepCase, so: SweepOil, tOilC: number, f: numb
     const h = thermal ? h0 * (3.94 / (3.94 + Math.exp(0.62 * (lnMW + 2 * (sc.lnUbar[i] as number))))) : h0;
     if (h < lmin) lmin = h;
   }
-  lmin /= sc.sigma;
-  const lgf = hYMin / sc.raAvg;
+  film.mu = mu;
+  film.f75 = f75;
+  film.flashMax = flashMax;
+  film.thetaM = thetaM;
+  film.lambdaMin = lmin / sc.sigma;
+  film.lambdaGFMin = hYMin / sc.raAvg;
+  return film;
+}
+
+/** λmin of one cell only (the grade finder's question): evaluateCell's film, without the scuffing and the verdict. */
+export function cellLambdaMin(sc: SweepCase, model: OilModel, tOilC: number, f = 1): number {
+  return cellFilm(sc, model, celsiusToKelvin(tOilC), f).lambdaMin;
+}
+
+/**
+ * λmin, SB, SintS and the verdict code of one cell: oil temperature `tOilC` (°C) and load fraction
+ * `f` of the case torque. Writes into `out`; allocates nothing. A cell at the case's own temperature
+ * and f = 1 equals analyseCase (tests/engine/sweep/operatingMap.test.ts).
+ */
+export function evaluateCell(sc: SweepCase, so: SweepOil, tOilC: number, f: number, out: CellResult): CellResult {
+  const { policy } = sc.input;
+  const tOil = celsiusToKelvin(tOilC);
+  const { mu, f75, flashMax, thetaM } = cellFilm(sc, so.oil.model, tOil, f);
+  const lmin = film.lambdaMin;
+  const lgf = film.lambdaGFMin;
+  const rise = thetaM + flashMax - tOil;
   const flashInt = mu * f75 * sc.intFlashPerMu;
   const thetaIntC = tOilC + (INTEGRAL_WEIGHT_BULK * sc.xMp + INTEGRAL_WEIGHT_FLASH) * flashInt;
   let need: FzgStageNeed = '>12';

@@ -51,10 +51,10 @@ describe('path series', () => {
     expect(c.path.heat).toBeNull();
     expect(pathPoints(c.path)[0]!.lambda).toBeNull();
   });
-  it('a recompute after a change of the film policy sees it in the micropitting test gear too', () => {
+  it('a recompute after a change of μ sees it in the micropitting test gear too', () => {
     const a = run(parsed(rawDemo())).cases[0]!.micropitting!;
     const raw = rawDemo();
-    raw.policy.thermalFilmCorrection = false; // not a key of the earlier per-run cache: the test film must see it too
+    raw.policy.frictionCoefficient = 0.09; // the oil's model is the one kept from the run before: the test must still see the new μ
     const b = run(parsed(raw)).cases[0]!.micropitting!;
     const again = run(parsed(rawDemo())).cases[0]!.micropitting!;
     expect(b.lambdaGFTByStage).not.toEqual(a.lambdaGFTByStage);

@@ -3,10 +3,10 @@
  * avoid, counted from the engine's per-point formulas. `floor_ratio` = recompute / floor.
  *   a case point:   mechanics 2 √ (radii of curvature), Blok 3 √, film 3 ln + 4 exp
  *                   (h_min, h_c, h_Y and the thermal factor φT);
- *   a grade-finder point: 2 exp (film and φT; its logarithms are shared along the path).
+ *   a grade-finder cell (one grade × load case): 4 ln + 4 exp (η, G, the load and the
+ *                   Murch–Wilson group); its points only multiply (engine/sweep's per-point factors).
  */
 import { run } from '../../app/review/run';
-import { FINDER_PATH_POINTS } from '../../app/review/gradeFinder';
 import type { Review } from '../../app/review/schema';
 
 export interface OpCount {
@@ -15,15 +15,15 @@ export interface OpCount {
   exp: number;
 }
 
-const PER_POINT = { casePoint: { sqrt: 5, log: 3, exp: 4 }, finderPoint: { sqrt: 0, log: 0, exp: 2 } } as const;
+const PER = { casePoint: { sqrt: 5, log: 3, exp: 4 }, finderCell: { sqrt: 0, log: 4, exp: 4 } } as const;
 
 export function opCount(review: Review): OpCount {
   const results = run(review);
   const casePoints = results.cases.reduce((s, c) => s + c.path.n, 0);
   const tables = new Set(results.gradeFinder.map((g) => JSON.stringify(g.table.map((r) => r.isoVG))));
   const rows = [...tables].reduce((s, t) => s + (JSON.parse(t) as unknown[]).length, 0);
-  const finderPoints = rows * review.loadCases.length * Math.min(FINDER_PATH_POINTS, review.policy.pathPoints);
-  const n = (k: keyof OpCount) => casePoints * PER_POINT.casePoint[k] + finderPoints * PER_POINT.finderPoint[k];
+  const finderCells = rows * review.loadCases.length;
+  const n = (k: keyof OpCount) => casePoints * PER.casePoint[k] + finderCells * PER.finderCell[k];
   return { sqrt: n('sqrt'), log: n('log'), exp: n('exp') };
 }
 

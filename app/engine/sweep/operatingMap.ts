@@ -65,11 +65,15 @@ export interface SweepCase {
   /** Blok θfl per unit μ at 100 % load, K. */
   readonly flashPerMu: Float64Array;
   readonly flashPerMuMax: number;
-  /** ln ū − ln R and ln w0 − ln E′ − ln R at each point; ln ū. */
-  readonly lnUPoint: Float64Array;
-  readonly lnWPoint: Float64Array;
-  readonly lnUbar: Float64Array;
-  readonly radius: Float64Array;
+  /**
+   * The per-point part of each film, which a cell only scales: with U = (η/E′)·ū/R and
+   * W = f·w0/(E′R), h = R k G^b U^a W^c = k G^b (η/E′)^a f^c · [R (ū/R)^a (w0/(E′R))^c], the bracket
+   * kept here for the policy's formula (hPoint) and for the ISO/TR 15144-1 local film (hYPoint);
+   * and ū^1.24 for the Murch–Wilson factor, L^0.62 = (βη/k_f)^0.62 · ū^1.24.
+   */
+  readonly hPoint: Float64Array;
+  readonly hYPoint: Float64Array;
+  readonly uBarPow: Float64Array;
   readonly lnE: number;
   readonly ePrime: number;
   readonly sigma: number;
@@ -131,10 +135,12 @@ export function prepareSweep(input: Omit<CaseInput, 'oil'>): SweepCase {
   const ra1 = input.roughnessRa1;
   const ra2 = input.roughnessRa2;
   const flashPerMu = new Float64Array(n);
-  const lnUPoint = new Float64Array(n);
-  const lnWPoint = new Float64Array(n);
-  const lnUbar = new Float64Array(n);
-  const radius = new Float64Array(n);
+  const useDH = policy.filmFormula === 'dowson-higginson';
+  const aU = useDH ? 0.7 : 0.694;
+  const aW = useDH ? -0.13 : -0.128;
+  const hPoint = new Float64Array(n);
+  const hYPoint = new Float64Array(n);
+  const uBarPow = new Float64Array(n);
   const atRisk = new Uint8Array(n);
   let anyAtRisk = false;
   for (let i = 0; i < n; i++) {
@@ -151,11 +157,13 @@ export function prepareSweep(input: Omit<CaseInput, 'oil'>): SweepCase {
     flashPerMu[i] = f;
     if (f > flashPerMuMax) flashPerMuMax = f;
     const lnU = Math.log((m.sumVelocity[i] as number) / 2);
-    const lnR = Math.log(m.reducedRadius[i] as number);
-    radius[i] = m.reducedRadius[i] as number;
-    lnUbar[i] = lnU;
-    lnUPoint[i] = lnU - lnR;
-    lnWPoint[i] = Math.log(w) - lnE - lnR;
+    const r = m.reducedRadius[i] as number;
+    const lnR = Math.log(r);
+    const lnUPoint = lnU - lnR;
+    const lnWPoint = Math.log(w) - lnE - lnR;
+    hPoint[i] = r * Math.exp(aU * lnUPoint + aW * lnWPoint);
+    hYPoint[i] = useDH ? (hPoint[i] as number) : r * Math.exp(0.7 * lnUPoint - 0.13 * lnWPoint);
+    uBarPow[i] = Math.exp(1.24 * lnU);
   }
   const last = n - 1;
   const fullLoad = m.unitLoad * kBg;
@@ -169,10 +177,9 @@ export function prepareSweep(input: Omit<CaseInput, 'oil'>): SweepCase {
     n,
     flashPerMu,
     flashPerMuMax,
-    lnUPoint,
-    lnWPoint,
-    lnUbar,
-    radius,
+    hPoint,
+    hYPoint,
+    uBarPow,
     lnE,
     ePrime,
     sigma: RQ_PER_RA_GAUSSIAN * Math.sqrt(ra1 * ra1 + ra2 * ra2),
@@ -245,26 +252,23 @@ function cellFilm(sc: SweepCase, model: OilModel, tOil: Kelvin, f: number): type
   const lnEta = Math.log(eta) - sc.lnE;
   const lnF = Math.log(f);
   const useDH = policy.filmFormula === 'dowson-higginson';
-  const kFilm = useDH ? 2.65 * Math.exp(0.54 * lnG) : 1.714 * Math.exp(0.568 * lnG);
   const aU = useDH ? 0.7 : 0.694;
   const aW = useDH ? -0.13 : -0.128;
+  // The cell's factors of the films (see SweepCase.hPoint): k G^b (η/E′)^a f^c, and for hY 1.6 G^0.6 (η/E′)^0.7 f^−0.13.
+  const kFilm = (useDH ? 2.65 * Math.exp(0.54 * lnG) : 1.714 * Math.exp(0.568 * lnG)) * Math.exp(aU * lnEta + aW * lnF);
+  const kIso = 1.6 * Math.exp(0.6 * lnG + 0.7 * lnEta - 0.13 * lnF);
   const thermal = policy.thermalFilmCorrection;
-  const lnMW = Math.log((model.temperatureViscosity(tFilm) * eta) / MINERAL_OIL_CONDUCTIVITY);
-  // ISO/TR 15144-1 local film hY = 1.6 G^0.6 U^0.7 W^−0.13 R: the Dowson–Higginson groups, so with that
-  // formula hY = h · (1.6/2.65) G^0.06 (no extra exp per point); with Pan–Hamrock it takes its own.
-  const kIso = 1.6 * Math.exp(0.6 * lnG);
-  const isoPerDH = kIso / kFilm;
+  // Murch–Wilson: φT = 3.94 / (3.94 + L^0.62), L^0.62 = (βη/k_f)^0.62 · ū^1.24.
+  const mw = Math.exp(0.62 * Math.log((model.temperatureViscosity(tFilm) * eta) / MINERAL_OIL_CONDUCTIVITY));
   let lmin = Infinity;
   let hYMin = Infinity;
   for (let i = 0; i < sc.n; i++) {
-    const lnUi = lnEta + (sc.lnUPoint[i] as number);
-    const lnWi = (sc.lnWPoint[i] as number) + lnF;
-    const h0 = (sc.radius[i] as number) * kFilm * Math.exp(aU * lnUi + aW * lnWi);
+    const h0 = kFilm * (sc.hPoint[i] as number);
     if (sc.atRisk[i] === 1) {
-      const hY = useDH ? h0 * isoPerDH : (sc.radius[i] as number) * kIso * Math.exp(0.7 * lnUi - 0.13 * lnWi);
+      const hY = kIso * (sc.hYPoint[i] as number);
       if (hY < hYMin) hYMin = hY;
     }
-    const h = thermal ? h0 * (3.94 / (3.94 + Math.exp(0.62 * (lnMW + 2 * (sc.lnUbar[i] as number))))) : h0;
+    const h = thermal ? h0 * (3.94 / (3.94 + mw * (sc.uBarPow[i] as number))) : h0;
     if (h < lmin) lmin = h;
   }
   film.mu = mu;

@@ -157,8 +157,8 @@ export class Layout {
       return h + 2 * pad;
     };
 
-    const drawRow = (cells: CellSpec[], bold: boolean, shade: string | null): void => {
-      const h = rowHeight(cells, bold);
+    // `h`: the row's height when the caller has measured it already (text layout is the record's main cost).
+    const drawRow = (cells: CellSpec[], bold: boolean, shade: string | null, h: number = rowHeight(cells, bold)): void => {
       const y = doc.y;
       if (shade) doc.rect(this.left, y, this.width, h).fillColor(shade).fill();
       let x = this.left;
@@ -182,13 +182,13 @@ export class Layout {
     };
 
     const headerCells = columns.map((c) => ({ text: c.header, bold: true, color: INK }));
+    const headerH = header ? rowHeight(headerCells, true) : 0;
     const drawHeader = (): void => {
       if (!header) return;
-      drawRow(headerCells, true, null);
+      drawRow(headerCells, true, null, headerH);
       doc.moveTo(this.left, doc.y).lineTo(this.right, doc.y).lineWidth(0.6).strokeColor(GREY).stroke();
     };
 
-    const headerH = header ? rowHeight(headerCells, true) : 0;
     const firstH = rows[0] ? rowHeight(rows[0].map(cellOf), false) : 0;
     this.ensure(headerH + firstH + 2);
     drawHeader();
@@ -199,7 +199,7 @@ export class Layout {
         this.newPage();
         drawHeader();
       }
-      drawRow(cells, false, opts.zebra && ri % 2 === 1 ? FAINT : null);
+      drawRow(cells, false, opts.zebra && ri % 2 === 1 ? FAINT : null, h);
     });
     doc.moveTo(this.left, doc.y).lineTo(this.right, doc.y).lineWidth(0.4).strokeColor(RULE).stroke();
     doc.x = this.left;

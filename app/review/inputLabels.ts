@@ -25,6 +25,8 @@ export interface InputLabel {
   readonly unit?: string;
   /** Words for the coded values of a choice. */
   readonly words?: Readonly<Record<string, string>>;
+  /** What an optional field left empty means, where a value is computed instead (else "empty"). */
+  readonly emptyWords?: string;
 }
 
 export { MATERIAL_WORDS };
@@ -142,7 +144,7 @@ export const INPUT_LABELS: Readonly<Record<string, InputLabel>> = {
   'oils[].role': { label: 'Role', words: OIL_ROLE_WORDS },
   'oils[].kv40_mm2s': { label: 'Viscosity at 40 °C', usLabel: 'Viscosity at 40 °C (104 °F)', kind: 'kinematicViscosity' },
   'oils[].kv100_mm2s': { label: 'Viscosity at 100 °C', usLabel: 'Viscosity at 100 °C (212 °F)', kind: 'kinematicViscosity' },
-  'oils[].viscosityIndex': { label: 'Viscosity index VI' },
+  'oils[].viscosityIndex': { label: 'Viscosity index VI', emptyWords: 'computed by ASTM D2270' },
   'oils[].density15_kgm3': { label: 'Density at 15 °C', usLabel: 'Density at 15 °C (59 °F)', kind: 'density' },
   'oils[].baseOil': { label: 'Base oil', words: BASE_OIL_WORDS },
   'oils[].chemistry': { label: 'Additive chemistry', words: CHEMISTRY_WORDS },

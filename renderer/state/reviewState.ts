@@ -1,5 +1,6 @@
 import { getIn, setIn, type FieldPath } from './paths';
 import { caseKeys, gearSetRoot, powerFactor, withGearSet, withHeld, type GearSetKind } from './gearSet';
+import { VISCOSITY_INDEX_FOLLOWS as VI } from '../../app/review/followingInputs';
 
 /** The review being edited, as plain JSON (it may be invalid while the user types). */
 export type Draft = Record<string, unknown>;
@@ -52,7 +53,7 @@ export function docReducer(state: DocState, action: DocAction): DocState {
 
 /** Which oils have a VI the user typed, after this action (removing an oil shifts the indices after it). */
 function trackTypedVi(typed: readonly number[], action: DocAction): readonly number[] {
-  if (action.type === 'set' && action.path[0] === 'oils' && action.path[2] === 'viscosityIndex' && typeof action.path[1] === 'number') {
+  if (action.type === 'set' && action.path[0] === VI.list && action.path[2] === VI.field && typeof action.path[1] === 'number') {
     const i = action.path[1];
     const rest = typed.filter((t) => t !== i);
     return action.value === undefined ? rest : [...rest, i];
@@ -61,12 +62,15 @@ function trackTypedVi(typed: readonly number[], action: DocAction): readonly num
   return typed;
 }
 
-/** A new KV40 or KV100 makes a VI the user did not type stale: drop it, so ASTM D2270 computes it from the new pair. */
+/**
+ * A new KV40 or KV100 makes a VI the user did not type stale: drop it, so ASTM D2270 computes it
+ * from the new pair. The audit lists the dropped VI with the viscosity's change (followingInputs.ts).
+ */
 function dropStaleVi(draft: Draft, action: DocAction, typed: readonly number[]): Draft {
-  if (action.type !== 'set' || action.path[0] !== 'oils' || typeof action.path[1] !== 'number') return draft;
+  if (action.type !== 'set' || action.path[0] !== VI.list || typeof action.path[1] !== 'number') return draft;
   const i = action.path[1];
-  if ((action.path[2] !== 'kv40_mm2s' && action.path[2] !== 'kv100_mm2s') || typed.includes(i)) return draft;
-  return getIn(draft, ['oils', i, 'viscosityIndex']) === undefined ? draft : setIn(draft, ['oils', i, 'viscosityIndex'], undefined);
+  if (!VI.causes.includes(action.path[2] as string) || typed.includes(i)) return draft;
+  return getIn(draft, [VI.list, i, VI.field]) === undefined ? draft : setIn(draft, [VI.list, i, VI.field], undefined);
 }
 
 function edit(draft: Draft, action: Exclude<DocAction, { type: 'load' | 'saved' }>): Draft {

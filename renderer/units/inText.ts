@@ -1,5 +1,6 @@
 import { toDisplay, unitLabel, type QuantityKind, type UnitSystem } from './units';
 import { formatResult } from './format';
+import type { VerdictReason } from '../../app/review/results';
 
 /**
  * A generated sentence (a reason, a caution, a finding) in the display units. The engine writes
@@ -19,4 +20,15 @@ export function inDisplayUnits(text: string, units: UnitSystem): string {
     const v = (sign ? -1 : 1) * Number(num);
     return `${formatResult(toDisplay(kind, v, units), 4).replace('-', '−')} ${unitLabel(kind, units)}`;
   });
+}
+
+/**
+ * A verdict's reason in the display units: its sentence, its threshold and its source. A source
+ * can carry figures too (the micropitting method's C-GF test at 90 °C and 8.3 m/s), and a reason
+ * read in °F with its test in °C would mix the systems on one line. A formula's unit in a source
+ * (θS = … S² °C) follows no number and is left as written.
+ */
+export function reasonInDisplayUnits(reason: VerdictReason, units: UnitSystem): VerdictReason {
+  if (units === 'si') return reason;
+  return { ...reason, text: inDisplayUnits(reason.text, units), threshold: inDisplayUnits(reason.threshold, units), source: inDisplayUnits(reason.source, units) };
 }

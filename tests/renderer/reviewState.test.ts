@@ -4,6 +4,8 @@ import { parseReviewValue } from '../../app/review/parse';
 import { getIn, setIn } from '../../renderer/state/paths';
 import { docReducer, draftPower, draftText, draftTorque, initialDocState, type Draft } from '../../renderer/state/reviewState';
 import { newLoadCase, newReviewDraft } from '../../renderer/state/templates';
+import { diffInputs } from '../../app/review/audit/diff';
+import { undoEdit } from '../../app/review/audit/undo';
 
 const demo = () => structuredClone(DEMO_REVIEWS['harrow-creek-crusher-hs-pair.flankfilm.json']) as Draft;
 const loaded = () => docReducer(initialDocState, { type: 'load', draft: demo(), handle: null });
@@ -93,5 +95,29 @@ describe('docReducer', () => {
     expect(next.power_kW).toBeUndefined();
     // shares already fill the time: the new share is left to be entered
     expect(newLoadCase(cases[0], [{ ...cases[0], timeShare: 1 }]).timeShare).toBeUndefined();
+  });
+});
+
+describe('changes since signing, as the editor makes them', () => {
+  const inputs = (d: Draft) => {
+    const { format: _f, version: _v, signoff: _s, ...rest } = d;
+    return rest as never;
+  };
+
+  it('two edits are two changes: a KV40 that leaves the VI to ASTM D2270 names the VI on the line of the KV40', () => {
+    const signed = inputs(demo());
+    let s = docReducer(loaded(), { type: 'set', path: ['loadCases', 1, 'oilTemperature_C'], value: 75 });
+    s = docReducer(s, { type: 'set', path: ['oils', 0, 'kv40_mm2s'], value: 240 });
+    expect(getIn(s.draft, ['oils', 0, 'viscosityIndex'])).toBeUndefined(); // the demo's VI 97 follows the new KV40
+    const changes = diffInputs(signed, inputs(s.draft!));
+    expect(changes.map((c) => c.path)).toEqual(['loadCases[1].oilTemperature_C', 'oils[0].kv40_mm2s']);
+    expect(changes[1]!.along?.map((c) => c.path)).toEqual(['oils[0].viscosityIndex']);
+    // "undo this change" on each, through the editor, gives the signed inputs back, VI and all
+    for (const c of [...changes].reverse()) {
+      const u = undoEdit(s.draft, signed, c);
+      s = docReducer(s, { type: 'set', path: u.path, value: u.value });
+    }
+    expect(diffInputs(signed, inputs(s.draft!))).toEqual([]);
+    expect(getIn(s.draft, ['oils', 0])).toMatchObject({ kv40_mm2s: 220, viscosityIndex: 97 });
   });
 });

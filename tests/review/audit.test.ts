@@ -6,7 +6,7 @@ import { fingerprint } from '../../app/review/fingerprint';
 import { signReview, type SignoffDetails } from '../../app/review/signoff';
 import { parseReviewValue } from '../../app/review/parse';
 import { MAX_SIGNOFF_HISTORY, type Review } from '../../app/review/schema';
-import { changesSinceSigning, compareReviews } from '../../app/review/audit/compare';
+import { changesSinceSigning, compareReviews, comparisonJson } from '../../app/review/audit/compare';
 import { checkSignedState, inputsOf } from '../../app/review/audit/signedState';
 import { diffInputs } from '../../app/review/audit/diff';
 import { changeLine } from '../../app/review/audit/words';
@@ -120,6 +120,77 @@ describe('changes since signing', () => {
       j.gearPair.wheel.material = { youngsModulus_GPa: 206, poissonRatio: 0.3, thermalConductivity_WmK: 50, density_kgm3: 7800, specificHeat_JkgK: 470, structuralFactorXW: 1 };
     })).changes;
     expect(c.map((x) => changeLine(x))).toEqual(['Wheel: Material: Steel, case carburized → Custom material', 'ISO VG 320 EP mineral: Additive chemistry: EP, extreme pressure (DIN 51517-3 CLP) → AW, anti-wear (as DIN 51524-2 HLP)']);
+  });
+});
+
+describe('an input the editor empties with another edit is listed with that edit', () => {
+  // The editor drops a viscosity index the user did not type when KV40 or KV100 changes, so that
+  // ASTM D2270 computes it from the new pair (renderer/state/reviewState.ts): one edit, two keys.
+  const viscosityEdit = (j: any) => {
+    j.loadCases[1].oilTemperature_C = 75;
+    j.oils[0].kv40_mm2s = 240;
+    delete j.oils[0].viscosityIndex;
+  };
+
+  it('a new KV40 that leaves the VI to ASTM D2270 is one change, which names the VI', () => {
+    const s = signedDemo();
+    const since = changesSinceSigning(edited(s, viscosityEdit));
+    if (!('comparison' in since)) throw new Error(since.check.kind);
+    const c = since.comparison.changes;
+    expect(c.map((x) => [x.path, x.before, x.after])).toEqual([
+      ['loadCases[1].oilTemperature_C', 68, 75],
+      ['oils[0].kv40_mm2s', 220, 240],
+    ]);
+    expect(c[1]!.along?.map((x) => [x.path, x.before, x.after])).toEqual([['oils[0].viscosityIndex', 97, undefined]]);
+    expect(changeLine(c[1]!)).toBe('ISO VG 220 R&O mineral: Viscosity at 40 °C: 220 mm²/s → 240 mm²/s, with Viscosity index VI: 97 → computed by ASTM D2270');
+    // Nothing the fingerprint sees goes unnamed: the --json list gives the VI's path too.
+    expect((comparisonJson(since.comparison).changes as any[])[1].along).toEqual([{ path: 'oils[0].viscosityIndex', label: 'ISO VG 220 R&O mineral: Viscosity index VI', before: 97, after: null }]);
+  });
+
+  it('undoing that change puts back the KV40 and the VI, and the two undos return the review to Signed', async () => {
+    const { setIn } = await import('../../renderer/state/paths');
+    const { undoEdit } = await import('../../app/review/audit/undo');
+    const s = signedDemo();
+    const signedState = s.signoff!.signedState!;
+    let draft: any = JSON.parse(JSON.stringify(edited(s, viscosityEdit)));
+    for (const expected of [2, 1]) {
+      const p = parseReviewValue(draft);
+      if (!p.ok) throw new Error(JSON.stringify(p.issues));
+      const changes = diffInputs(signedState, inputsOf(p.review));
+      expect(changes).toHaveLength(expected);
+      const u = undoEdit(draft, signedState, changes[changes.length - 1]!);
+      draft = setIn(draft, u.path, u.value);
+    }
+    expect(draft.oils[0]).toMatchObject({ kv40_mm2s: 220, viscosityIndex: 97 });
+    const back = parseReviewValue(draft);
+    expect(back.ok && status(back.review, run(back.review))).toBe('signed');
+  });
+
+  it('on its own the change moves the KV40 and the VI together', async () => {
+    const { applyAlone } = await import('../../app/review/audit/attribute');
+    const s = signedDemo();
+    const e = edited(s, viscosityEdit);
+    const change = diffInputs(inputsOf(s), inputsOf(e))[1]!;
+    const alone = applyAlone(inputsOf(s), inputsOf(e), change) as any;
+    expect(alone.oils[0].kv40_mm2s).toBe(240);
+    expect('viscosityIndex' in alone.oils[0]).toBe(false);
+    expect(alone.loadCases[1].oilTemperature_C).toBe(68);
+  });
+
+  it('a VI emptied alone, a VI typed anew and a KV40 with its VI kept are each listed as they are', () => {
+    const s = signedDemo();
+    const cleared = compareReviews(s, edited(s, (j) => delete j.oils[0].viscosityIndex)).changes;
+    expect(cleared.map((x) => [x.path, x.along])).toEqual([['oils[0].viscosityIndex', undefined]]);
+    expect(changeLine(cleared[0]!)).toBe('ISO VG 220 R&O mineral: Viscosity index VI: 97 → computed by ASTM D2270');
+    const typed = compareReviews(s, edited(s, (j) => ((j.oils[0].kv40_mm2s = 240), (j.oils[0].viscosityIndex = 90)))).changes;
+    expect(typed.map((x) => [x.path, x.after, x.along])).toEqual([
+      ['oils[0].kv40_mm2s', 240, undefined],
+      ['oils[0].viscosityIndex', 90, undefined],
+    ]);
+    // another oil's VI is not this oil's consequence
+    const other = compareReviews(s, edited(s, (j) => ((j.oils[0].kv40_mm2s = 240), delete j.oils[1].viscosityIndex))).changes;
+    expect(other.map((x) => x.path)).toEqual(['oils[0].kv40_mm2s', 'oils[1].viscosityIndex']);
+    expect(other[0]!.along).toBeUndefined();
   });
 });
 

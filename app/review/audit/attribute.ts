@@ -11,24 +11,12 @@ import { run } from '../run';
 import { REVIEW_FORMAT, REVIEW_VERSION, type SignedState } from '../schema';
 import { matchEntries, type InputChange } from './diff';
 import { resultsMoved, type ResultMove } from './resultsMoved';
+import { setIn } from './setIn';
 
 /** Beyond this many changes only the results of all changes together are given (one run each). */
 export const MAX_ATTRIBUTED_CHANGES = 20;
 
 type Json = unknown;
-type Path = readonly (string | number)[];
-
-function setIn(root: Json, path: Path, value: Json): Json {
-  if (path.length === 0) return value;
-  const [head, ...rest] = path as [string | number, ...(string | number)[]];
-  const node = root as Record<string | number, Json>;
-  const child = setIn(node[head], rest, value);
-  if (Array.isArray(node)) return node.map((x, i) => (i === head ? child : x));
-  const copy: Record<string, Json> = { ...node };
-  if (child === undefined) delete copy[head];
-  else copy[head] = child;
-  return copy;
-}
 
 const listOf = (s: SignedState, name: string): Json[] => (s as unknown as Record<string, Json[]>)[name] ?? [];
 
@@ -42,7 +30,9 @@ export function applyAlone(before: SignedState, after: SignedState, change: Inpu
     case 'changed': {
       if (!named || typeof index !== 'number') return setIn(before, change.segments, change.after);
       const pair = matchEntries(b, a).pairs.find(([, j]) => j === index);
-      return setIn(before, [list, pair ? pair[0] : index, ...rest], change.after);
+      const at = pair ? pair[0] : index;
+      // What went with the change (a VI left to ASTM D2270) goes with it here too.
+      return (change.along ?? []).reduce((r: Json, x) => setIn(r, [list, at, ...x.segments.slice(2)], x.after), setIn(before, [list, at, ...rest], change.after));
     }
     case 'added': {
       const j = Math.min(index as number, b.length);

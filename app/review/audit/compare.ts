@@ -55,7 +55,8 @@ export function comparisonJson(c: Comparison): Record<string, unknown> {
   return {
     changes: c.changes.map((x, i) => {
       const alone = c.perChange?.[i];
-      return { kind: x.kind, path: x.path, panel: x.panel, label: x.label, before: x.before ?? null, after: x.after ?? null, resultsMovedAlone: alone ? ('moves' in alone ? alone.moves : alone.alone) : null };
+      const along = x.along?.map((a) => ({ path: a.path, label: a.label, before: a.before ?? null, after: a.after ?? null }));
+      return { kind: x.kind, path: x.path, panel: x.panel, label: x.label, before: x.before ?? null, after: x.after ?? null, ...(along ? { along } : {}), resultsMovedAlone: alone ? ('moves' in alone ? alone.moves : alone.alone) : null };
     }),
     verdictChanged: c.moved ? c.moved.verdictChanged : null,
     resultsChanged: c.moved ? c.moved.moves : null,

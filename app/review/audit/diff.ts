@@ -3,10 +3,12 @@
  * or two revisions). Complete by construction: the list is empty exactly when the canonical JSON
  * of the two (what the fingerprint hashes) is the same, so every change that turns a review into
  * "Changed since signing" is named. Load cases and oils are matched by name where the names are
- * unique, so inserting a case shows as one added case, not as every later case changed. Pure.
+ * unique, so inserting a case shows as one added case, not as every later case changed. An input
+ * the editor empties with another edit (followingInputs.ts) is named on that edit's line. Pure.
  */
 import { canonicalJson } from '../canonicalJson';
 import { fieldLabel, inputLabelOf, panelOf, type InputLabel, type InputPanel, type InputPath } from '../inputLabels';
+import { FOLLOWING_INPUTS } from '../followingInputs';
 import { formatPath } from '../parse';
 import type { SignedState } from '../schema';
 
@@ -25,6 +27,11 @@ export interface InputChange {
   /** Values in the file's units; undefined where the field was empty (or the entry absent). */
   readonly before: unknown;
   readonly after: unknown;
+  /**
+   * Inputs the editor emptied with this change (followingInputs.ts: a VI left to ASTM D2270 when
+   * a viscosity changed): named on this change's line and undone with it, not listed apart.
+   */
+  readonly along?: readonly InputChange[];
 }
 
 type Json = unknown;
@@ -38,6 +45,22 @@ type NamedList = keyof typeof LIST_WORDS;
 export function diffInputs(before: SignedState, after: SignedState): InputChange[] {
   const out: InputChange[] = [];
   walk(before, after, [], '', out);
+  return foldFollowing(out);
+}
+
+const inEntry = (c: InputChange, list: string, index: unknown, key: string | readonly string[]): boolean =>
+  c.kind === 'changed' && c.segments.length === 3 && c.segments[0] === list && c.segments[1] === index && (typeof key === 'string' ? c.segments[2] === key : key.includes(c.segments[2] as string));
+
+/** Each input the editor emptied because another in its entry changed goes with the first such change. */
+function foldFollowing(changes: InputChange[]): InputChange[] {
+  let out = changes;
+  for (const rule of FOLLOWING_INPUTS) {
+    for (const emptied of out.filter((c) => inEntry(c, rule.list, c.segments[1], rule.field) && c.before !== undefined && c.after === undefined)) {
+      const cause = out.find((c) => inEntry(c, rule.list, emptied.segments[1], rule.causes));
+      if (!cause) continue;
+      out = out.filter((c) => c !== emptied).map((c) => (c === cause ? { ...c, along: [...(c.along ?? []), emptied] } : c));
+    }
+  }
   return out;
 }
 

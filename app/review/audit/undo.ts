@@ -5,6 +5,7 @@
  */
 import type { InputPath } from '../inputLabels';
 import { matchEntries, type InputChange } from './diff';
+import { getIn, setIn } from './setIn';
 
 export interface UndoEdit {
   readonly path: InputPath;
@@ -21,8 +22,13 @@ const listAt = (root: Json, name: string): Json[] => {
 export function undoEdit(draft: Json, signed: Json, change: InputChange): UndoEdit {
   const list = String(change.segments[0]);
   switch (change.kind) {
-    case 'changed':
-      return { path: change.segments, value: change.before };
+    case 'changed': {
+      if (!change.along?.length) return { path: change.segments, value: change.before };
+      // One edit for the change and what went with it: their entry, each signed value put back.
+      const entry = change.segments.slice(0, 2);
+      const value = [change, ...change.along].reduce((e: Json, c) => setIn(e, c.segments.slice(2), c.before), getIn(draft, entry));
+      return { path: entry, value };
+    }
     case 'added': {
       const j = change.segments[1] as number;
       return { path: [list], value: listAt(draft, list).filter((_, k) => k !== j) };

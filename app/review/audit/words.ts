@@ -20,7 +20,7 @@ const EMPTY = 'empty';
 /** One value of a change (its before or its after) in words. */
 export function valueWords(change: InputChange, side: 'before' | 'after', num: NumberWords = fileUnits): string {
   const v = change[side];
-  if (v === undefined || v === null) return change.kind === 'added' || change.kind === 'removed' ? '—' : EMPTY;
+  if (v === undefined || v === null) return change.kind === 'added' || change.kind === 'removed' ? '—' : (change.field?.emptyWords ?? EMPTY);
   if (change.kind === 'reordered') return (v as string[]).join(', ');
   if (change.kind === 'added' || change.kind === 'removed') {
     const name = (v as { name?: unknown }).name;
@@ -34,14 +34,16 @@ export function valueWords(change: InputChange, side: 'before' | 'after', num: N
   return String(v);
 }
 
-/** One line for a reader: "label: before → after", or "added …" / "removed …". */
+/** One line for a reader: "label: before → after" (", with" what went with it), or "added …" / "removed …". */
 export function changeLine(change: InputChange, num: NumberWords = fileUnits): string {
   switch (change.kind) {
     case 'added':
       return `${change.label} added`;
     case 'removed':
       return `${change.label} removed`;
-    default:
-      return `${change.label}: ${valueWords(change, 'before', num)} → ${valueWords(change, 'after', num)}`;
+    default: {
+      const along = (change.along ?? []).map((a) => `, with ${a.field?.label ?? a.label}: ${valueWords(a, 'before', num)} → ${valueWords(a, 'after', num)}`);
+      return `${change.label}: ${valueWords(change, 'before', num)} → ${valueWords(change, 'after', num)}${along.join('')}`;
+    }
   }
 }

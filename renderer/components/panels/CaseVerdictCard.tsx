@@ -2,7 +2,7 @@ import type { CaseResult } from '../../../app/review/results';
 import type { UnitSystem } from '../../units/units';
 import { Quantity } from '../Quantity';
 import { VerdictBadge } from '../VerdictBadge';
-import { inDisplayUnits } from '../../units/inText';
+import { reasonInDisplayUnits } from '../../units/inText';
 import { CheckChip } from '../verdict/CheckChip';
 
 interface Props {
@@ -49,11 +49,14 @@ export function CaseVerdictCard({ result: c, units, governing }: Props) {
             Reasons ({v.reasons.length}){governing ? ' — governing case' : ''}
           </summary>
           <ol className="reasons" aria-label="Reasons">
-            {v.reasons.map((r) => (
-              <li key={r.rule}>
-                {inDisplayUnits(r.text, units)} <span className="reason__meta">Threshold: {inDisplayUnits(r.threshold, units)}. Source: {r.source}.</span>
-              </li>
-            ))}
+            {v.reasons.map((reason) => {
+              const r = reasonInDisplayUnits(reason, units);
+              return (
+                <li key={r.rule}>
+                  {r.text} <span className="reason__meta">Threshold: {r.threshold}. Source: {r.source}.</span>
+                </li>
+              );
+            })}
           </ol>
         </details>
       ) : null}

@@ -90,11 +90,16 @@ export function MeshChart({ spec, fileStem, units }: { readonly spec: ChartSpec;
   const chart = useRef<Chart<'line', { x: number; y: number | null }[]> | null>(null);
   const scheme = useColorScheme();
   const [png, setPng] = useState<string | null>(null);
+  // What the canvas shows: new results with the same numbers here (the velocities, after a torque edit) need no redraw.
+  const drawn = useRef<string | null>(null);
 
   // Drawn as the results are committed, before the browser paints them: the figures and the
   // charts reach the screen in the same frame.
   useLayoutEffect(() => {
     if (!canvas.current) return;
+    const key = `${scheme}|${JSON.stringify(spec)}`;
+    if (chart.current && drawn.current === key) return;
+    drawn.current = key;
     const config = configOf(spec);
     if (!chart.current) {
       chart.current = new Chart(canvas.current, config);

@@ -1,4 +1,4 @@
-import { useLayoutEffect, useRef } from 'react';
+import { useEffect, useRef } from 'react';
 import type { GradeFinderResult } from '../../../app/review/results';
 import { OKABE_ITO } from '../../../app/review/vocabulary';
 import { cssVar } from '../../hooks/useColorScheme';
@@ -18,8 +18,9 @@ type Pt = { x: number; y: number | null };
 export function GradeChart({ g, target }: { readonly g: GradeFinderResult; readonly target: number }) {
   const canvas = useRef<HTMLCanvasElement>(null);
   const chart = useRef<Chart<'line', Pt[]> | null>(null);
-  // Drawn with the commit, as the Mesh charts are (MeshChart.tsx).
-  useLayoutEffect(() => {
+  // Redrawn after the browser has painted the new results (a passive effect): the Mesh charts,
+  // drawn with the commit, come first; this one follows in the next task.
+  useEffect(() => {
     if (!canvas.current) return;
     const fg = cssVar('--fg') || '#1b1b1b';
     const grades = g.table.map((r) => r.isoVG);
@@ -64,7 +65,7 @@ export function GradeChart({ g, target }: { readonly g: GradeFinderResult; reado
     if (chart.current) updateInPlace(chart.current, config as never);
     else chart.current = new Chart(canvas.current, config as never);
   }, [g, target]);
-  useLayoutEffect(
+  useEffect(
     () => () => {
       chart.current?.destroy();
       chart.current = null;

@@ -64,7 +64,8 @@ export function TopBar(p: Props) {
           {p.dirty ? <span className="dirty" title="Unsaved edits" data-testid="unsaved">• unsaved</span> : null}
         </h1>
         <StatusBadge status={p.status} testId="review-status" />
-        {p.computing ? <span className="computing" role="status" data-testid="computing">computing…</span> : null}
+        {/* The slot keeps its width while empty, so the word coming and going never re-wraps the title and shifts the page. */}
+        <span className="computing-slot">{p.computing ? <span className="computing" role="status" data-testid="computing">computing…</span> : null}</span>
       </div>
       <nav className="topbar__commands" aria-label="Commands">
         <UnitSwitch units={p.units} onChange={p.onUnits} />

@@ -11,6 +11,9 @@ export interface DocumentView {
   readonly issues: readonly ReviewIssue[];
 }
 
+/** One empty list for every valid edition, so what depends on the issues (the sheet's messages, every input) does not change with each render. */
+const NO_ISSUES: readonly ReviewIssue[] = [];
+
 /** The review being edited, validated by the file's schema on every edit (a few kB: well under a millisecond). */
 export function useDocument(): DocumentView {
   const [doc, dispatch] = useReducer(docReducer, initialDocState);
@@ -19,6 +22,6 @@ export function useDocument(): DocumentView {
     doc,
     dispatch,
     review: parsed?.ok ? parsed.review : null,
-    issues: parsed && !parsed.ok ? parsed.issues : [],
+    issues: parsed && !parsed.ok ? parsed.issues : NO_ISSUES,
   };
 }

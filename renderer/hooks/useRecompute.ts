@@ -1,4 +1,4 @@
-import { startTransition, useEffect, useRef, useState } from 'react';
+import { startTransition, useLayoutEffect, useRef, useState } from 'react';
 import type { Results, ReviewStatus } from '../../app/review/results';
 import type { Review } from '../../app/review/schema';
 import type { RecomputeFailure } from '../worker/protocol';
@@ -16,25 +16,38 @@ export interface Computed {
   readonly millis: number | null;
 }
 
-/** Recompute each valid edition in the worker, latest wins; the UI thread only posts and receives. */
+interface Answered extends Omit<Computed, 'computing'> {
+  /** The newest edition the worker answered, with results or with an error. */
+  readonly answered: number;
+}
+
+const NONE: Answered = { results: null, status: null, edition: -1, error: null, answered: -1, millis: null };
+
+/**
+ * Recompute each valid edition in the worker, latest wins; the UI thread only posts and receives.
+ * The request goes out as the edit is committed (a layout effect), so the worker computes while
+ * the browser paints the edit, not after it.
+ */
 export function useRecompute(review: Review | null, edition: number, opened = 0): Computed {
-  const [state, setState] = useState<Computed>({ results: null, status: null, edition: -1, error: null, computing: false, millis: null });
+  const [state, setState] = useState<Answered>(NONE);
+  // The newest valid edition asked for, set while rendering (React's "state from the previous
+  // render"): "computing" follows from it without a second pass over the sheet after each edit.
+  const [asked, setAsked] = useState(-1);
+  if (review && edition !== asked) setAsked(edition);
   const client = useRef<RecomputeClient | null>(null);
-  const asked = useRef(-1);
   // Answers for editions before the review was opened belong to the previous review: dropped.
   const floor = useRef(-1);
   const latest = useRef(edition);
   latest.current = edition;
 
-  useEffect(() => {
+  useLayoutEffect(() => {
     const c = new RecomputeClient((res) => {
       if (res.edition < floor.current) return;
-      const done = res.edition >= asked.current;
       startTransition(() =>
         setState((s) =>
           res.ok
-            ? { results: res.results, status: res.status, edition: res.edition, error: null, computing: !done, millis: res.millis }
-            : { ...s, error: res.error, computing: !done },
+            ? { results: res.results, status: res.status, edition: res.edition, error: null, answered: Math.max(s.answered, res.edition), millis: res.millis }
+            : { ...s, error: res.error, answered: Math.max(s.answered, res.edition) },
         ),
       );
     });
@@ -45,18 +58,19 @@ export function useRecompute(review: Review | null, edition: number, opened = 0)
     };
   }, []);
 
-  // Another review opened: the last one's results are not "the last valid entry" of this one.
-  useEffect(() => {
+  // Another review opened: the last one's results are not "the last valid entry" of this one, and
+  // what was asked before it is no longer awaited (its answers are dropped).
+  useLayoutEffect(() => {
     floor.current = latest.current;
-    setState((s) => (s.results || s.error ? { results: null, status: null, edition: -1, error: null, computing: false, millis: null } : s));
+    const done = floor.current - 1;
+    setState((s) => (s.results || s.error ? { ...NONE, answered: Math.max(s.answered, done) } : s.answered >= done ? s : { ...s, answered: done }));
   }, [opened]);
 
-  useEffect(() => {
+  useLayoutEffect(() => {
     if (!review || !client.current) return;
-    asked.current = edition;
-    setState((s) => ({ ...s, computing: true }));
     client.current.request({ edition, review });
   }, [review, edition]);
 
-  return state;
+  const { answered, ...shown } = state;
+  return { ...shown, computing: asked > answered };
 }

@@ -1,8 +1,9 @@
-import { useEffect, useRef, useState } from 'react';
+import { useLayoutEffect, useRef, useState } from 'react';
 import type { ChartConfiguration } from 'chart.js';
 import { cssVar, useColorScheme } from '../../hooks/useColorScheme';
 import { formatResult } from '../../units/format';
 import { Chart, registerCharts } from './chartSetup';
+import { updateInPlace } from './chartUpdate';
 import { summarise, type ChartSpec } from './series';
 import { toDisplay, unitLabel, type UnitSystem } from '../../units/units';
 
@@ -89,21 +90,26 @@ export function MeshChart({ spec, fileStem, units }: { readonly spec: ChartSpec;
   const chart = useRef<Chart<'line', { x: number; y: number | null }[]> | null>(null);
   const scheme = useColorScheme();
   const [png, setPng] = useState<string | null>(null);
+  // What the canvas shows: new results with the same numbers here (the velocities, after a torque edit) need no redraw.
+  const drawn = useRef<string | null>(null);
 
-  useEffect(() => {
+  // Drawn as the results are committed, before the browser paints them: the figures and the
+  // charts reach the screen in the same frame.
+  useLayoutEffect(() => {
     if (!canvas.current) return;
+    const key = `${scheme}|${JSON.stringify(spec)}`;
+    if (chart.current && drawn.current === key) return;
+    drawn.current = key;
     const config = configOf(spec);
     if (!chart.current) {
       chart.current = new Chart(canvas.current, config);
     } else {
-      chart.current.data = config.data;
-      chart.current.options = config.options ?? {};
-      chart.current.update('none');
+      updateInPlace(chart.current, config);
     }
     setPng(null);
   }, [spec, scheme]);
 
-  useEffect(
+  useLayoutEffect(
     () => () => {
       chart.current?.destroy();
       chart.current = null;

@@ -1,4 +1,4 @@
-import { memo, useEffect, useId, useMemo, useState } from 'react';
+import { memo, useId, useLayoutEffect, useMemo, useState } from 'react';
 import type { CaseResult, PlanetaryMesh, Results } from '../../../app/review/results';
 import { MESH_WORDS, MICROPITTING_LABELS } from '../../../app/review/vocabulary';
 import type { Review } from '../../../app/review/schema';
@@ -62,8 +62,8 @@ function MeshPanelView({ results, review = null, limits, units }: Props) {
   const rows = groups[index]?.rows;
   const c = rows?.[0];
   const specs = useMemo(() => (rows && gear && cases ? meshCharts(rows, gear, limits, units, cases) : []), [rows, gear, cases, limits, units]);
-  // The charts (children) have drawn their new data by now: the end of the edit-to-chart latency.
-  useEffect(() => {
+  // The charts (children, whose layout effects run first) have drawn their new data by now: the end of the edit-to-chart latency.
+  useLayoutEffect(() => {
     if (specs.length) performance.mark('chart-updated');
   }, [specs]);
   if (!results || !c || !rows) return <Panel id="mesh" title="Mesh"><p className="note">No results yet.</p></Panel>;

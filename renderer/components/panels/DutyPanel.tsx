@@ -1,4 +1,4 @@
-import { useEffect, useRef } from 'react';
+import { memo, useEffect, useRef } from 'react';
 import { useSheet } from '../../state/context';
 import { getIn } from '../../state/paths';
 import { newLoadCase } from '../../state/templates';
@@ -13,7 +13,7 @@ function sharesOf(cases: readonly unknown[]): number[] | null {
 }
 
 /** The load cases of the duty, and whether their shares of time add up to 1. */
-export function DutyPanel() {
+function DutyPanelView() {
   const { draft, dispatch } = useSheet();
   const cases = (getIn(draft, ['loadCases']) as unknown[] | undefined) ?? [];
   const shares = sharesOf(cases);
@@ -62,3 +62,6 @@ export function DutyPanel() {
     </Panel>
   );
 }
+
+/** Inputs only: re-renders when the draft, units or messages change (the sheet's context), not when results arrive. */
+export const DutyPanel = memo(DutyPanelView);

@@ -1,3 +1,4 @@
+import { memo } from 'react';
 import type { Results } from '../../../app/review/results';
 import { COMPONENTS } from '../../../app/review/schema';
 import { COMPONENT_WORDS, fieldLabel } from '../../../app/review/inputLabels';
@@ -23,14 +24,26 @@ const MM_PER_INCH = 25.4;
 
 /** The gear set, its kind chosen first: a pair (external or internal) or a planetary stage, with the derived geometry. */
 export function GearPairPanel({ results, stale }: { readonly results: Results | null; readonly stale: boolean }) {
-  const { draft, dispatch, units } = useSheet();
+  const { units } = useSheet();
+  const gear = results?.gear ?? null;
+  return (
+    <Panel id="gear-pair" title="Gear set">
+      <GearSetFields />
+      {results?.planetary ? <PlanetaryDerived results={results} stale={stale} /> : null}
+      {gear && !results?.planetary ? <DerivedGeometry gear={gear} title="Derived geometry" stale={stale} units={units} /> : null}
+    </Panel>
+  );
+}
+
+/** The gear set's inputs: memoised, so new results re-render only the derived geometry below them. */
+const GearSetFields = memo(function GearSetFields() {
+  const { draft, dispatch } = useSheet();
   const kind = gearSetKind(draft);
   const root = gearSetRoot(draft);
   const components = (getIn(draft, [root, 'components']) as string[] | undefined) ?? [];
   const gp = [root] as const;
-  const gear = results?.gear ?? null;
   return (
-    <Panel id="gear-pair" title="Gear set">
+    <>
       <SelectField path={['gearSet']} label="Kind of gear set" options={KINDS} value={kind} onValue={(k) => dispatch({ type: 'setGearSet', kind: k })} />
       {kind === 'planetary' ? <PlanetaryFields /> : <PairFields internal={kind === 'internal'} />}
       <fieldset className="subgroup">
@@ -49,11 +62,9 @@ export function GearPairPanel({ results, stale }: { readonly results: Results | 
           ))}
         </div>
       </fieldset>
-      {results?.planetary ? <PlanetaryDerived results={results} stale={stale} /> : null}
-      {gear && !results?.planetary ? <DerivedGeometry gear={gear} title="Derived geometry" stale={stale} units={units} /> : null}
-    </Panel>
+    </>
   );
-}
+});
 
 /** The inputs of a pair, external or internal (the wheel a ring). */
 function PairFields({ internal }: { readonly internal: boolean }) {

@@ -1,3 +1,4 @@
+import { memo } from 'react';
 import { BASE_OILS, CHEMISTRIES } from '../../../app/engine/oil/types';
 import type { OilSummary } from '../../../app/review/results';
 import { FZG_STAGES, type FzgStage } from '../../../app/review/schema';
@@ -27,7 +28,7 @@ const STAGES: readonly (readonly [FzgStage, string])[] = [...FZG_STAGES.map((s) 
 const MICROPITTING_STAGES: readonly (readonly [number | string, string])[] = [['', 'not given'], ...[5, 6, 7, 8, 9, 10].map((s) => [s, String(s)] as const), ['>10', 'above 10']];
 
 /** One candidate oil. */
-export function OilEditor({ index, summary }: { readonly index: number; readonly summary: OilSummary | null }) {
+function OilEditorView({ index, summary }: { readonly index: number; readonly summary: OilSummary | null }) {
   const { draft, dispatch, units } = useSheet();
   const p = ['oils', index] as const;
   const name = getIn(draft, [...p, 'name']);
@@ -94,3 +95,10 @@ export function OilEditor({ index, summary }: { readonly index: number; readonly
     </fieldset>
   );
 }
+
+/** The figures shown from a summary: another results object with the same ones re-renders nothing. */
+const sameSummary = (a: OilSummary | null, b: OilSummary | null) =>
+  a === b || (a !== null && b !== null && a.viscosityIndex === b.viscosityIndex && a.viscosityIndexSource === b.viscosityIndexSource && a.isoVG === b.isoVG && a.lubricantFactorXL === b.lubricantFactorXL);
+
+/** Re-renders on its inputs (the sheet's context) and when its oil's shown figures change, not on every new results object. */
+export const OilEditor = memo(OilEditorView, (a, b) => a.index === b.index && sameSummary(a.summary, b.summary));

@@ -1,3 +1,4 @@
+import { memo } from 'react';
 import { FILM_FORMULAS } from '../../../app/review/schema';
 import { useSheet } from '../../state/context';
 import { getIn } from '../../state/paths';
@@ -12,7 +13,7 @@ import { Panel } from './Panel';
 const STAGES = Array.from({ length: 12 }, (_, i) => [i + 1, String(i + 1)] as const);
 
 /** The review's thresholds and method choices. */
-export function PolicyPanel() {
+function PolicyPanelView() {
   const { draft, dispatch } = useSheet();
   const p = ['policy'] as const;
   const thermal = getIn(draft, [...p, 'thermalFilmCorrection']);
@@ -45,3 +46,6 @@ export function PolicyPanel() {
     </Panel>
   );
 }
+
+/** Inputs only: re-renders when the draft, units or messages change (the sheet's context), not when results arrive. */
+export const PolicyPanel = memo(PolicyPanelView);

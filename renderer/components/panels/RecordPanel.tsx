@@ -1,3 +1,4 @@
+import { memo } from 'react';
 import { useSheet } from '../../state/context';
 import { NumberField } from '../fields/NumberField';
 import { TextField } from '../fields/TextField';
@@ -10,7 +11,7 @@ export function todayIso(now = new Date()): string {
 }
 
 /** The record's own identity: title, review id, revision, date and notes (the record's cover and file name use them). */
-export function RecordPanel() {
+function RecordPanelView() {
   const { dispatch } = useSheet();
   return (
     <Panel
@@ -32,3 +33,6 @@ export function RecordPanel() {
     </Panel>
   );
 }
+
+/** Inputs only: re-renders when the draft, units or messages change (the sheet's context), not when results arrive. */
+export const RecordPanel = memo(RecordPanelView);

@@ -1,6 +1,7 @@
 import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
 import type { Bridge, MenuCommand } from '../app/bridge/contract';
 import type { ReviewStatus } from '../app/review/results';
+import type { Review } from '../app/review/schema';
 import { GearPairPanel } from './components/panels/GearPairPanel';
 import { DutyPanel } from './components/panels/DutyPanel';
 import { OilsPanel } from './components/panels/OilsPanel';
@@ -45,8 +46,11 @@ type Recovery = { text: string; handle: string | null; name: string | null; save
 
 /** The sheet: inputs on the left, findings on the right; state in a reducer, physics in a worker. */
 export function App({ bridge }: { readonly bridge: Bridge }) {
-  const { doc, dispatch, review, issues } = useDocument();
+  // An edit's recompute starts as it is dispatched, before the sheet renders it.
+  const early = useRef<(r: Review, e: number) => void>(() => undefined);
+  const { doc, dispatch, review, issues } = useDocument(useCallback((r: Review, e: number) => early.current(r, e), []));
   const computed = useRecompute(review, doc.edition, doc.opened);
+  early.current = computed.request;
   const [units, setUnits] = useState<UnitSystem>('si');
   const [signing, setSigning] = useState(false);
   const [compareRequest, setCompareRequest] = useState(0);

@@ -64,8 +64,6 @@ export function TopBar(p: Props) {
           {p.dirty ? <span className="dirty" title="Unsaved edits" data-testid="unsaved">• unsaved</span> : null}
         </h1>
         <StatusBadge status={p.status} testId="review-status" />
-        {/* The slot keeps its width while empty, so the word coming and going never re-wraps the title and shifts the page. */}
-        <span className="computing-slot">{p.computing ? <span className="computing" role="status" data-testid="computing">computing…</span> : null}</span>
       </div>
       <nav className="topbar__commands" aria-label="Commands">
         <UnitSwitch units={p.units} onChange={p.onUnits} />
@@ -88,6 +86,8 @@ export function TopBar(p: Props) {
         <span id={whyId} className="sr-only">{why ?? ''}</span>
       </nav>
       <div className="topbar__progress" aria-live="polite" data-testid="progress">
+        {/* Here, in the line kept for notices, not beside the title: its coming and going never re-wraps the title and shifts the page. */}
+        {p.computing ? <span className="computing" data-testid="computing">computing…</span> : null}
         {p.busy ? (
           <>
             {p.busy === 'record' && p.progress ? <progress aria-label={BUSY_WORDS[p.busy]} value={p.progress.done} max={p.progress.total} /> : <progress aria-label={BUSY_WORDS[p.busy]} />} {BUSY_WORDS[p.busy]}

@@ -1,4 +1,4 @@
-import { startTransition, useLayoutEffect, useRef, useState } from 'react';
+import { startTransition, useCallback, useLayoutEffect, useRef, useState } from 'react';
 import type { Results, ReviewStatus } from '../../app/review/results';
 import type { Review } from '../../app/review/schema';
 import type { RecomputeFailure } from '../worker/protocol';
@@ -16,6 +16,11 @@ export interface Computed {
   readonly millis: number | null;
 }
 
+export interface Recompute extends Computed {
+  /** Send an edition now (ahead of its render); each edition is sent once, older ones never. */
+  readonly request: (review: Review, edition: number) => void;
+}
+
 interface Answered extends Omit<Computed, 'computing'> {
   /** The newest edition the worker answered, with results or with an error. */
   readonly answered: number;
@@ -25,10 +30,11 @@ const NONE: Answered = { results: null, status: null, edition: -1, error: null, 
 
 /**
  * Recompute each valid edition in the worker, latest wins; the UI thread only posts and receives.
- * The request goes out as the edit is committed (a layout effect), so the worker computes while
- * the browser paints the edit, not after it.
+ * An edit's request goes out as it is dispatched (`request`, see useDocument's onValidEdit), any
+ * other at the latest as its render commits (a layout effect): the worker computes while the
+ * sheet renders and paints the edit, not after.
  */
-export function useRecompute(review: Review | null, edition: number, opened = 0): Computed {
+export function useRecompute(review: Review | null, edition: number, opened = 0): Recompute {
   const [state, setState] = useState<Answered>(NONE);
   // The newest valid edition asked for, set while rendering (React's "state from the previous
   // render"): "computing" follows from it without a second pass over the sheet after each edit.
@@ -66,11 +72,18 @@ export function useRecompute(review: Review | null, edition: number, opened = 0)
     setState((s) => (s.results || s.error ? { ...NONE, answered: Math.max(s.answered, done) } : s.answered >= done ? s : { ...s, answered: done }));
   }, [opened]);
 
+  // The newest edition sent: one sent early (`request`, from the edit's dispatch) is not sent again.
+  const sent = useRef(-1);
+  const request = useCallback((r: Review, e: number) => {
+    if (!client.current || e <= sent.current) return;
+    sent.current = e;
+    client.current.request({ edition: e, review: r });
+  }, []);
+
   useLayoutEffect(() => {
-    if (!review || !client.current) return;
-    client.current.request({ edition, review });
-  }, [review, edition]);
+    if (review) request(review, edition);
+  }, [review, edition, request]);
 
   const { answered, ...shown } = state;
-  return { ...shown, computing: asked > answered };
+  return { ...shown, computing: asked > answered, request };
 }

@@ -1,33 +1,14 @@
 import { describe, expect, it } from 'vitest';
-import { readFileSync } from 'node:fs';
+import { demoCaseInput, demoOils, demoPair } from './demoCase';
 import { analyseCase } from '../../../app/engine/mesh/analyseCase';
-import { gearPairGeometry } from '../../../app/engine/geometry/gearPair';
 import { mapAxes, operatingMap, VERDICT_CODES } from '../../../app/engine/sweep/operatingMap';
-import { micrometres, kelvinToCelsius } from '../../../app/engine/units';
-import { parseReviewValue } from '../../../app/review/parse';
-import { gearPairInput, materialOf } from '../../../app/review/toEngine';
-import { engineDutyOf, enginePolicyOf } from '../../../app/review/engineInputs';
-import { oilModelsOf } from '../../../app/review/oils';
+import { kelvinToCelsius } from '../../../app/engine/units';
 import { decideVerdict } from '../../../app/engine/verdict/decide';
 import { run } from '../../../app/review/run';
-import { asPairReview, type PairReview } from '../../../app/review/schema';
 
-const raw = JSON.parse(readFileSync('assets/demo/harrow-creek-crusher-hs-pair.flankfilm.json', 'utf8'));
-const p = parseReviewValue(raw);
-if (!p.ok) throw new Error('demo invalid');
-const r = asPairReview(p.review) as PairReview;
-const oils = oilModelsOf(r.oils);
-const input = (li: number, oi: number) => ({
-  geometry: gearPairGeometry(gearPairInput(r.gearPair)),
-  pinion: materialOf(r.gearPair.pinion.material),
-  wheel: materialOf(r.gearPair.wheel.material),
-  roughnessRa1: micrometres(r.gearPair.pinion.roughnessRa_um),
-  roughnessRa2: micrometres(r.gearPair.wheel.roughnessRa_um),
-  duty: engineDutyOf(r, li),
-  oil: oils[oi] ?? null,
-  policy: enginePolicyOf(r.policy),
-  caseField: `loadCases[${li}]`,
-});
+const r = demoPair;
+const oils = demoOils;
+const input = demoCaseInput;
 
 describe('operating map (oil temperature × load)', () => {
   it('a cell at the case temperature and 100 % load equals the full case analysis', () => {

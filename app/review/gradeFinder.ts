@@ -95,7 +95,12 @@ function gradeModel(vg: number, vi: number, oil: ReviewOil): OilModel | null {
   }
   let model = byGrade.get(vg);
   if (model === undefined) {
-    const kv100 = gradeKv100(vg, vi);
+    let kv100: SquareMetresPerSecond | null;
+    try {
+      kv100 = kv100ForViscosityIndex(centistokes(vg), vi);
+    } catch {
+      kv100 = null; // ASTM D2270 reaches no KV100 for this VI at this grade
+    }
     model = kv100 === null ? null : cachedOilModel({ kv40: centistokes(vg), kv100, density15: oil.source.density15_kgm3 as KilogramsPerCubicMetre, baseOil: oil.baseOil }, oil.field);
     byGrade.set(vg, model);
   }
@@ -104,19 +109,3 @@ function gradeModel(vg: number, vi: number, oil: ReviewOil): OilModel | null {
 
 /** Grade models per oil field, base oil, density and VI, then per grade: a recompute asks for the same ones again. */
 const gradeModels = new Map<string, Map<number, OilModel | null>>();
-
-/** KV100 of grade `vg` at viscosity index `vi` (ASTM D2270 inverted), null when unreachable; kept, as a recompute asks the same again. */
-const kv100s = new Map<string, SquareMetresPerSecond | null>();
-function gradeKv100(vg: number, vi: number): SquareMetresPerSecond | null {
-  const key = `${vg}|${vi}`;
-  let kv100 = kv100s.get(key);
-  if (kv100 !== undefined) return kv100;
-  try {
-    kv100 = kv100ForViscosityIndex(centistokes(vg), vi);
-  } catch {
-    kv100 = null;
-  }
-  if (kv100s.size >= 4096) kv100s.clear();
-  kv100s.set(key, kv100);
-  return kv100;
-}

@@ -293,9 +293,7 @@ export function cellLambdaMin(sc: SweepCase, model: OilModel, tOilC: number, f =
 export function evaluateCell(sc: SweepCase, so: SweepOil, tOilC: number, f: number, out: CellResult): CellResult {
   const { policy } = sc.input;
   const tOil = celsiusToKelvin(tOilC);
-  const { mu, f75, flashMax, thetaM } = cellFilm(sc, so.oil.model, tOil, f);
-  const lmin = film.lambdaMin;
-  const lgf = film.lambdaGFMin;
+  const { mu, f75, flashMax, thetaM, lambdaMin: lmin, lambdaGFMin: lgf } = cellFilm(sc, so.oil.model, tOil, f);
   const rise = thetaM + flashMax - tOil;
   const flashInt = mu * f75 * sc.intFlashPerMu;
   const thetaIntC = tOilC + (INTEGRAL_WEIGHT_BULK * sc.xMp + INTEGRAL_WEIGHT_FLASH) * flashInt;

@@ -13,19 +13,9 @@ import type { CaseResult, PathSeries, PointResult, Results } from './results';
 /** The columns of one analysis, in display units. Arrays already in display units are shared with the engine's, not copied. */
 export function pathSeriesOf(a: CaseAnalysis): PathSeries {
   const m = a.mechanics;
-  const n = m.n;
-  const { A, E } = a.input.geometry.points;
-  const position_mm = new Float64Array(n);
-  const pathFraction = new Float64Array(n);
-  const hertzStress_MPa = new Float64Array(n);
-  for (let i = 0; i < n; i++) {
-    const s = m.position[i] as number;
-    position_mm[i] = toMillimetres(s as Metres);
-    pathFraction[i] = (s - A) / (E - A);
-    hertzStress_MPa[i] = toMegapascals(m.hertzPressure[i] as Pascals);
-  }
+  const { position_mm, pathFraction, hertzStress_MPa } = mechanicsColumns(a);
   return {
-    n,
+    n: m.n,
     position_mm,
     pathFraction,
     loadShare: m.loadShare,
@@ -37,9 +27,34 @@ export function pathSeriesOf(a: CaseAnalysis): PathSeries {
     slideToRoll: m.slideToRoll,
     specificSlidingPinion: m.specificSliding1,
     specificSlidingWheel: m.specificSliding2,
-    film: a.film ? filmColumns(a.film, n) : null,
-    heat: a.heat ? heatColumns(a.heat, n) : null,
+    film: a.film ? filmColumns(a.film, m.n) : null,
+    heat: a.heat ? heatColumns(a.heat, m.n) : null,
   };
+}
+
+type MechanicsColumns = Pick<PathSeries, 'position_mm' | 'pathFraction' | 'hertzStress_MPa'>;
+
+/** Converted once per load case: its oils' analyses share the mechanics, and so their columns (read only). */
+const convertedMechanics = new WeakMap<CaseAnalysis['mechanics'], MechanicsColumns>();
+
+function mechanicsColumns(a: CaseAnalysis): MechanicsColumns {
+  const m = a.mechanics;
+  const known = convertedMechanics.get(m);
+  if (known) return known;
+  const n = m.n;
+  const { A, E } = a.input.geometry.points;
+  const position_mm = new Float64Array(n);
+  const pathFraction = new Float64Array(n);
+  const hertzStress_MPa = new Float64Array(n);
+  for (let i = 0; i < n; i++) {
+    const s = m.position[i] as number;
+    position_mm[i] = toMillimetres(s as Metres);
+    pathFraction[i] = (s - A) / (E - A);
+    hertzStress_MPa[i] = toMegapascals(m.hertzPressure[i] as Pascals);
+  }
+  const columns = { position_mm, pathFraction, hertzStress_MPa };
+  convertedMechanics.set(m, columns);
+  return columns;
 }
 
 function filmColumns(film: NonNullable<CaseAnalysis['film']>, n: number): NonNullable<PathSeries['film']> {

@@ -1,10 +1,10 @@
 import type { WarningSink } from '../diagnostics';
-import { blokFlashTemperature } from '../heat/blokFlash';
 import { bulkTemperature, LUBRICATION_FACTOR_XS } from '../heat/bulkTemperature';
 import { helicalLoadFactor } from '../heat/helicalLoadFactor';
 import { isoMeanFriction } from '../heat/isoFriction';
 import { materialContactCoefficient } from '../materials';
-import type { Kelvin, KelvinDifference, Metres, MetresPerSecond, NewtonsPerMetre } from '../units';
+import type { Kelvin, KelvinDifference, Metres, MetresPerSecond } from '../units';
+import { blokFlashAlongPath } from './blokAlongPath';
 import type { MeshMechanics } from './mechanics';
 import type { CaseInput } from './types';
 
@@ -57,12 +57,7 @@ export function temperaturesAlongPath(input: CaseInput, m: MeshMechanics, sink: 
   const bM1 = materialContactCoefficient(input.pinion);
   const bM2 = materialContactCoefficient(input.wheel);
   const flash = new Float64Array(m.n);
-  let flashMax = 0;
-  for (let i = 0; i < m.n; i++) {
-    const f = blokFlashTemperature(friction, m.lineLoad[i] as NewtonsPerMetre, m.v1[i] as MetresPerSecond, m.v2[i] as MetresPerSecond, bM1, bM2, m.hertzSemiWidth[i] as Metres);
-    flash[i] = f;
-    if (f > flashMax) flashMax = f;
-  }
+  const flashMax = blokFlashAlongPath(friction, m, bM1, bM2, flash);
   const thetaM = bulkTemperature(tOil, flashMax as KelvinDifference, LUBRICATION_FACTOR_XS[input.duty.lubrication], input.duty.pinionMeshes);
   const contact = new Float64Array(m.n);
   let contactMax = -Infinity;

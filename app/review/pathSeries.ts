@@ -4,6 +4,7 @@
  * a table. Both directions use the same unit conversions, so a point read from the columns is the
  * number the engine gave, converted once.
  */
+import { ColumnBlock } from '../engine/columnBlock';
 import type { CaseAnalysis } from '../engine/mesh/analyseCase';
 import { REGIMES } from '../engine/mesh/film';
 import type { Regime } from '../engine/film/regime';
@@ -14,6 +15,8 @@ import type { CaseResult, PathSeries, PointResult, Results } from './results';
 export function pathSeriesOf(a: CaseAnalysis): PathSeries {
   const m = a.mechanics;
   const { position_mm, pathFraction, hertzStress_MPa } = mechanicsColumns(a);
+  // The film's two columns and the heat's one, from one buffer.
+  const block = new ColumnBlock(m.n, (a.film ? 2 : 0) + (a.heat ? 1 : 0));
   return {
     n: m.n,
     position_mm,
@@ -27,8 +30,8 @@ export function pathSeriesOf(a: CaseAnalysis): PathSeries {
     slideToRoll: m.slideToRoll,
     specificSlidingPinion: m.specificSliding1,
     specificSlidingWheel: m.specificSliding2,
-    film: a.film ? filmColumns(a.film, m.n) : null,
-    heat: a.heat ? heatColumns(a.heat, m.n) : null,
+    film: a.film ? filmColumns(a.film, m.n, block) : null,
+    heat: a.heat ? heatColumns(a.heat, m.n, block) : null,
   };
 }
 
@@ -43,9 +46,10 @@ function mechanicsColumns(a: CaseAnalysis): MechanicsColumns {
   if (known) return known;
   const n = m.n;
   const { A, E } = a.input.geometry.points;
-  const position_mm = new Float64Array(n);
-  const pathFraction = new Float64Array(n);
-  const hertzStress_MPa = new Float64Array(n);
+  const block = new ColumnBlock(n, 3);
+  const position_mm = block.float64();
+  const pathFraction = block.float64();
+  const hertzStress_MPa = block.float64();
   for (let i = 0; i < n; i++) {
     const s = m.position[i] as number;
     position_mm[i] = toMillimetres(s as Metres);
@@ -57,9 +61,9 @@ function mechanicsColumns(a: CaseAnalysis): MechanicsColumns {
   return columns;
 }
 
-function filmColumns(film: NonNullable<CaseAnalysis['film']>, n: number): NonNullable<PathSeries['film']> {
-  const filmThicknessMin_um = new Float64Array(n);
-  const filmThicknessCentral_um = new Float64Array(n);
+function filmColumns(film: NonNullable<CaseAnalysis['film']>, n: number, block: ColumnBlock): NonNullable<PathSeries['film']> {
+  const filmThicknessMin_um = block.float64();
+  const filmThicknessCentral_um = block.float64();
   for (let i = 0; i < n; i++) {
     filmThicknessMin_um[i] = toMicrometres(film.hMin[i] as Metres);
     filmThicknessCentral_um[i] = toMicrometres(film.hCentral[i] as Metres);
@@ -67,8 +71,8 @@ function filmColumns(film: NonNullable<CaseAnalysis['film']>, n: number): NonNul
   return { filmThicknessMin_um, filmThicknessCentral_um, lambda: film.lambda, lambdaGF: film.lambdaGF, regime: film.regime };
 }
 
-function heatColumns(heat: NonNullable<CaseAnalysis['heat']>, n: number): NonNullable<PathSeries['heat']> {
-  const contactTemperature_C = new Float64Array(n);
+function heatColumns(heat: NonNullable<CaseAnalysis['heat']>, n: number, block: ColumnBlock): NonNullable<PathSeries['heat']> {
+  const contactTemperature_C = block.float64();
   for (let i = 0; i < n; i++) contactTemperature_C[i] = kelvinToCelsius(heat.contact[i] as Kelvin);
   return { flashTemperature_K: heat.flash, contactTemperature_C };
 }

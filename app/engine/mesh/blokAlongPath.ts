@@ -1,3 +1,4 @@
+import { ColumnBlock } from '../columnBlock';
 import { requirePositive } from '../diagnostics';
 import { BLOK_CONSTANT_SEMI_WIDTH } from '../heat/blokFlash';
 import { requireNonNegative } from '../film/inputChecks';
@@ -29,8 +30,9 @@ function blokPath(m: MeshMechanics, bM1: ThermalContactCoefficient, bM2: Thermal
   if (known && known.bM1 === bM1 && known.bM2 === bM2) return known;
   requirePositive('bM1', bM1, 'W·s^0.5/(m²·K)');
   requirePositive('bM2', bM2, 'W·s^0.5/(m²·K)');
-  const slip = new Float64Array(m.n);
-  const denominator = new Float64Array(m.n);
+  const block = new ColumnBlock(m.n, 2);
+  const slip = block.float64();
+  const denominator = block.float64();
   for (let i = 0; i < m.n; i++) {
     const w = m.lineLoad[i] as number, v1 = m.v1[i] as number, v2 = m.v2[i] as number, bH = m.hertzSemiWidth[i] as number;
     requireNonNegative('w', w, 'N/m');

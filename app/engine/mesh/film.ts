@@ -1,3 +1,4 @@
+import { ColumnBlock } from '../columnBlock';
 import type { WarningSink } from '../diagnostics';
 import { LINE_CONTACT_FIT_LIMITS, warnOutsideLineContactFit } from '../film/lineContactRange';
 import { classifyRegime, type Regime } from '../film/regime';
@@ -55,12 +56,13 @@ const LN_U_MIN = LN(uMin), LN_U_MAX = LN(uMax), LN_W_MIN = LN(wMin), LN_W_MAX = 
 export function filmAlongPath(input: CaseInput, m: MeshMechanics, oil: OilState, sink: WarningSink): FilmAlongPath {
   const { policy } = input;
   const n = m.n;
-  const hMin = new Float64Array(n);
-  const hCentral = new Float64Array(n);
-  const thermalFactor = new Float64Array(n);
-  const lambda = new Float64Array(n);
-  const lambdaGF = new Float64Array(n);
-  const regime = new Uint8Array(n);
+  const block = new ColumnBlock(n, 5, 1);
+  const hMin = block.float64();
+  const hCentral = block.float64();
+  const thermalFactor = block.float64();
+  const lambda = block.float64();
+  const lambdaGF = block.float64();
+  const regime = block.uint8();
   const ra1 = input.roughnessRa1;
   const ra2 = input.roughnessRa2;
   const sigma = (RQ_PER_RA_GAUSSIAN * Math.sqrt(ra1 * ra1 + ra2 * ra2)) as Metres;

@@ -1,3 +1,4 @@
+import { ColumnBlock } from '../columnBlock';
 import type { GearPairGeometry } from '../geometry/types';
 import { samplePath } from '../kinematics/pathSampling';
 import { emptyFlankVelocities, flankVelocities } from '../kinematics/flankVelocities';
@@ -65,7 +66,8 @@ export function normalReducedRadius(g: GearPairGeometry, s: number, cosBb: numbe
  */
 export function meshMechanics(g: GearPairGeometry, pinion: Material, wheel: Material, duty: MeshDuty, n: number): MeshMechanics {
   const position = samplePath(g.points, n);
-  const arrays = () => new Float64Array(position.length);
+  const block = new ColumnBlock(position.length, 12);
+  const arrays = () => block.float64();
   const xg = arrays(), w = arrays(), rr = arrays(), pH = arrays(), bH = arrays();
   const v1 = arrays(), v2 = arrays(), vs = arrays(), vg = arrays(), srr = arrays(), z1 = arrays(), z2 = arrays();
   const eStar = contactModulus(pinion.youngsModulus, pinion.poissonRatio, wheel.youngsModulus, wheel.poissonRatio);

@@ -1,3 +1,4 @@
+import { ColumnBlock } from '../columnBlock';
 import type { WarningSink } from '../diagnostics';
 import { bulkTemperature, LUBRICATION_FACTOR_XS } from '../heat/bulkTemperature';
 import { helicalLoadFactor } from '../heat/helicalLoadFactor';
@@ -56,10 +57,11 @@ export function temperaturesAlongPath(input: CaseInput, m: MeshMechanics, sink: 
   }
   const bM1 = materialContactCoefficient(input.pinion);
   const bM2 = materialContactCoefficient(input.wheel);
-  const flash = new Float64Array(m.n);
+  const block = new ColumnBlock(m.n, 2);
+  const flash = block.float64();
   const flashMax = blokFlashAlongPath(friction, m, bM1, bM2, flash);
   const thetaM = bulkTemperature(tOil, flashMax as KelvinDifference, LUBRICATION_FACTOR_XS[input.duty.lubrication], input.duty.pinionMeshes);
-  const contact = new Float64Array(m.n);
+  const contact = block.float64();
   let contactMax = -Infinity;
   let contactMaxIndex = 0;
   for (let i = 0; i < m.n; i++) {

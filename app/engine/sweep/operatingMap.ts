@@ -1,3 +1,4 @@
+import { ColumnBlock } from '../columnBlock';
 import { blokFlashTemperature } from '../heat/blokFlash';
 import { hertzSemiWidth } from '../stress/hertz';
 import { LUBRICATION_FACTOR_XS } from '../heat/bulkTemperature';
@@ -134,14 +135,15 @@ export function prepareSweep(input: Omit<CaseInput, 'oil'>): SweepCase {
   const kBg = helicalLoadFactor(g.totalContactRatio);
   const ra1 = input.roughnessRa1;
   const ra2 = input.roughnessRa2;
-  const flashPerMu = new Float64Array(n);
+  const block = new ColumnBlock(n, 4, 1);
+  const flashPerMu = block.float64();
   const useDH = policy.filmFormula === 'dowson-higginson';
   const aU = useDH ? 0.7 : 0.694;
   const aW = useDH ? -0.13 : -0.128;
-  const hPoint = new Float64Array(n);
-  const hYPoint = new Float64Array(n);
-  const uBarPow = new Float64Array(n);
-  const atRisk = new Uint8Array(n);
+  const hPoint = block.float64();
+  const hYPoint = block.float64();
+  const uBarPow = block.float64();
+  const atRisk = block.uint8();
   let anyAtRisk = false;
   for (let i = 0; i < n; i++) {
     const s = m.position[i] as number;

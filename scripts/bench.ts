@@ -16,7 +16,7 @@ import { ehlPointSetup } from '../app/review/ehlPoint';
 import { lineContactEhl } from '../app/engine/ehl/lineContactEhl';
 import { runFleet } from '../app/fleet/fleet';
 import { smallestCover, type CoverCandidate } from '../app/fleet/cover';
-import { floorLoop, opCount } from './bench/floor';
+import { floorLoop, type OpCount } from './bench/floor';
 import { fleetWorkload, largestReviews, parsed, planetaryWorkload, rawDemo, recomputeEdits, recomputeWorkload } from './bench/workloads';
 import type { Review } from '../app/review/schema';
 import { consoleTable, type BenchResults } from './bench/targets';
@@ -56,6 +56,13 @@ function coverWorstMs(): number {
   return worst;
 }
 
+/** The transcendental operations of one recompute, counted in a child process (scripts/bench/floor.ts). */
+function countedOps(): OpCount {
+  const child = spawnSync(process.execPath, ['--import', 'tsx', 'scripts/bench/opCountChild.ts'], { encoding: 'utf8' });
+  if (child.status !== 0) throw new Error(`counting the recompute's operations failed: ${child.stderr.slice(-800)}`);
+  return JSON.parse(child.stdout) as OpCount;
+}
+
 function engineFigures(): Record<string, unknown> {
   // Each timed recompute follows an edit of the torque (the next of 16 versions), as in the app; the
   // cold figure edits an oil's KV40 as well, so nothing kept per oil model helps.
@@ -65,8 +72,7 @@ function engineFigures(): Record<string, unknown> {
   };
   const recompute = time(cycle(recomputeEdits(400, 16)), 200);
   const cold = time(cycle(recomputeEdits(400, 400, true)), 150, 50);
-  const r400 = recomputeWorkload(400);
-  const ops = opCount(r400);
+  const ops = countedOps();
   let sink = 0;
   const floor = time(() => (sink += floorLoop(ops)), 200);
   const scaling: Record<string, number> = {};

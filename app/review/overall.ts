@@ -48,15 +48,16 @@ export function micropittingOverCases(mine: ReadonlyArray<{ c: CaseResult }>): {
 
 /** The worst value of each limit check over the cases (the least value against its limit). */
 function worstChecks(mine: ReadonlyArray<{ c: CaseResult }>): Array<LimitCheck & { loadCase: string }> {
-  const worst = new Map<LimitCheck['quantity'], LimitCheck & { loadCase: string }>();
+  // The worst check and its case per quantity; the one object per quantity is made at the end.
+  const worst = new Map<LimitCheck['quantity'], { k: LimitCheck; loadCase: string }>();
   for (const { c } of mine) {
     for (const k of c.verdict?.checks ?? []) {
-      const prev = worst.get(k.quantity);
+      const prev = worst.get(k.quantity)?.k;
       const lower = prev === undefined || (k.value !== null && (prev.value === null || k.value < prev.value));
-      if (lower) worst.set(k.quantity, { ...k, loadCase: c.loadCase });
+      if (lower) worst.set(k.quantity, { k, loadCase: c.loadCase });
     }
   }
-  return [...worst.values()];
+  return [...worst.values()].map(({ k, loadCase }) => ({ ...k, loadCase }));
 }
 
 /**

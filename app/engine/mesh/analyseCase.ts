@@ -1,7 +1,8 @@
 import { WarningSink, type EngineWarning } from '../diagnostics';
 import { meshMechanics, type MeshMechanics } from './mechanics';
-import { temperaturesAlongPath, type TemperaturesAlongPath } from './temperatures';
-import { filmAlongPath, type FilmAlongPath } from './film';
+import { HEAT_COLUMNS, temperaturesAlongPath, type TemperaturesAlongPath } from './temperatures';
+import { FILM_COLUMNS, filmAlongPath, type FilmAlongPath } from './film';
+import { ColumnBlock } from '../columnBlock';
 import { scuffingAssessment, type ScuffingAssessment } from './scuffing';
 import { micropittingAssessment, type MicropittingAssessment } from './micropitting';
 import { oilState, type OilState } from './oilState';
@@ -39,7 +40,9 @@ export function analyseCase(input: CaseInput, shared?: MeshMechanics): CaseAnaly
   const oil = input.oil;
   if (!oil) return { input, mechanics, heat: null, film: null, oilAtFilmTemperature: null, scuffing: null, micropitting: null, warnings: sink.items };
   const tField = `${input.caseField}.oilTemperature_C`;
-  const heat = temperaturesAlongPath(input, mechanics, sink);
+  // The heat's and the film's columns from one buffer (heat first: the film's Uint8 column goes last).
+  const block = new ColumnBlock(mechanics.n, HEAT_COLUMNS + FILM_COLUMNS.float64, FILM_COLUMNS.uint8);
+  const heat = temperaturesAlongPath(input, mechanics, sink, block);
   // A bulk temperature past the oil model's range means the duty is far beyond scuffing anyway; the
   // film is then taken at the top of the range (thicker than it would be) and the reason is said.
   const tMax = oil.model.temperatureRange.max;
@@ -53,7 +56,7 @@ export function analyseCase(input: CaseInput, shared?: MeshMechanics): CaseAnaly
     });
   }
   const state = oilState(input, tFilm, tField);
-  const film = filmAlongPath(input, mechanics, state, sink);
+  const film = filmAlongPath(input, mechanics, state, sink, block);
   const scuffing = scuffingAssessment(input, mechanics, heat, sink);
   const micropitting = micropittingAssessment(input, mechanics, film, sink);
   for (const w of oil.model.warnings) sink.add(w);

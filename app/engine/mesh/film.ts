@@ -12,6 +12,9 @@ import type { CaseInput } from './types';
 
 export const REGIMES: readonly Regime[] = ['boundary', 'mixed', 'full-film'];
 
+/** The columns filmAlongPath takes from its block: five of Float64 (taken first), one of Uint8. */
+export const FILM_COLUMNS = { float64: 5, uint8: 1 } as const;
+
 export interface FilmAlongPath {
   /** The formula whose h_min feeds λ. */
   readonly formula: 'Dowson–Higginson (1966)' | 'Pan–Hamrock (1989)';
@@ -53,10 +56,9 @@ const LN_U_MIN = LN(uMin), LN_U_MAX = LN(uMax), LN_W_MIN = LN(wMin), LN_W_MAX = 
  * logarithms per point: h = R·k·exp(a ln U + b ln G + c ln W). tests/engine/film/filmKernel.test.ts
  * holds it to those reference functions within 1e-12.
  */
-export function filmAlongPath(input: CaseInput, m: MeshMechanics, oil: OilState, sink: WarningSink): FilmAlongPath {
+export function filmAlongPath(input: CaseInput, m: MeshMechanics, oil: OilState, sink: WarningSink, block: ColumnBlock = new ColumnBlock(m.n, FILM_COLUMNS.float64, FILM_COLUMNS.uint8)): FilmAlongPath {
   const { policy } = input;
   const n = m.n;
-  const block = new ColumnBlock(n, 5, 1);
   const hMin = block.float64();
   const hCentral = block.float64();
   const thermalFactor = block.float64();
@@ -81,6 +83,10 @@ export function filmAlongPath(input: CaseInput, m: MeshMechanics, oil: OilState,
   const lnMW = LN((oil.temperatureViscosity * eta) / MINERAL_OIL_CONDUCTIVITY);
   const kDH = 2.65 * Math.exp(0.54 * lnG);
   const kPHmin = 1.714 * Math.exp(0.568 * lnG);
+  // The h_min formula's constants, chosen once (a + (−b)·c is a − b·c to the last bit).
+  const kMin = useDH ? kDH : kPHmin;
+  const aU = useDH ? 0.7 : 0.694;
+  const aW = useDH ? -0.13 : -0.128;
   const kPHc = 2.922 * Math.exp(0.47 * lnG);
   const kISO = 1.6 * Math.exp(0.6 * lnG);
   if (G < gMin || G > gMax) warnOutsideLineContactFit(useDH ? 'Dowson–Higginson' : 'Pan–Hamrock', (uMin + uMax) / 2, (wMin + wMax) / 2, G, sink);
@@ -106,7 +112,7 @@ export function filmAlongPath(input: CaseInput, m: MeshMechanics, oil: OilState,
         warnOutsideLineContactFit(useDH ? 'Dowson–Higginson' : 'Pan–Hamrock', Math.exp(lnU), Math.exp(lnW), G, sink);
         rangeWarned = true;
       }
-      h = useDH ? R * kDH * Math.exp(0.7 * lnU - 0.13 * lnW) : R * kPHmin * Math.exp(0.694 * lnU - 0.128 * lnW);
+      h = R * kMin * Math.exp(aU * lnU + aW * lnW);
       hc = R * kPHc * Math.exp(0.692 * lnU - 0.166 * lnW);
       hY = R * kISO * Math.exp(0.7 * lnU - 0.13 * lnW);
       if (thermal) {

@@ -9,6 +9,9 @@ import { blokFlashAlongPath } from './blokAlongPath';
 import type { MeshMechanics } from './mechanics';
 import type { CaseInput } from './types';
 
+/** The Float64 columns temperaturesAlongPath takes from its block. */
+export const HEAT_COLUMNS = 2;
+
 export interface TemperaturesAlongPath {
   /** Mean coefficient of friction used along the path. */
   readonly friction: number;
@@ -30,7 +33,7 @@ export interface TemperaturesAlongPath {
  * bulk temperature θM = θoil + 0.47 XS Xmp θfl,max and contact temperature θB = θM + θfl.
  * The flash constant 0.80 belongs to the Hertz semi-width bH (see heat/blokFlash.ts).
  */
-export function temperaturesAlongPath(input: CaseInput, m: MeshMechanics, sink: WarningSink): TemperaturesAlongPath {
+export function temperaturesAlongPath(input: CaseInput, m: MeshMechanics, sink: WarningSink, block: ColumnBlock = new ColumnBlock(m.n, HEAT_COLUMNS)): TemperaturesAlongPath {
   const oil = input.oil as NonNullable<CaseInput['oil']>;
   const g = input.geometry;
   const tOil = input.duty.oilTemperature;
@@ -57,7 +60,6 @@ export function temperaturesAlongPath(input: CaseInput, m: MeshMechanics, sink: 
   }
   const bM1 = materialContactCoefficient(input.pinion);
   const bM2 = materialContactCoefficient(input.wheel);
-  const block = new ColumnBlock(m.n, 2);
   const flash = block.float64();
   const flashMax = blokFlashAlongPath(friction, m, bM1, bM2, flash);
   const thetaM = bulkTemperature(tOil, flashMax as KelvinDifference, LUBRICATION_FACTOR_XS[input.duty.lubrication], input.duty.pinionMeshes);

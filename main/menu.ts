@@ -47,6 +47,7 @@ export function menuTemplate(input: MenuInput): MenuItemConstructorOptions[] {
       cmd('Compare with…', 'compare'),
       cmd('Export record…', 'export-record', 'CmdOrCtrl+E'),
       cmd('Export CSV…', 'export-csv', 'CmdOrCtrl+Shift+E'),
+      cmd('Export summary CSV…', 'export-summary-csv'),
       ...(mac ? [] : [{ type: 'separator' } as const, { label: 'Quit', accelerator: 'Ctrl+Q', click: input.quit }]),
     ],
   };

@@ -152,6 +152,7 @@ export function App({ bridge }: { readonly bridge: Bridge }) {
       'save-as': () => void actions.save(true),
       'export-record': () => void actions.exportRecord(paper),
       'export-csv': () => void actions.exportCsv(),
+      'export-summary-csv': () => void actions.exportCsv('summary'),
       sign: () => setSigning(true),
       compare: () => setCompareRequest((n) => n + 1),
       methods: () => setInfo({ title: 'Methods and sources', lines: [BASIS_NOTE, ...(computed.results?.assumptions ?? []), ...METHODS.map(methodLine)] }),

@@ -76,7 +76,7 @@ export type CallArgs<K extends CallName> = z.input<Contract[K]['args']>;
 export type CallResult<K extends CallName> = z.output<Contract[K]['result']>;
 
 /** Menu commands main sends to the renderer (one-way events). */
-export const MENU_COMMANDS = ['new', 'open', 'save', 'save-as', 'export-record', 'export-csv', 'sign', 'compare', 'methods', 'about', 'units-si', 'units-us'] as const;
+export const MENU_COMMANDS = ['new', 'open', 'save', 'save-as', 'export-record', 'export-csv', 'export-summary-csv', 'sign', 'compare', 'methods', 'about', 'units-si', 'units-us'] as const;
 export type MenuCommand = (typeof MENU_COMMANDS)[number];
 export const menuEvent = z.object({ command: z.enum(MENU_COMMANDS), handle: documentHandle.optional() });
 

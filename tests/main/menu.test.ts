@@ -30,6 +30,7 @@ describe('the native menu', () => {
       ['Save as…', 'CmdOrCtrl+Shift+S', 'save-as'],
       ['Export record…', 'CmdOrCtrl+E', 'export-record'],
       ['Export CSV…', 'CmdOrCtrl+Shift+E', 'export-csv'],
+      ['Export summary CSV…', undefined, 'export-summary-csv'],
       ['Sign off…', undefined, 'sign'],
       ['Compare with…', undefined, 'compare'],
     ];

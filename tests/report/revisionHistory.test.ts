@@ -34,6 +34,18 @@ describe('the record of a review signed, changed and signed again', () => {
     expect(text).toMatch(/2026-12-02T14:00:00Z Lee Marsh \(invented\) \(Plant engineer\) Not approved Duty: Hard-rock peak: Oil temperature θoil/);
   }, 120_000);
 
+  it('a changed KV40 names the viscosity index the editor recomputed with it, as the screen does', async () => {
+    const first = sign(loadDemo().review, FIRST);
+    const oils = first.oils.map((o, i) => {
+      if (i !== 0) return o;
+      const { viscosityIndex: _vi, ...rest } = o;
+      return { ...rest, kv40_mm2s: o.kv40_mm2s + 10 };
+    });
+    const second = sign({ ...first, oils }, SECOND);
+    const text = (await recordText(second, 'kv40.pdf')).replace(/\s+/g, ' ');
+    expect(text).toContain('Not approved Oils: ISO VG 220 R&O mineral: Viscosity at 40 °C (with Viscosity index VI)');
+  }, 120_000);
+
   it('a review signed once has no revision history section', async () => {
     const text = await recordText(sign(loadDemo().review, FIRST), 'once.pdf');
     expect(text).not.toContain('Revision history');

@@ -109,10 +109,15 @@ export function drawSignoff(ctx: RecordContext): void {
 /** At most this many changed fields are named on a line; the rest are counted. */
 const NAMED_CHANGES = 8;
 
+/** What changed with a field (the VI the editor recomputes when KV40 or KV100 change), as the screen names it. */
+function alongWords(c: NonNullable<Signing['changes']>[number]): string {
+  return c.along?.length ? ` (with ${c.along.map((a) => a.field?.label ?? a.label).join(', ')})` : '';
+}
+
 function changedWords(line: Signing): string {
   if (line.changes === null) return line.first ? 'earliest signing kept in the file' : 'not known: that signing kept no signed inputs';
   if (line.changes.length === 0) return 'no input changed';
-  const named = line.changes.slice(0, NAMED_CHANGES).map((c) => `${c.panel}: ${c.label}${c.kind === 'added' ? ' (added)' : c.kind === 'removed' ? ' (removed)' : ''}`);
+  const named = line.changes.slice(0, NAMED_CHANGES).map((c) => `${c.panel}: ${c.label}${c.kind === 'added' ? ' (added)' : c.kind === 'removed' ? ' (removed)' : alongWords(c)}`);
   const more = line.changes.length - named.length;
   return `${named.join('; ')}${more > 0 ? `; and ${more} more` : ''}`;
 }

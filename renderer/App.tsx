@@ -226,7 +226,7 @@ export function App({ bridge }: { readonly bridge: Bridge }) {
                   <strong>Invented demo.</strong> The Harrow Creek aggregate plant is made up; every number in this review (gear pair, duty, oils) is invented. Start your own with New review….
                 </p>
               ) : null}
-              <ProblemList issues={issues} engineError={review ? computed.error : null} stale={stale} />
+              <ProblemList issues={issues} engineError={review ? computed.error : null} stale={stale} draft={doc.draft} units={units} />
               <RecordPanel />
               <GearPairPanel results={results ?? null} stale={stale} />
               <DutyPanel />

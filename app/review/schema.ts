@@ -33,7 +33,8 @@ const line = (max: number) => z.string().max(max).refine((t) => !CONTROL.test(t)
 const prose = (max: number) => z.string().max(max).refine((t) => !CONTROL_IN_PROSE.test(t), NO_CONTROL);
 
 /** A positive size with a least meaningful value: a 1e-320 would pass > 0 and underflow in the physics. */
-const atLeast = (min: number, max: number, unit: string) => positive(max, unit).gte(min, { message: `must be at least ${min} ${unit}` });
+/** A least value above 0 (so one message for a value too small, 0 and negatives included). */
+const atLeast = (min: number, max: number, unit: string) => finite().gte(min, { message: `must be at least ${min} ${unit}` }).lte(max, { message: `must be at most ${max} ${unit}` });
 
 export const materialSchema = z.union([
   z.enum(MATERIAL_PRESETS),

@@ -1,8 +1,19 @@
 import type { ReviewIssue } from '../../app/review/parse';
+import { inputLabelOf } from '../../app/review/inputLabels';
+import { parsePath, pathsInWords } from '../../app/review/pathWords';
 import type { RecomputeFailure } from '../worker/protocol';
 
-/** zod's wording for a wrong type is for programmers; the field says what to type. */
-export function friendlyMessage(message: string): string {
+/**
+ * zod's wording for a wrong type is for programmers; the field says what to type. A path inside a
+ * message (an engine error names its field) is given as the field's label.
+ */
+export function friendlyMessage(message: string, path?: string): string {
+  return pathsInWords(schemaWords(message, path));
+}
+
+function schemaWords(message: string, path?: string): string {
+  // A value none of a union's forms accepts: on a choice (the FZG stage), nothing was chosen.
+  if (message === 'Invalid input') return path && inputLabelOf(parsePath(path))?.words ? 'choose one' : 'not a valid value here';
   if (/^Invalid input: expected number/.test(message)) return 'enter a number';
   if (/^Invalid input: expected string/.test(message)) return 'enter some text';
   if (/^Too small: expected string to have >=1 char/.test(message)) return 'must not be empty';
@@ -18,8 +29,8 @@ export function friendlyMessage(message: string): string {
 export function messagesByPath(issues: readonly ReviewIssue[], engineError: RecomputeFailure | null): Map<string, string[]> {
   const map = new Map<string, string[]>();
   const add = (key: string, message: string) => map.set(key, [...(map.get(key) ?? []), message]);
-  for (const i of issues) add(i.path, friendlyMessage(i.message));
-  if (engineError?.field) add(engineError.field, engineError.message);
+  for (const i of issues) add(i.path, friendlyMessage(i.message, i.path));
+  if (engineError?.field) add(engineError.field, friendlyMessage(engineError.message, engineError.field));
   return map;
 }
 

@@ -35,9 +35,15 @@ describe('an invalid entry', () => {
     const { page } = s;
     const torque = field(page, 'loadCases[0].pinionTorque_Nm');
     await typeInto(torque, '-5');
-    // app/review/schema.ts: pinionTorque_Nm must be greater than 0 N·m.
-    await expect.poll(() => messageOf(page, torque), { timeout: WAIT }).toContain('must be greater than 0 N·m');
-    await expect(page.locator('[data-testid=problems]').textContent()).resolves.toContain('loadCases[0].pinionTorque_Nm');
+    // app/review/schema.ts: pinionTorque_Nm must be at least 0.001 N·m (one message, not one per check it fails).
+    await expect.poll(() => messageOf(page, torque), { timeout: WAIT }).toContain('must be at least 0.001 N·m');
+    // The summary names the field in words (panel, load case, label), never by its path; a click goes to it.
+    const problems = page.locator('[data-testid=problems]');
+    await expect(problems.textContent()).resolves.toContain('Duty · Normal crushing: Pinion torque T1: must be at least 0.001 N·m');
+    await expect(problems.locator('li').count()).resolves.toBe(1);
+    await expect(problems.textContent()).resolves.not.toMatch(/loadCases|\[0\]|_Nm/);
+    await problems.getByRole('button', { name: /Pinion torque/ }).click();
+    await expect.poll(() => page.evaluate(() => document.activeElement?.getAttribute('data-path'))).toBe('loadCases[0].pinionTorque_Nm');
     const teeth = field(page, 'gearPair.pinion.teeth');
     await typeInto(teeth, '4');
     await expect.poll(() => messageOf(page, teeth), { timeout: WAIT }).toContain('must be at least 5 teeth');
@@ -58,7 +64,8 @@ describe('an invalid entry', () => {
     await typeInto(centre, '100');
     // Base circles of 4 mm module, 23/88 teeth overlap at a = 100 mm: the geometry raises EngineInputError for this field.
     await expect.poll(() => messageOf(page, centre), { timeout: WAIT }).toMatch(/The centre distance 100\.000 mm is impossible/);
-    await expect(page.locator('[data-testid=engine-error]').textContent()).resolves.toContain('gearPair.centerDistance_mm');
+    await expect(page.locator('[data-testid=engine-error]').textContent()).resolves.toMatch(/^Gear pair: Centre distance a: The centre distance 100\.000 mm is impossible/);
+    await expect(page.locator('[data-testid=engine-error]').textContent()).resolves.not.toContain('centerDistance_mm');
     await expect.poll(() => page.locator('.sheet__findings').getAttribute('data-stale')).toBe('true');
     expect(await resultValue(page.locator('[data-testid=mesh-max-hertz]'))).toBe(good);
     await shootPanel(page, 'gear-pair', 'gear-pair-engine-error');

@@ -39,4 +39,13 @@ describe('field messages', () => {
     expect(friendlyMessage('Invalid input: expected number, received string')).toBe('enter a number');
     expect(friendlyMessage('must be greater than 0 N·m')).toBe('must be greater than 0 N·m');
   });
+  it('a union no form of which matches: "choose one" on a choice, otherwise a plain sentence, never zod’s "Invalid input"', () => {
+    expect(friendlyMessage('Invalid input', 'oils[0].fzgFailureStage')).toBe('choose one');
+    expect(friendlyMessage('Invalid input', 'gearPair.pinion.material')).not.toMatch(/Invalid input/);
+  });
+  it('a field path inside a message (an engine error names its field) is given by its label', () => {
+    expect(friendlyMessage('policy.pathPoints = 5 must be a whole number from 11 to 5001.')).toBe('Points along the path = 5 must be a whole number from 11 to 5001.');
+    const map = messagesByPath([], { field: 'loadCases[0].oilTemperature_C', code: 'oil.temperature-range', message: 'loadCases[0].oilTemperature_C = 250 °C is outside the oil model' });
+    expect(lookupMessages(map, 'loadCases[0].oilTemperature_C')).toEqual(['Oil temperature θoil = 250 °C is outside the oil model']);
+  });
 });

@@ -1,6 +1,7 @@
 import { useState } from 'react';
 import type { ReviewIssue } from '../../../app/review/parse';
 import { friendlyMessage } from '../../state/messages';
+import { pathWords } from '../../../app/review/pathWords';
 import type { Bridge } from '../../../app/bridge/contract';
 import { useFleet } from '../../hooks/useFleet';
 import { Panel } from '../panels/Panel';
@@ -14,7 +15,7 @@ function Problems({ issues }: { readonly issues: readonly ReviewIssue[] }) {
     <ul className="fleet-problem">
       {issues.map((i) => (
         <li key={`${i.path}|${i.message}`}>
-          <code>{i.path}</code>: {friendlyMessage(i.message)}
+          {pathWords(i.path, null)}: {friendlyMessage(i.message, i.path)}
         </li>
       ))}
     </ul>

@@ -1,0 +1,59 @@
+/**
+ * Field paths in words, for what a person reads: `oils[0].baseOil` is "Oils · In-service oil:
+ * Base oil" (the entry by its name in the draft), and a path inside a message (an engine error says
+ * `loadCases[0].oilTemperature_C = 250 °C is outside …`) becomes the field's label. The paths
+ * themselves stay in `--json` and in the DOM's data attributes. Pure.
+ */
+import { fieldLabel, inputLabelOf, panelOf, type InputPath } from './inputLabels';
+
+/** `loadCases[1].oilTemperature_C` → ['loadCases', 1, 'oilTemperature_C'] (formatPath's inverse). */
+export function parsePath(path: string): InputPath {
+  const out: Array<string | number> = [];
+  for (const m of path.matchAll(/([^.[\]]+)|\[(\d+)\]/g)) out.push(m[2] !== undefined ? Number(m[2]) : (m[1] as string));
+  return out;
+}
+
+const LIST_WORDS = { loadCases: 'load case', oils: 'oil' } as const;
+
+/** The name the draft gives entry `index` of a list, or "oil 2" / "load case 1". */
+function entryName(draft: unknown, list: 'loadCases' | 'oils', index: number): string {
+  const entries = (draft as Record<string, unknown> | null | undefined)?.[list];
+  const name = Array.isArray(entries) ? (entries[index] as { name?: unknown } | undefined)?.name : undefined;
+  return typeof name === 'string' && name.trim() ? name.trim() : `${LIST_WORDS[list]} ${index + 1}`;
+}
+
+/**
+ * Where a field is, in words: its panel, its load case or oil by name, pinion or wheel, and its
+ * label ("Duty · Load case 1: Pinion torque T1"). A path the screen has no field for is named by
+ * its panel and entry only.
+ */
+export function pathWords(path: string, draft: unknown, system: 'si' | 'us' = 'si'): string {
+  if (path === '(file)') return 'The file';
+  const segs = parsePath(path);
+  const head = segs[0];
+  const parts: string[] = [];
+  let rest = segs;
+  if ((head === 'loadCases' || head === 'oils') && typeof segs[1] === 'number') {
+    parts.push(entryName(draft, head, segs[1]));
+    rest = segs.slice(2);
+  }
+  if (head === 'gearPair' && (segs[1] === 'pinion' || segs[1] === 'wheel')) parts.push(segs[1] === 'pinion' ? 'Pinion' : 'Wheel');
+  const where = [panelOf(segs), ...parts].join(' · ');
+  return rest.length && inputLabelOf(segs) ? `${where}: ${fieldLabel(segs, system)}` : where;
+}
+
+/** A review path as it appears inside a message (not inside a word). */
+const PATH_IN_TEXT = /\b(?:gearPair|loadCases|oils|policy|planetary|displayUnits|signoff)(?:\[\d+\]|\.[A-Za-z][A-Za-z0-9_]*)+/g;
+
+/** The message with every review path in it replaced by the field's label (the message sits at the field, or after its words). */
+export function pathsInWords(message: string, system: 'si' | 'us' = 'si'): string {
+  return message.replace(PATH_IN_TEXT, (p) => {
+    const segs = parsePath(p);
+    if (inputLabelOf(segs)) return fieldLabel(segs, system);
+    const [list, index] = segs;
+    if (segs.length === 2 && (list === 'loadCases' || list === 'oils') && typeof index === 'number') return `${LIST_WORDS[list]} ${index + 1}`;
+    // A field without a label of its own: its last name in words ("faceWidth_mm" → "face width").
+    const last = segs.filter((x): x is string => typeof x === 'string').at(-1) ?? '';
+    return last.replace(/_[A-Za-z0-9]+$/, '').replace(/([a-z])([A-Z])/g, '$1 $2').toLowerCase();
+  });
+}

@@ -1,0 +1,33 @@
+import { describe, expect, it } from 'vitest';
+import { formatPath } from '../../app/review/fieldPath';
+import { parsePath, pathsInWords, pathWords } from '../../app/review/pathWords';
+
+const draft = { oils: [{ name: 'In-service oil' }, { name: '  ' }], loadCases: [{ name: 'Hard-rock peak' }] };
+
+describe('field paths in words', () => {
+  it('parsePath is formatPath read back', () => {
+    for (const p of [['gearPair', 'pinion', 'teeth'], ['loadCases', 1, 'oilTemperature_C'], ['policy', 'temperatureRange_C', 0], ['oils', 12, 'kv40_mm2s']]) expect(parsePath(formatPath(p))).toEqual(p);
+  });
+
+  it('names the panel, the entry by its name (or its place), pinion or wheel, and the label', () => {
+    expect(pathWords('oils[0].baseOil', draft)).toBe('Oils · In-service oil: Base oil');
+    expect(pathWords('oils[1].kv40_mm2s', draft)).toBe('Oils · oil 2: Viscosity at 40 °C');
+    expect(pathWords('loadCases[0].pinionTorque_Nm', draft)).toMatch(/^Duty · Hard-rock peak: Pinion torque/);
+    expect(pathWords('gearPair.wheel.teeth', draft)).toBe('Gear pair · Wheel: Teeth z2');
+    expect(pathWords('oils[3]', draft)).toBe('Oils · oil 4');
+    expect(pathWords('(file)', draft)).toBe('The file');
+    expect(pathWords('gearPair.pinion.roughnessRa_um', null, 'us')).toMatch(/^Gear pair · Pinion: Flank roughness/);
+  });
+
+  it('never shows a path: every label of the file has words, and an unknown path falls back to its panel', () => {
+    expect(pathWords('gearPair.somethingNew', draft)).toBe('Gear pair');
+    for (const p of ['oils[0].baseOil', 'loadCases[0].oilTemperature_C', 'policy.lambdaTarget', 'gearPair.normalModule_mm']) expect(pathWords(p, draft)).not.toMatch(/[[\]_]|\.\w/);
+  });
+
+  it('replaces a path inside a message by the field label', () => {
+    expect(pathsInWords('loadCases[0].oilTemperature_C = 250 °C is outside 20…180 °C, the range of the oil model for oils[1].')).toBe('Oil temperature θoil = 250 °C is outside 20…180 °C, the range of the oil model for oil 2.');
+    expect(pathsInWords('policy.pathPoints = 5 must be a whole number')).toMatch(/^Points along the path = 5/);
+    expect(pathsInWords('gearPair.faceWidthX_mm must be positive')).toBe('face width x must be positive');
+    expect(pathsInWords('no path here, 3.5 mm')).toBe('no path here, 3.5 mm');
+  });
+});

@@ -7,6 +7,7 @@ import { MESH_WORDS } from '../../review/vocabulary';
 import { caseTitle } from './caseResults';
 import { DECISION_WORDS, GREY, STATUS_LABELS } from '../words';
 import { revisionHistory, type Signing } from '../../review/audit/history';
+import { pathsInWords } from '../../review/pathWords';
 import type { Signoff } from '../../review/schema';
 import { decisionLine, decisionSubject, isoDateTime } from '../../review/decisionSubject';
 
@@ -35,6 +36,8 @@ export function drawMethods(ctx: RecordContext): void {
   for (const o of ctx.results.oils) L.bullet(`${o.name}: viscosity index from ${o.viscosityIndexSource}; lubricant factor XL = ${o.lubricantFactorXL}.`, { size: 8.5 });
 }
 
+const SEVERITY_WORDS: Readonly<Record<string, string>> = { info: 'note', warning: 'warning', error: 'error' };
+
 /** Warnings and validity notes from the engine. */
 export function drawWarnings(ctx: RecordContext): void {
   const { layout: L, results } = ctx;
@@ -42,11 +45,13 @@ export function drawWarnings(ctx: RecordContext): void {
   // A planetary stage: the stage's checks, then each mesh's geometry checks and case warnings.
   const meshes = results.meshes ?? [{ mesh: null, gear: results.gear, cases: results.cases }];
   const where = (mesh: string | null, what: string) => (mesh ? `${MESH_WORDS[mesh as keyof typeof MESH_WORDS]} mesh: ${what}` : what);
+  // Words only: the codes and field paths stay in `--json`; a path inside a message becomes its label.
+  const row = (at: string, severity: string, message: string) => [at, SEVERITY_WORDS[severity] ?? severity, pathsInWords(message)];
   const rows: string[][] = [
-    ...(results.planetary?.checks ?? []).map((c) => ['Planetary stage', c.severity, c.code, c.message]),
-    ...meshes.flatMap((m) => m.gear.checks.map((c) => [where(m.mesh, 'Gear pair'), c.severity, c.code, c.message])),
-    ...results.oils.flatMap((o) => o.warnings.map((w) => [`Oil: ${o.name}`, w.severity, `${w.code} (${w.field})`, w.message])),
-    ...meshes.flatMap((m) => m.cases.flatMap((c) => c.warnings.map((w) => [where(m.mesh, caseTitle(c)), w.severity, `${w.code} (${w.field})`, w.message]))),
+    ...(results.planetary?.checks ?? []).map((c) => row('Planetary stage', c.severity, c.message)),
+    ...meshes.flatMap((m) => m.gear.checks.map((c) => row(where(m.mesh, 'Gear pair'), c.severity, c.message))),
+    ...results.oils.flatMap((o) => o.warnings.map((w) => row(`Oil: ${o.name}`, w.severity, w.message))),
+    ...meshes.flatMap((m) => m.cases.flatMap((c) => c.warnings.map((w) => row(where(m.mesh, caseTitle(c)), w.severity, w.message)))),
   ];
   if (rows.length === 0) {
     L.para('The engine raised no warnings: every formula was used inside its stated validity range, and the gear pair passed its design checks.', { size: 9 });
@@ -54,10 +59,9 @@ export function drawWarnings(ctx: RecordContext): void {
   }
   L.table(
     [
-      { header: 'Where', width: 0.22 },
-      { header: 'Severity', width: 0.09 },
-      { header: 'Code (field)', width: 0.22 },
-      { header: 'Message', width: 0.47 },
+      { header: 'Where', width: 0.24 },
+      { header: 'Severity', width: 0.1 },
+      { header: 'Message', width: 0.66 },
     ],
     rows,
     { fontSize: 7.5, zebra: true },

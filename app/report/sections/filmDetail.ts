@@ -3,6 +3,7 @@ import { drawChart, type Box, type ChartSpec } from '../chart';
 import type { RecordContext } from '../context';
 import { formatNumber } from '../units';
 import { GREY, OKABE_ITO } from '../words';
+import { pathsInWords } from '../../review/pathWords';
 
 /**
  * Film detail, when asked: the numerical film and pressure at the point of least λ, with the
@@ -49,7 +50,7 @@ export function drawFilmDetail(ctx: RecordContext, films: readonly EhlPointResul
       { pairs: 2, size: 7.5 },
     );
     L.para(f.inWords, { size: 8.5 });
-    for (const w2 of f.warnings) L.para(w2.message, { size: 7.5, color: GREY, gap: 2 });
+    for (const w2 of f.warnings) L.para(pathsInWords(w2.message), { size: 7.5, color: GREY, gap: 2 });
   }
 }
 

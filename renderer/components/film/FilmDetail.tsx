@@ -8,6 +8,7 @@ import { toDisplay, unitLabel, type QuantityKind, type UnitSystem } from '../../
 import { trapTab } from '../focusTrap';
 import { FilmChart } from './FilmChart';
 import { filmChartSpec } from './filmChart';
+import { pathsInWords } from '../../../app/review/pathWords';
 
 interface Props {
   readonly review: Review;
@@ -51,7 +52,7 @@ function Solved({ r, units }: { r: EhlPointResult; units: UnitSystem }) {
       {r.warnings.length ? (
         <ul className="notes" data-testid="film-notes">
           {r.warnings.map((w) => (
-            <li key={w.code}>{w.message}</li>
+            <li key={w.code}>{pathsInWords(w.message)}</li>
           ))}
         </ul>
       ) : null}

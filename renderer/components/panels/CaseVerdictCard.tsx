@@ -4,6 +4,7 @@ import { Quantity } from '../Quantity';
 import { VerdictBadge } from '../VerdictBadge';
 import { reasonInDisplayUnits } from '../../units/inText';
 import { CheckChip } from '../verdict/CheckChip';
+import { pathsInWords } from '../../../app/review/pathWords';
 
 interface Props {
   readonly result: CaseResult;
@@ -64,7 +65,7 @@ export function CaseVerdictCard({ result: c, units, governing }: Props) {
         <ul className="warnings" aria-label="Engine warnings">
           {c.warnings.map((w) => (
             <li key={`${w.code}|${w.field}`} className={`note note--${w.severity}`}>
-              {w.message}
+              {pathsInWords(w.message)}
             </li>
           ))}
         </ul>

@@ -130,6 +130,7 @@ async function main(): Promise<void> {
     const self = new Map<string, number>();
     const selfFn = new Map<string, number>();
     const inclusive = new Map<string, number>();
+    const ours = new Map<string, number>();
     let busy = 0;
     profile.samples.forEach((id, k) => {
       const dt = (profile.timeDeltas[k + 1] ?? 0) / 1000;
@@ -141,8 +142,14 @@ async function main(): Promise<void> {
       const fn = `${node.callFrame.functionName || '(anonymous)'} ${src}`;
       selfFn.set(fn, (selfFn.get(fn) ?? 0) + dt);
       const seen = new Set<string>();
+      const seenOurs = new Set<string>();
       for (let n: ProfileNode | undefined = node; n; n = n.parent === undefined ? undefined : byId.get(n.parent)) {
         const name = n.callFrame.functionName;
+        const from = sourceOf(n.callFrame);
+        if ((from.startsWith('renderer/') || (process.env.PROFILE_CHARTJS && from === 'npm:chart.js')) && name && !seenOurs.has(`${name} ${from}`)) {
+          seenOurs.add(`${name} ${from}`);
+          ours.set(`${name} ${from}`, (ours.get(`${name} ${from}`) ?? 0) + dt);
+        }
         if (INCLUSIVE.includes(name) && !seen.has(name)) {
           seen.add(name);
           inclusive.set(name, (inclusive.get(name) ?? 0) + dt);
@@ -156,6 +163,8 @@ async function main(): Promise<void> {
     for (const [k, v] of [...selfFn.entries()].sort((a, b) => b[1] - a[1]).slice(0, 30)) console.log(`  ${r1(v / EDITS).toString().padStart(6)}  ${k}`);
     console.log('inclusive time per edit (ms):');
     for (const [k, v] of [...inclusive.entries()].sort((a, b) => b[1] - a[1])) console.log(`  ${r1(v / EDITS).toString().padStart(6)}  ${k}`);
+    console.log('inclusive time per edit in the renderer\'s own functions (components, hooks; ms):');
+    for (const [k, v] of [...ours.entries()].sort((a, b) => b[1] - a[1]).slice(0, 30)) console.log(`  ${r1(v / EDITS).toString().padStart(6)}  ${k}`);
   } finally {
     await browser.close();
     await harness.close();

@@ -43,6 +43,11 @@ const WRAP_WORKER = `
     }
   };
 `;
+/** Spins 20 ms in a function the profile names; returns when it started (performance.now()). */
+const SPIN = `(() => {
+  const flankfilmCalibrationSpin = () => { const t = performance.now(); while (performance.now() - t < 20) { /* spin */ } return t; };
+  return flankfilmCalibrationSpin();
+})()`;
 const READ_MARKS = `(() => {
   const last = (name) => { const e = performance.getEntriesByName(name); return e.length ? e[e.length - 1].startTime : NaN; };
   return { edit: last('edit'), posted: last('request-posted'), received: last('answer-received'), deserialised: last('answer-deserialised'), drawn: last('chart-updated'), millis: window.runMillis.length ? window.runMillis[window.runMillis.length - 1] : NaN };
@@ -86,18 +91,23 @@ async function main(): Promise<void> {
     const cdp = await context.newCDPSession(page);
     const input = field(page, TORQUE);
     const t0 = Number(await input.inputValue());
+    let spinAt = NaN;
+    const windows: { start: number; end: number }[] = [];
     const splits: Record<string, number[]> = { 'edit→posted': [], 'posted→received': [], 'received→deserialised': [], 'deserialised→chart-updated': [], 'edit→chart-updated': [], 'worker run()': [] };
     for (let i = 0; i < WARM_UP + EDITS; i++) {
       if (i === WARM_UP) {
         await cdp.send('Profiler.enable');
         await cdp.send('Profiler.setSamplingInterval', { interval: 100 });
         await cdp.send('Profiler.start');
+        // A spin the profile will show, at a known performance.now(): it puts the samples on the page's clock.
+        spinAt = (await page.evaluate(SPIN)) as number;
       }
       const before = await page.evaluate(() => performance.getEntriesByName('chart-updated').length);
       await input.fill((t0 * (1 + 0.01 * ((i % 20) + 1))).toFixed(2));
       await page.waitForFunction((n) => performance.getEntriesByName('chart-updated').length > n, before, { timeout: WAIT, polling: 'raf' });
       const t = (await page.evaluate(READ_MARKS)) as Record<'edit' | 'posted' | 'received' | 'deserialised' | 'drawn' | 'millis', number>;
       if (i >= WARM_UP) {
+        windows.push({ start: t.edit, end: t.drawn });
         splits['edit→posted']?.push(t.posted - t.edit);
         splits['posted→received']?.push(t.received - t.posted);
         splits['received→deserialised']?.push(t.deserialised - t.received);
@@ -127,6 +137,43 @@ async function main(): Promise<void> {
       const entry = map.findEntry(f.lineNumber, f.columnNumber) as { originalSource?: string };
       return entry.originalSource ? shortSource(entry.originalSource) : file;
     };
+    // Sample times on the page's clock: the first sample in the spin is its start.
+    const times: number[] = [];
+    let clock = 0;
+    profile.timeDeltas.forEach((d) => times.push((clock += d / 1000)));
+    const inSpin = (id: number) => {
+      for (let n = byId.get(id); n; n = n.parent === undefined ? undefined : byId.get(n.parent)) if (n.callFrame.functionName === 'flankfilmCalibrationSpin') return true;
+      return false;
+    };
+    const firstSpin = profile.samples.findIndex(inSpin);
+    const offset = firstSpin >= 0 ? spinAt - (times[firstSpin] as number) : NaN;
+    const inWindow = new Map<string, number>();
+    let windowTotal = 0;
+    profile.samples.forEach((id, k) => {
+      const at = (times[k] as number) + offset;
+      if (!windows.some((w) => at >= w.start && at < w.end)) return;
+      const dt = (profile.timeDeltas[k + 1] ?? 0) / 1000;
+      const node = byId.get(id);
+      if (!node) return;
+      windowTotal += dt;
+      // Attribute to the nearest frame of a known kind on the stack: our code, a library, or the VM's own.
+      let what = node.callFrame.functionName === '(idle)' ? '(idle: waiting, e.g. for the worker)' : sourceOf(node.callFrame);
+      let ours: string | null = null;
+      for (let n: ProfileNode | undefined = node; n; n = n.parent === undefined ? undefined : byId.get(n.parent)) {
+        const name = n.callFrame.functionName;
+        if (ours === null && sourceOf(n.callFrame).startsWith('renderer/')) ours = `${name || '(anonymous)'} ${sourceOf(n.callFrame)}`;
+        if (name === 'performWorkOnRoot' && ours !== null && !what.startsWith('chart') && !what.startsWith('parse')) { what = `React, in ${ours}`; break; }
+        if (name === 'updateInPlace' || name === 'Chart') { what = 'chart.js update/set-up (updateInPlace)'; break; }
+        if (name === 'parseReviewValue') { what = 'parse (zod)'; break; }
+        if (name === 'meshCharts' || name === 'summarise') { what = 'chart series (meshCharts, summarise)'; break; }
+        if (name === 'commitRoot' && !what.startsWith('React, in')) what = 'React commit (DOM changes, effects; less the above)';
+        if (name === 'performWorkOnRoot') {
+          if (!what.startsWith('React commit')) what = 'React render phase (reconcile; less the above)';
+          break;
+        }
+      }
+      inWindow.set(what, (inWindow.get(what) ?? 0) + dt);
+    });
     const self = new Map<string, number>();
     const selfFn = new Map<string, number>();
     const inclusive = new Map<string, number>();
@@ -156,6 +203,8 @@ async function main(): Promise<void> {
         }
       }
     });
+    console.log(`inside the edit→chart-updated windows, per edit (ms; ${r1(windowTotal / EDITS)} sampled in all):`);
+    for (const [k, v] of [...inWindow.entries()].sort((a, b) => b[1] - a[1]).slice(0, 24)) console.log(`  ${r1(v / EDITS).toString().padStart(6)}  ${k}`);
     console.log(`main thread busy per edit: ${r1(busy / EDITS)} ms (all work while profiling, the bench's own polling included)`);
     console.log('self time per edit by source (ms):');
     for (const [k, v] of [...self.entries()].sort((a, b) => b[1] - a[1]).slice(0, 25)) console.log(`  ${r1(v / EDITS).toString().padStart(6)}  ${k}`);

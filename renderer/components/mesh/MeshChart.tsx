@@ -1,4 +1,4 @@
-import { useLayoutEffect, useRef, useState } from 'react';
+import { memo, useLayoutEffect, useRef, useState } from 'react';
 import type { ChartConfiguration } from 'chart.js';
 import { cssVar, useColorScheme } from '../../hooks/useColorScheme';
 import { formatResult } from '../../units/format';
@@ -110,7 +110,7 @@ interface Props {
  * its verdict reach the screen first; afterwards new data is drawn with the commit that brings it,
  * in the same frame as the figures.
  */
-export function MeshChart({ spec, fileStem, units, onDrawn }: Props) {
+function MeshChartView({ spec, fileStem, units, onDrawn }: Props) {
   const canvas = useRef<HTMLCanvasElement>(null);
   const chart = useRef<Chart<'line', { x: number; y: number | null }[]> | null>(null);
   const scheme = useColorScheme();
@@ -188,3 +188,6 @@ export function MeshChart({ spec, fileStem, units, onDrawn }: Props) {
     </figure>
   );
 }
+
+/** Re-renders with new specs or units, not when the panel does for an edit (the review it passes to Film detail). */
+export const MeshChart = memo(MeshChartView);

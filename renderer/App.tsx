@@ -1,4 +1,4 @@
-import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
+import { useCallback, useEffect, useLayoutEffect, useMemo, useRef, useState } from 'react';
 import type { Bridge, MenuCommand } from '../app/bridge/contract';
 import type { ReviewStatus } from '../app/review/results';
 import type { Review } from '../app/review/schema';
@@ -29,7 +29,6 @@ import { usePersistence } from './hooks/usePersistence';
 import { useFileDrop } from './hooks/useFileDrop';
 import { useDocumentActions } from './hooks/useDocumentActions';
 import { Sheet, type SheetContext } from './state/context';
-import { lookupMessages, messagesByPath } from './state/messages';
 import { newReviewDraft } from './state/templates';
 import type { UnitSystem } from './units/units';
 import { basisTag, METHODS, type MethodEntry } from '../app/review/methods';
@@ -48,7 +47,7 @@ type Recovery = { text: string; handle: string | null; name: string | null; save
 export function App({ bridge }: { readonly bridge: Bridge }) {
   // An edit's recompute starts as it is dispatched, before the sheet renders it.
   const early = useRef<(r: Review, e: number) => void>(() => undefined);
-  const { doc, dispatch, review, issues } = useDocument(useCallback((r: Review, e: number) => early.current(r, e), []));
+  const { doc, dispatch, review, issues, store } = useDocument(useCallback((r: Review, e: number) => early.current(r, e), []));
   const computed = useRecompute(review, doc.edition, doc.opened);
   early.current = computed.request;
   const [units, setUnits] = useState<UnitSystem>('si');
@@ -131,11 +130,11 @@ export function App({ bridge }: { readonly bridge: Bridge }) {
     [dispatch, setNotice],
   );
 
-  const messages = useMemo(() => messagesByPath(issues, review ? computed.error : null), [issues, review, computed.error]);
-  const sheet = useMemo<SheetContext | null>(
-    () => (doc.draft ? { draft: doc.draft, units, dispatch: edit, messagesAt: (k) => lookupMessages(messages, k), pending } : null),
-    [doc.draft, units, edit, messages, pending],
-  );
+  // run()'s refusal shows at its field; the store shows it only while the draft is valid.
+  useLayoutEffect(() => store.setEngineError(computed.error), [store, computed.error]);
+  // The same object from edit to edit: no input re-renders through it, each follows its own path in the store.
+  const hasDraft = doc.draft !== null;
+  const sheet = useMemo<SheetContext | null>(() => (hasDraft ? { store, units, dispatch: edit, pending } : null), [hasDraft, store, units, edit, pending]);
 
   const status: ReviewStatus = review ? (computed.status ?? 'draft') : doc.draft?.signoff ? 'changed-since-signing' : 'draft';
   const limits = useMemo(

@@ -27,7 +27,8 @@ const percentile = (xs: readonly number[], p: number) => [...xs].sort((a, b) => 
 const round = (x: number) => Math.round(x * 100) / 100;
 
 async function main(): Promise<void> {
-  const harness = await startHarness();
+  // Another build to compare (a path as the first argument); dist/renderer by default.
+  const harness = await startHarness(process.argv[2] ? { staticDir: process.argv[2] } : {});
   const browser = await launch();
   try {
     const paints: number[] = [];

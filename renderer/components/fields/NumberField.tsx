@@ -1,9 +1,10 @@
-import { useEffect, useRef, useState, type KeyboardEvent } from 'react';
-import { useSheet } from '../../state/context';
-import { getIn, pathKey, type FieldPath } from '../../state/paths';
+import { memo, useEffect, useRef, useState, type KeyboardEvent } from 'react';
+import { useDraftValue, useFieldMessages, useSheet } from '../../state/context';
+import { pathKey, type FieldPath } from '../../state/paths';
 import { formatInput, parseInput } from '../../units/format';
 import { fromDisplay, toDisplay, unitLabel, type QuantityKind } from '../../units/units';
 import { FieldShell, fieldId } from './FieldShell';
+import { sameFieldProps } from './sameProps';
 
 interface Props {
   readonly path: FieldPath;
@@ -34,13 +35,15 @@ const close = (a: number, b: number) => Math.abs(a - b) <= 1e-12 * Math.max(Math
  * into the draft (in file units) only on a pause, Enter or leaving the field, so the results never
  * belong to a keystroke on the way ("16" on the way to "160"); meanwhile the sheet shows
  * "computing". Text that is not a number goes into the draft as text, so the schema marks the
- * field and the last valid results stay on screen.
+ * field and the last valid results stay on screen. It re-renders when its props, its value or its
+ * messages change (or the units), not on every edit of the sheet.
  */
-export function NumberField({ path, label, kind = 'none', unit, optional, hint, value, onValue, derived, note }: Props) {
-  const { draft, units, dispatch, messagesAt, pending } = useSheet();
+export const NumberField = memo(function NumberField({ path, label, kind = 'none', unit, optional, hint, value, onValue, derived, note }: Props) {
+  const { units, dispatch, pending } = useSheet();
   const key = pathKey(path);
   const id = fieldId(key);
-  const stored = getIn(draft, path);
+  const stored = useDraftValue(path);
+  const fromStore = useFieldMessages(path);
   const current = typeof stored === 'number' ? stored : value;
   // A derived value (power from torque) is a readout until typed over: six digits are plenty.
   const display = (v: number) => (typeof stored === 'number' || !derived ? formatInput(v) : formatInput(Number(v.toPrecision(6))));
@@ -92,7 +95,7 @@ export function NumberField({ path, label, kind = 'none', unit, optional, hint, 
   };
 
   const local = text.trim() !== '' && Number.isNaN(parseInput(text)) ? ['enter a number'] : text.trim() === '' && !optional && !derived ? ['required'] : [];
-  const messages = local.length ? local : messagesAt(key);
+  const messages = local.length ? local : fromStore;
   const unitText = unit ?? unitLabel(kind, units);
   return (
     <FieldShell id={id} label={label} unit={unitText} messages={messages} hint={hint} note={note}>
@@ -117,4 +120,4 @@ export function NumberField({ path, label, kind = 'none', unit, optional, hint, 
       />
     </FieldShell>
   );
-}
+}, sameFieldProps);

@@ -1,6 +1,8 @@
-import { useSheet } from '../../state/context';
-import { getIn, pathKey, type FieldPath } from '../../state/paths';
+import { memo } from 'react';
+import { useDraftValue, useFieldMessages, useSheet } from '../../state/context';
+import { pathKey, type FieldPath } from '../../state/paths';
 import { FieldShell, fieldId } from './FieldShell';
+import { sameFieldProps } from './sameProps';
 
 interface Props<V extends string | number> {
   readonly path: FieldPath;
@@ -14,13 +16,14 @@ interface Props<V extends string | number> {
 }
 
 /** A choice from a fixed list; option values keep their type (numbers stay numbers). */
-export function SelectField<V extends string | number>({ path, label, options, hint, onValue, value }: Props<V>) {
-  const { draft, dispatch, messagesAt } = useSheet();
+function SelectFieldView<V extends string | number>({ path, label, options, hint, onValue, value }: Props<V>) {
+  const { dispatch } = useSheet();
   const key = pathKey(path);
   const id = fieldId(key);
-  const stored = value ?? getIn(draft, path);
+  const inDraft = useDraftValue(path);
+  const stored = value ?? inDraft;
   const index = options.findIndex(([v]) => v === stored);
-  const messages = messagesAt(key);
+  const messages = useFieldMessages(path);
   // A long option gets room in the grid, so the chosen one is never cut off (about 0.5 rem per character).
   const longest = Math.max(label.length, ...options.map(([, t]) => t.length));
   const span = longest > 34 ? 'field-wide' : longest > 17 ? 'field-span2' : undefined;
@@ -52,3 +55,6 @@ export function SelectField<V extends string | number>({ path, label, options, h
     </div>
   );
 }
+
+/** Re-renders when its props, its value or its messages change, not on every edit of the sheet. */
+export const SelectField = memo(SelectFieldView, sameFieldProps) as typeof SelectFieldView;

@@ -1,6 +1,8 @@
-import { useSheet } from '../../state/context';
-import { getIn, pathKey, type FieldPath } from '../../state/paths';
+import { memo } from 'react';
+import { useDraftValue, useFieldMessages, useSheet } from '../../state/context';
+import { pathKey, type FieldPath } from '../../state/paths';
 import { FieldShell, fieldId } from './FieldShell';
+import { sameFieldProps } from './sameProps';
 
 interface Props {
   readonly path: FieldPath;
@@ -13,13 +15,13 @@ interface Props {
   readonly note?: string;
 }
 
-/** A text input; an optional one left empty removes its key. */
-export function TextField({ path, label, optional, wide, multiline, placeholder, note }: Props) {
-  const { draft, dispatch, messagesAt } = useSheet();
+/** A text input; an optional one left empty removes its key. Re-renders when its props, value or messages change. */
+export const TextField = memo(function TextField({ path, label, optional, wide, multiline, placeholder, note }: Props) {
+  const { dispatch } = useSheet();
   const key = pathKey(path);
   const id = fieldId(key);
-  const stored = getIn(draft, path);
-  const messages = messagesAt(key);
+  const stored = useDraftValue(path);
+  const messages = useFieldMessages(path);
   const common = {
     id,
     value: typeof stored === 'string' ? stored : '',
@@ -36,4 +38,4 @@ export function TextField({ path, label, optional, wide, multiline, placeholder,
       </FieldShell>
     </div>
   );
-}
+}, sameFieldProps);

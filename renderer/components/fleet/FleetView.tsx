@@ -1,4 +1,4 @@
-import { useState } from 'react';
+import { memo, useState } from 'react';
 import type { ReviewIssue } from '../../../app/review/parse';
 import { friendlyMessage } from '../../state/messages';
 import { pathWords } from '../../../app/review/pathWords';
@@ -27,7 +27,7 @@ function Problems({ issues }: { readonly issues: readonly ReviewIssue[] }) {
  * paths stay with the system); the consolidation runs in a worker with progress; the record is
  * made by main from the same texts. Kept mounted while hidden, so its files and table stay.
  */
-export function FleetView({ bridge, paper, hidden }: { readonly bridge: Bridge; readonly paper: 'a4' | 'letter'; readonly hidden: boolean }) {
+function FleetViewPanel({ bridge, paper, hidden }: { readonly bridge: Bridge; readonly paper: 'a4' | 'letter'; readonly hidden: boolean }) {
   const fleet = useFleet(bridge);
   const { state } = fleet;
   const [notice, setNotice] = useState<string | null>(null);
@@ -92,3 +92,6 @@ export function FleetView({ bridge, paper, hidden }: { readonly bridge: Bridge; 
     </main>
   );
 }
+
+/** Its own state only: the review's edits and results (the sheet's renders) do not re-render it. */
+export const FleetView = memo(FleetViewPanel);

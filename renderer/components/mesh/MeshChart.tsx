@@ -1,4 +1,4 @@
-import { useLayoutEffect, useRef, useState } from 'react';
+import { memo, useLayoutEffect, useRef, useState } from 'react';
 import type { ChartConfiguration } from 'chart.js';
 import { cssVar, useColorScheme } from '../../hooks/useColorScheme';
 import { formatResult } from '../../units/format';
@@ -84,33 +84,71 @@ function configOf(spec: ChartSpec): ChartConfiguration<'line', { x: number; y: n
   };
 }
 
-/** One Mesh chart, with its data summary on the element and a PNG export. */
-export function MeshChart({ spec, fileStem, units }: { readonly spec: ChartSpec; readonly fileStem: string; readonly units: UnitSystem }) {
+/** Runs `job` after the browser has painted the frame in progress (a task queued from the frame's animation callback). */
+function afterPaint(job: () => void): () => void {
+  let timer: ReturnType<typeof setTimeout> | undefined;
+  const frame = requestAnimationFrame(() => {
+    timer = setTimeout(job, 0);
+  });
+  return () => {
+    cancelAnimationFrame(frame);
+    if (timer !== undefined) clearTimeout(timer);
+  };
+}
+
+interface Props {
+  readonly spec: ChartSpec;
+  readonly fileStem: string;
+  readonly units: UnitSystem;
+  /** Told when the canvas shows `spec` (drawn now, or already showing the same numbers). */
+  readonly onDrawn?: (spec: ChartSpec) => void;
+}
+
+/**
+ * One Mesh chart, with its data summary on the element and a PNG export. Its first drawing (the
+ * chart.js set-up, the costly part) waits until the browser has painted the sheet, so the sheet and
+ * its verdict reach the screen first; afterwards new data is drawn with the commit that brings it,
+ * in the same frame as the figures.
+ */
+function MeshChartView({ spec, fileStem, units, onDrawn }: Props) {
   const canvas = useRef<HTMLCanvasElement>(null);
   const chart = useRef<Chart<'line', { x: number; y: number | null }[]> | null>(null);
   const scheme = useColorScheme();
   const [png, setPng] = useState<string | null>(null);
   // What the canvas shows: new results with the same numbers here (the velocities, after a torque edit) need no redraw.
   const drawn = useRef<string | null>(null);
+  // What the last commit asks to be drawn, for a first drawing that runs after paint.
+  const wanted = useRef({ spec, scheme, onDrawn });
+  const firstDraw = useRef<(() => void) | null>(null);
 
-  // Drawn as the results are committed, before the browser paints them: the figures and the
-  // charts reach the screen in the same frame.
   useLayoutEffect(() => {
-    if (!canvas.current) return;
-    const key = `${scheme}|${JSON.stringify(spec)}`;
-    if (chart.current && drawn.current === key) return;
-    drawn.current = key;
-    const config = configOf(spec);
-    if (!chart.current) {
-      chart.current = new Chart(canvas.current, config);
-    } else {
-      updateInPlace(chart.current, config);
+    wanted.current = { spec, scheme, onDrawn };
+    const draw = () => {
+      const { spec: s, scheme: sc, onDrawn: told } = wanted.current;
+      if (!canvas.current) return;
+      const key = `${sc}|${JSON.stringify(s)}`;
+      if (!chart.current || drawn.current !== key) {
+        drawn.current = key;
+        const config = configOf(s);
+        if (!chart.current) chart.current = new Chart(canvas.current, config);
+        else updateInPlace(chart.current, config);
+        setPng(null);
+      }
+      told?.(s);
+    };
+    if (chart.current) draw();
+    else if (!firstDraw.current) {
+      firstDraw.current = afterPaint(() => {
+        firstDraw.current = null;
+        draw();
+      });
     }
-    setPng(null);
-  }, [spec, scheme]);
+  }, [spec, scheme, onDrawn]);
 
   useLayoutEffect(
     () => () => {
+      firstDraw.current?.();
+      firstDraw.current = null;
       chart.current?.destroy();
       chart.current = null;
     },
@@ -150,3 +188,6 @@ export function MeshChart({ spec, fileStem, units }: { readonly spec: ChartSpec;
     </figure>
   );
 }
+
+/** Re-renders with new specs or units, not when the panel does for an edit (the review it passes to Film detail). */
+export const MeshChart = memo(MeshChartView);

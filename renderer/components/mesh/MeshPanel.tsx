@@ -1,4 +1,4 @@
-import { memo, useId, useLayoutEffect, useMemo, useState } from 'react';
+import { memo, useCallback, useId, useLayoutEffect, useMemo, useRef, useState } from 'react';
 import type { CaseResult, PlanetaryMesh, Results } from '../../../app/review/results';
 import { MESH_WORDS, MICROPITTING_LABELS } from '../../../app/review/vocabulary';
 import type { Review } from '../../../app/review/schema';
@@ -8,7 +8,7 @@ import type { UnitSystem } from '../../units/units';
 import { Panel } from '../panels/Panel';
 import { QuantityRow } from '../Quantity';
 import { MeshChart } from './MeshChart';
-import { meshCharts, type RegimeLimits } from './series';
+import { meshCharts, type ChartSpec, type RegimeLimits } from './series';
 
 interface Props {
   readonly results: Results | null;
@@ -62,10 +62,7 @@ function MeshPanelView({ results, review = null, limits, units }: Props) {
   const rows = groups[index]?.rows;
   const c = rows?.[0];
   const specs = useMemo(() => (rows && gear && cases ? meshCharts(rows, gear, limits, units, cases) : []), [rows, gear, cases, limits, units]);
-  // The charts (children, whose layout effects run first) have drawn their new data by now: the end of the edit-to-chart latency.
-  useLayoutEffect(() => {
-    if (specs.length) performance.mark('chart-updated');
-  }, [specs]);
+  const onDrawn = useChartsDrawn(specs);
   if (!results || !c || !rows) return <Panel id="mesh" title="Mesh"><p className="note">No results yet.</p></Panel>;
   const stem = `flankfilm-mesh-${index + 1}`;
   const oils = rows.filter((r) => r.oil !== null);
@@ -145,11 +142,39 @@ function MeshPanelView({ results, review = null, limits, units }: Props) {
       </p>
       <div className="mesh-strip">
         {specs.map((s) => (
-          <MeshChart key={s.id} spec={s} fileStem={stem} units={units} />
+          <MeshChart key={s.id} spec={s} fileStem={stem} units={units} onDrawn={onDrawn} />
         ))}
       </div>
       {film && review ? <FilmDetail review={review} point={film} units={units} onClose={() => setFilm(null)} /> : null}
     </Panel>
+  );
+}
+
+/**
+ * Marks 'chart-updated' (the end of the edit-to-chart latency, tests/e2e/bench.ts) once every chart
+ * of the strip shows the current specs: at the commit that brings them (the charts, children,
+ * draw in their layout effects before this one runs) or, for a first drawing after paint, when
+ * the last chart has drawn. Returns what the charts call when they have drawn.
+ */
+function useChartsDrawn(specs: readonly ChartSpec[]): (spec: ChartSpec) => void {
+  const shown = useRef(new Map<string, ChartSpec>());
+  const current = useRef<{ specs: readonly ChartSpec[]; marked: boolean }>({ specs: [], marked: true });
+  const check = useCallback(() => {
+    const c = current.current;
+    if (c.marked || !c.specs.length || !c.specs.every((s) => shown.current.get(s.id) === s)) return;
+    c.marked = true;
+    performance.mark('chart-updated');
+  }, []);
+  useLayoutEffect(() => {
+    current.current = { specs, marked: false };
+    check();
+  }, [specs, check]);
+  return useCallback(
+    (spec: ChartSpec) => {
+      shown.current.set(spec.id, spec);
+      check();
+    },
+    [check],
   );
 }
 

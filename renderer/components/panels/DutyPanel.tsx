@@ -1,10 +1,13 @@
 import { memo, useEffect, useRef } from 'react';
-import { useSheet } from '../../state/context';
+import { useDraftSelect, useSheet } from '../../state/context';
 import { getIn } from '../../state/paths';
+import type { Draft } from '../../state/reviewState';
 import { newLoadCase } from '../../state/templates';
 import { formatInput } from '../../units/format';
 import { LoadCaseEditor } from './LoadCaseEditor';
 import { Panel } from './Panel';
+
+const casesOf = (draft: Draft | null) => (getIn(draft, ['loadCases']) as unknown[] | undefined) ?? [];
 
 /** The shares of time as entered (the schema's default 1 where none is given); null while one is not a number. */
 function sharesOf(cases: readonly unknown[]): number[] | null {
@@ -12,24 +15,31 @@ function sharesOf(cases: readonly unknown[]): number[] | null {
   return shares.every((v): v is number => typeof v === 'number' && Number.isFinite(v) && v > 0) ? shares : null;
 }
 
-/** The load cases of the duty, and whether their shares of time add up to 1. */
-function DutyPanelView() {
-  const { draft, dispatch } = useSheet();
-  const cases = (getIn(draft, ['loadCases']) as unknown[] | undefined) ?? [];
+/** "The shares add up to …, not 1", or undefined while they do (or one is not a number yet). */
+function shareNoteOf(cases: readonly unknown[]): string | undefined {
   const shares = sharesOf(cases);
   const sum = shares ? shares.reduce((a, b) => a + b, 0) : null;
   // Shares are given to three decimals at most in practice: 0.5 % is the tolerance for "adds up to 1".
-  const off = sum !== null && Math.abs(sum - 1) > 0.005;
-  const shareNote = off && sum !== null ? `The shares add up to ${formatInput(Number(sum.toPrecision(4)))}, not 1` : undefined;
+  return sum !== null && Math.abs(sum - 1) > 0.005 ? `The shares add up to ${formatInput(Number(sum.toPrecision(4)))}, not 1` : undefined;
+}
+
+/** The load cases of the duty, and whether their shares of time add up to 1. */
+function DutyPanelView() {
+  const { store, dispatch } = useSheet();
+  // The count and the shares' note, not the cases: an edit inside a case re-renders only its inputs.
+  const count = useDraftSelect((d) => casesOf(d).length);
+  const shareNote = useDraftSelect((d) => shareNoteOf(casesOf(d)));
   const added = useRef<number | null>(null);
   useEffect(() => {
     if (added.current === null) return;
     document.querySelector<HTMLInputElement>(`[data-path="loadCases[${added.current}].name"]`)?.focus();
     added.current = null;
-  }, [cases.length]);
+  }, [count]);
 
   const normalise = () => {
-    if (!shares || sum === null) return;
+    const shares = sharesOf(casesOf(store.getState().draft));
+    if (!shares) return;
+    const sum = shares.reduce((a, b) => a + b, 0);
     shares.forEach((v, i) => dispatch({ type: 'set', path: ['loadCases', i, 'timeShare'], value: Number((v / sum).toFixed(4)) }));
   };
   return (
@@ -39,9 +49,10 @@ function DutyPanelView() {
       actions={
         <button
           type="button"
-          disabled={cases.length >= 20}
-          title={cases.length >= 20 ? 'A review holds at most 20 load cases' : undefined}
+          disabled={count >= 20}
+          title={count >= 20 ? 'A review holds at most 20 load cases' : undefined}
           onClick={() => {
+            const cases = casesOf(store.getState().draft);
             added.current = cases.length;
             dispatch({ type: 'addItem', list: 'loadCases', item: newLoadCase(cases[cases.length - 1], cases) });
           }}
@@ -50,18 +61,18 @@ function DutyPanelView() {
         </button>
       }
     >
-      {off ? (
+      {shareNote ? (
         <p className="problems" role="status" data-testid="share-sum">
           {shareNote}: each case&apos;s share is its fraction of the operating time.{' '}
           <button type="button" onClick={normalise}>Normalise the shares to add up to 1</button>
         </p>
       ) : null}
-      {cases.map((_, i) => (
-        <LoadCaseEditor key={i} index={i} canRemove={cases.length > 1} shareNote={shareNote} />
+      {Array.from({ length: count }, (_, i) => (
+        <LoadCaseEditor key={i} index={i} canRemove={count > 1} shareNote={shareNote} />
       ))}
     </Panel>
   );
 }
 
-/** Inputs only: re-renders when the draft, units or messages change (the sheet's context), not when results arrive. */
+/** Inputs only: re-renders with the units, the number of cases or the shares' note; not on other edits or when results arrive. */
 export const DutyPanel = memo(DutyPanelView);

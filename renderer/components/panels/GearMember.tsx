@@ -1,8 +1,7 @@
 import { MATERIAL_PRESETS } from '../../../app/engine/materials';
 import { MATERIAL_WORDS } from '../../../app/review/inputLabels';
 import { inputProps } from '../fields/inputProps';
-import { useSheet } from '../../state/context';
-import { getIn } from '../../state/paths';
+import { useDraftValue, useSheet } from '../../state/context';
 import { NumberField } from '../fields/NumberField';
 import { SelectField } from '../fields/SelectField';
 
@@ -23,9 +22,9 @@ interface Props {
 
 /** One gear of the set: teeth, shift, tip, roughness, material. */
 export function GearMember({ member, title, root = 'gearPair', internal = false }: Props) {
-  const { draft, dispatch } = useSheet();
+  const { dispatch } = useSheet();
   const p = [root, member] as const;
-  const material = getIn(draft, [...p, 'material']);
+  const material = useDraftValue([...p, 'material']);
   const custom = typeof material === 'object' && material !== null;
   return (
     <fieldset className="member">

@@ -3,9 +3,8 @@ import type { Results } from '../../../app/review/results';
 import { COMPONENTS } from '../../../app/review/schema';
 import { COMPONENT_WORDS, fieldLabel } from '../../../app/review/inputLabels';
 import { inputProps } from '../fields/inputProps';
-import { useSheet } from '../../state/context';
+import { useDraftSelect, useDraftValue, useSheet } from '../../state/context';
 import { gearSetKind, gearSetRoot, type GearSetKind } from '../../state/gearSet';
-import { getIn } from '../../state/paths';
 import { CheckField } from '../fields/CheckField';
 import { NumberField } from '../fields/NumberField';
 import { SelectField } from '../fields/SelectField';
@@ -35,12 +34,12 @@ export function GearPairPanel({ results, stale }: { readonly results: Results | 
   );
 }
 
-/** The gear set's inputs: memoised, so new results re-render only the derived geometry below them. */
+/** The gear set's inputs: memoised, so new results re-render only the derived geometry below them, and an edit only the inputs it changes. */
 const GearSetFields = memo(function GearSetFields() {
-  const { draft, dispatch } = useSheet();
-  const kind = gearSetKind(draft);
-  const root = gearSetRoot(draft);
-  const components = (getIn(draft, [root, 'components']) as string[] | undefined) ?? [];
+  const { dispatch } = useSheet();
+  const kind = useDraftSelect(gearSetKind);
+  const root = useDraftSelect(gearSetRoot);
+  const components = (useDraftValue([root, 'components']) as string[] | undefined) ?? [];
   const gp = [root] as const;
   return (
     <>
@@ -68,9 +67,9 @@ const GearSetFields = memo(function GearSetFields() {
 
 /** The inputs of a pair, external or internal (the wheel a ring). */
 function PairFields({ internal }: { readonly internal: boolean }) {
-  const { draft, dispatch, units } = useSheet();
+  const { dispatch, units } = useSheet();
   const gp = ['gearPair'] as const;
-  const module = getIn(draft, [...gp, 'normalModule_mm']);
+  const module = useDraftValue([...gp, 'normalModule_mm']);
   return (
     <>
       <div className="grid-fields">

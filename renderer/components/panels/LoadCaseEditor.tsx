@@ -1,5 +1,5 @@
-import { useSheet } from '../../state/context';
-import { getIn } from '../../state/paths';
+import { memo } from 'react';
+import { useDraftSelect, useDraftValue, useSheet } from '../../state/context';
 import { draftPower, draftTorque } from '../../state/reviewState';
 import { NumberField } from '../fields/NumberField';
 import { inputProps } from '../fields/inputProps';
@@ -12,13 +12,17 @@ import { TextField } from '../fields/TextField';
  * One load case. Torque and power are both shown; the one typed last is the one the file keeps
  * (the schema wants exactly one), the other follows from it.
  */
-export function LoadCaseEditor({ index, canRemove, shareNote }: { readonly index: number; readonly canRemove: boolean; readonly shareNote?: string | undefined }) {
-  const { draft, dispatch } = useSheet();
+function LoadCaseEditorView({ index, canRemove, shareNote }: { readonly index: number; readonly canRemove: boolean; readonly shareNote?: string | undefined }) {
+  const { dispatch } = useSheet();
   const p = ['loadCases', index] as const;
-  const name = getIn(draft, [...p, 'name']);
-  const k = caseKeys(draft);
-  const givesTorque = getIn(draft, [...p, k.torque]) !== undefined;
-  const noLoad = !givesTorque && getIn(draft, [...p, 'power_kW']) === undefined;
+  const name = useDraftValue([...p, 'name']);
+  const k = { speed: useDraftSelect((d) => caseKeys(d).speed), torque: useDraftSelect((d) => caseKeys(d).torque) };
+  const givesTorque = useDraftValue([...p, k.torque]) !== undefined;
+  const givesPower = useDraftValue([...p, 'power_kW']) !== undefined;
+  const noLoad = !givesTorque && !givesPower;
+  // Torque and power follow each other: numbers, so they re-render this case only when they move.
+  const torque = useDraftSelect((d) => (d ? draftTorque(d, index) : undefined));
+  const power = useDraftSelect((d) => (d ? draftPower(d, index) : undefined));
   const legend = typeof name === 'string' && name ? name : `Load case ${index + 1}`;
   return (
     <fieldset className="item" data-testid={`load-case-${index}`}>
@@ -30,7 +34,7 @@ export function LoadCaseEditor({ index, canRemove, shareNote }: { readonly index
           path={[...p, k.torque]}
           {...inputProps(`loadCases[].${k.torque}`)}
           note={noLoad ? 'enter the torque or the power' : givesTorque ? undefined : 'from the power'}
-          value={draftTorque(draft, index)}
+          value={torque}
           derived={!givesTorque}
           onValue={(value) => dispatch({ type: 'setDrive', index, given: 'torque', value })}
         />
@@ -38,7 +42,7 @@ export function LoadCaseEditor({ index, canRemove, shareNote }: { readonly index
           path={[...p, 'power_kW']}
           {...inputProps('loadCases[].power_kW')}
           note={givesTorque ? 'from the torque' : undefined}
-          value={draftPower(draft, index)}
+          value={power}
           derived={givesTorque}
           onValue={(value) => dispatch({ type: 'setDrive', index, given: 'power', value })}
         />
@@ -62,3 +66,6 @@ export function LoadCaseEditor({ index, canRemove, shareNote }: { readonly index
     </fieldset>
   );
 }
+
+/** Re-renders with its own name, drive and keys (and its props), not on edits of other cases or when results arrive. */
+export const LoadCaseEditor = memo(LoadCaseEditorView);

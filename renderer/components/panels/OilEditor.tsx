@@ -2,8 +2,7 @@ import { memo } from 'react';
 import { BASE_OILS, CHEMISTRIES } from '../../../app/engine/oil/types';
 import type { OilSummary } from '../../../app/review/results';
 import { FZG_STAGES, type FzgStage } from '../../../app/review/schema';
-import { useSheet } from '../../state/context';
-import { getIn } from '../../state/paths';
+import { useDraftValue, useSheet } from '../../state/context';
 import { NumberField } from '../fields/NumberField';
 import { inputProps } from '../fields/inputProps';
 import { BASE_OIL_WORDS, CHEMISTRY_WORDS, INPUT_LABELS, OIL_ROLE_WORDS } from '../../../app/review/inputLabels';
@@ -29,12 +28,13 @@ const MICROPITTING_STAGES: readonly (readonly [number | string, string])[] = [['
 
 /** One candidate oil. */
 function OilEditorView({ index, summary }: { readonly index: number; readonly summary: OilSummary | null }) {
-  const { draft, dispatch, units } = useSheet();
+  const { dispatch, units } = useSheet();
   const p = ['oils', index] as const;
-  const name = getIn(draft, [...p, 'name']);
+  const name = useDraftValue([...p, 'name']);
   const legend = typeof name === 'string' && name ? name : `Oil ${index + 1}`;
-  const computedVi = d2270Of(getIn(draft, [...p, 'kv40_mm2s']), getIn(draft, [...p, 'kv100_mm2s']));
-  const enteredVi = getIn(draft, [...p, 'viscosityIndex']);
+  const computedVi = d2270Of(useDraftValue([...p, 'kv40_mm2s']), useDraftValue([...p, 'kv100_mm2s']));
+  const enteredVi = useDraftValue([...p, 'viscosityIndex']);
+  const micropittingStage = useDraftValue([...p, 'micropittingFailureStage']) as number | string | undefined;
   const viNote =
     typeof enteredVi === 'number'
       ? computedVi !== null && computedVi !== enteredVi
@@ -77,7 +77,7 @@ function OilEditorView({ index, summary }: { readonly index: number; readonly su
           {...inputProps('oils[].micropittingFailureStage')}
           hint="Data sheets' micropitting classes: low ≤ 7, medium 8–9, high ≥ 10 (common practice)"
           options={MICROPITTING_STAGES}
-          value={(getIn(draft, [...p, 'micropittingFailureStage']) as number | string | undefined) ?? ''}
+          value={micropittingStage ?? ''}
           onValue={(v) => dispatch({ type: 'set', path: [...p, 'micropittingFailureStage'], value: v === '' ? undefined : v })}
         />
         <NumberField path={[...p, 'pressureViscosity_1perGPa']} {...inputProps('oils[].pressureViscosity_1perGPa')} optional hint="Empty: estimated from the base oil" />
@@ -100,5 +100,5 @@ function OilEditorView({ index, summary }: { readonly index: number; readonly su
 const sameSummary = (a: OilSummary | null, b: OilSummary | null) =>
   a === b || (a !== null && b !== null && a.viscosityIndex === b.viscosityIndex && a.viscosityIndexSource === b.viscosityIndexSource && a.isoVG === b.isoVG && a.lubricantFactorXL === b.lubricantFactorXL);
 
-/** Re-renders on its inputs (the sheet's context) and when its oil's shown figures change, not on every new results object. */
+/** Re-renders with its name, viscosities and VI, the units, and when its oil's shown figures change; not on other edits or every new results object. */
 export const OilEditor = memo(OilEditorView, (a, b) => a.index === b.index && sameSummary(a.summary, b.summary));

@@ -1,7 +1,6 @@
 import { memo } from 'react';
 import { FILM_FORMULAS } from '../../../app/review/schema';
-import { useSheet } from '../../state/context';
-import { getIn } from '../../state/paths';
+import { useDraftValue, useSheet } from '../../state/context';
 import { CheckField } from '../fields/CheckField';
 import { NumberField } from '../fields/NumberField';
 import { inputProps } from '../fields/inputProps';
@@ -14,9 +13,9 @@ const STAGES = Array.from({ length: 12 }, (_, i) => [i + 1, String(i + 1)] as co
 
 /** The review's thresholds and method choices. */
 function PolicyPanelView() {
-  const { draft, dispatch } = useSheet();
+  const { dispatch } = useSheet();
   const p = ['policy'] as const;
-  const thermal = getIn(draft, [...p, 'thermalFilmCorrection']);
+  const thermal = useDraftValue([...p, 'thermalFilmCorrection']);
   return (
     <Panel id="policy" title="Policy">
       <div className="grid-fields">
@@ -47,5 +46,5 @@ function PolicyPanelView() {
   );
 }
 
-/** Inputs only: re-renders when the draft, units or messages change (the sheet's context), not when results arrive. */
+/** Inputs only: re-renders with the units (the sheet's context) or its check box, not on other edits or when results arrive. */
 export const PolicyPanel = memo(PolicyPanelView);

@@ -34,5 +34,5 @@ function RecordPanelView() {
   );
 }
 
-/** Inputs only: re-renders when the draft, units or messages change (the sheet's context), not when results arrive. */
+/** Inputs only: re-renders with the units (the sheet's context), not on edits (each input follows its own value) or when results arrive. */
 export const RecordPanel = memo(RecordPanelView);

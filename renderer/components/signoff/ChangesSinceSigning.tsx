@@ -6,7 +6,7 @@ import { undoEdit } from '../../../app/review/audit/undo';
 import type { ChangeFindingCode, Results, ReviewStatus, VerdictCode } from '../../../app/review/results';
 import type { Review } from '../../../app/review/schema';
 import { CHANGE_WORDS, VERDICT_WORDS } from '../../../app/review/vocabulary';
-import { useSheet } from '../../state/context';
+import { useDraftValue, useSheet } from '../../state/context';
 import type { UnitSystem } from '../../units/units';
 import { ChangeList } from './ChangeList';
 
@@ -30,8 +30,8 @@ function useSignedCheck(review: Review | null, signoffKey: unknown): SignedState
 
 /** For a changed review: what changed since signing, each with "show" and "undo this change". */
 export function ChangesSinceSigning({ review, results, status, units }: Props) {
-  const { draft, dispatch } = useSheet();
-  const check = useSignedCheck(review, draft.signoff);
+  const { store, dispatch } = useSheet();
+  const check = useSignedCheck(review, useDraftValue(['signoff']));
   const changes = useMemo<InputChange[] | null>(() => (check?.kind === 'kept' && review ? diffInputs(inputsOf(check.signed), inputsOf(review)) : null), [check, review]);
   const moved = useMemo(() => (check?.kind === 'kept' && check.results && results && changes?.length ? resultsMoved(check.results, results) : null), [check, results, changes]);
 
@@ -49,7 +49,7 @@ export function ChangesSinceSigning({ review, results, status, units }: Props) {
   if (!changes?.length) return null;
   const signedState = check.signed;
   const undo = (c: InputChange) => {
-    const edit = undoEdit(draft, inputsOf(signedState), c);
+    const edit = undoEdit(store.getState().draft ?? {}, inputsOf(signedState), c);
     dispatch({ type: 'set', path: edit.path, value: edit.value });
   };
   const verdicts = moved?.moves.filter((m) => (m.quantity === 'verdict' || m.quantity === 'oilVerdict' || m.quantity === 'changeFinding') && m.before && m.after) ?? [];

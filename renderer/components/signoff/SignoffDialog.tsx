@@ -1,4 +1,4 @@
-import { useEffect, useRef, useState, type FormEvent } from 'react';
+import { memo, useEffect, useRef, useState, type FormEvent } from 'react';
 import { DECISIONS, type Signoff } from '../../../app/review/schema';
 import { trapTab } from '../focusTrap';
 import { DECISION_WORDS } from '../../../app/review/vocabulary';
@@ -18,7 +18,7 @@ interface Props {
  * The Sign-off dialog: a modal <dialog>, so the rest of the sheet is inert and Tab stays inside;
  * Escape cancels. Reviewer and role are required, as the contract's signReview wants.
  */
-export function SignoffDialog({ open, previous, subject, onClose, onSign }: Props) {
+function SignoffDialogView({ open, previous, subject, onClose, onSign }: Props) {
   const ref = useRef<HTMLDialogElement>(null);
   const [form, setForm] = useState<SignoffForm>(() => initial(previous));
   const [error, setError] = useState<string | null>(null);
@@ -104,3 +104,9 @@ function initial(previous: Signoff | undefined): SignoffForm {
     conditions: previous?.conditions ?? '',
   };
 }
+
+/**
+ * Closed, it stays as it is: the sheet's renders (every edit, every result) do not re-render its
+ * form. Opening it (or any render while open) takes the props afresh.
+ */
+export const SignoffDialog = memo(SignoffDialogView, (a, b) => !a.open && !b.open);

@@ -198,6 +198,11 @@ export function fieldLabel(path: InputPath, system: 'si' | 'us' = 'si'): string 
   return system === 'us' && l.usLabel ? l.usLabel : l.label;
 }
 
+/** 'Pinion' or 'Wheel' for a field of one gear of the pair, else null. */
+export function memberOf(path: InputPath): 'Pinion' | 'Wheel' | null {
+  return path[0] === 'gearPair' && (path[1] === 'pinion' || path[1] === 'wheel') ? (path[1] === 'pinion' ? 'Pinion' : 'Wheel') : null;
+}
+
 /** The panel on which a path's field sits. */
 export function panelOf(path: InputPath): InputPanel {
   switch (path[0]) {

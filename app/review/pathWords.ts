@@ -4,7 +4,7 @@
  * `loadCases[0].oilTemperature_C = 250 °C is outside …`) becomes the field's label. The paths
  * themselves stay in `--json` and in the DOM's data attributes. Pure.
  */
-import { fieldLabel, inputLabelOf, panelOf, type InputPath } from './inputLabels';
+import { fieldLabel, inputLabelOf, memberOf, panelOf, type InputPath } from './inputLabels';
 
 /** `loadCases[1].oilTemperature_C` → ['loadCases', 1, 'oilTemperature_C'] (formatPath's inverse). */
 export function parsePath(path: string): InputPath {
@@ -37,13 +37,23 @@ export function pathWords(path: string, draft: unknown, system: 'si' | 'us' = 's
     parts.push(entryName(draft, head, segs[1]));
     rest = segs.slice(2);
   }
-  if (head === 'gearPair' && (segs[1] === 'pinion' || segs[1] === 'wheel')) parts.push(segs[1] === 'pinion' ? 'Pinion' : 'Wheel');
+  const gear = memberOf(segs);
+  if (gear) parts.push(gear);
   const where = [panelOf(segs), ...parts].join(' · ');
   return rest.length && inputLabelOf(segs) ? `${where}: ${fieldLabel(segs, system)}` : where;
 }
 
+/** The top-level keys of a review whose fields a path can name. */
+const HEADS = 'gearPair|loadCases|oils|policy|planetary|displayUnits|signoff|title|reviewId|date';
+
 /** A review path as it appears inside a message (not inside a word). */
-const PATH_IN_TEXT = /\b(?:gearPair|loadCases|oils|policy|planetary|displayUnits|signoff)(?:\[\d+\]|\.[A-Za-z][A-Za-z0-9_]*)+/g;
+const PATH_IN_TEXT = new RegExp(`\\b(?:${HEADS})(?:\\[\\d+\\]|\\.[A-Za-z][A-Za-z0-9_]*)+`, 'g');
+
+/** True for a review path (an engine error may instead name a bare quantity such as `faceWidth`). */
+export function isReviewPath(field: string): boolean {
+  return REVIEW_PATH.test(field);
+}
+const REVIEW_PATH = new RegExp(`^(?:${HEADS})\\b`);
 
 /** The message with every review path in it replaced by the field's label (the message sits at the field, or after its words). */
 export function pathsInWords(message: string, system: 'si' | 'us' = 'si'): string {

@@ -1,5 +1,5 @@
 import type { ReviewIssue } from '../../app/review/parse';
-import { pathWords } from '../../app/review/pathWords';
+import { isReviewPath, pathWords } from '../../app/review/pathWords';
 import type { Draft } from '../state/reviewState';
 import { friendlyMessage } from '../state/messages';
 import type { UnitSystem } from '../units/units';
@@ -14,9 +14,6 @@ interface Props {
   readonly units: UnitSystem;
 }
 
-/** An engine field named by its review path (not a bare engine name such as `faceWidth`). */
-const REVIEW_PATH = /^(?:gearPair|loadCases|oils|policy|planetary|title|reviewId|date)\b/;
-
 /** Moves the focus to the field of `path`, where its message stands. */
 function focusField(path: string): void {
   document.querySelector<HTMLElement>(`[data-path="${CSS.escape(path)}"]`)?.focus();
@@ -29,7 +26,7 @@ function focusField(path: string): void {
 export function ProblemList({ issues, engineError, stale, draft, units }: Props) {
   if (!issues.length && !engineError) return null;
   const count = issues.length + (engineError ? 1 : 0);
-  const engineField = engineError?.field && REVIEW_PATH.test(engineError.field) ? engineError.field : null;
+  const engineField = engineError?.field && isReviewPath(engineError.field) ? engineError.field : null;
   return (
     <div className="problems" role="status" data-testid="problems">
       <strong>{stale ? 'Not recomputed: ' : ''}

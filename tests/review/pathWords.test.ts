@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { formatPath } from '../../app/review/fieldPath';
-import { parsePath, pathsInWords, pathWords } from '../../app/review/pathWords';
+import { isReviewPath, parsePath, pathsInWords, pathWords } from '../../app/review/pathWords';
 
 const draft = { oils: [{ name: 'In-service oil' }, { name: '  ' }], loadCases: [{ name: 'Hard-rock peak' }] };
 
@@ -16,6 +16,8 @@ describe('field paths in words', () => {
     expect(pathWords('gearPair.wheel.teeth', draft)).toBe('Gear pair · Wheel: Teeth z2');
     expect(pathWords('oils[3]', draft)).toBe('Oils · oil 4');
     expect(pathWords('(file)', draft)).toBe('The file');
+    expect(isReviewPath('gearPair.centerDistance_mm')).toBe(true);
+    expect(isReviewPath('faceWidth')).toBe(false); // an engine quantity, not a review path
     expect(pathWords('gearPair.pinion.roughnessRa_um', null, 'us')).toMatch(/^Gear pair · Pinion: Flank roughness/);
   });
 

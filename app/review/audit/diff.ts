@@ -7,7 +7,7 @@
  * the editor empties with another edit (followingInputs.ts) is named on that edit's line. Pure.
  */
 import { canonicalJson } from '../canonicalJson';
-import { fieldLabel, inputLabelOf, panelOf, type InputLabel, type InputPanel, type InputPath } from '../inputLabels';
+import { fieldLabel, inputLabelOf, memberOf, panelOf, type InputLabel, type InputPanel, type InputPath } from '../inputLabels';
 import { FOLLOWING_INPUTS } from '../followingInputs';
 import { formatPath } from '../parse';
 import type { SignedState } from '../schema';
@@ -83,7 +83,8 @@ function walk(b: Json, a: Json, segs: InputPath, prefix: string, out: InputChang
 }
 
 function leaf(kind: ChangeKind, segs: InputPath, prefix: string, before: Json, after: Json): InputChange {
-  const member = segs[0] === 'gearPair' && (segs[1] === 'pinion' || segs[1] === 'wheel') ? (segs[1] === 'pinion' ? 'Pinion: ' : 'Wheel: ') : '';
+  const gear = memberOf(segs);
+  const member = gear ? `${gear}: ` : '';
   return { kind, path: formatPath(segs), segments: segs, panel: panelOf(segs), label: `${prefix}${member}${fieldLabel(segs)}`, field: inputLabelOf(segs), before, after };
 }
 

@@ -16,7 +16,7 @@ import { ehlPointSetup } from '../app/review/ehlPoint';
 import { lineContactEhl } from '../app/engine/ehl/lineContactEhl';
 import { runFleet } from '../app/fleet/fleet';
 import { smallestCover, type CoverCandidate } from '../app/fleet/cover';
-import { floorLoop, type OpCount } from './bench/floor';
+import { floorLoop, opCount, type OpArguments } from './bench/floor';
 import { fleetWorkload, largestReviews, parsed, planetaryWorkload, rawDemo, recomputeEdits, recomputeWorkload } from './bench/workloads';
 import type { Review } from '../app/review/schema';
 import { consoleTable, type BenchResults } from './bench/targets';
@@ -75,11 +75,12 @@ function coverWorstMs(): number {
   return worst;
 }
 
-/** The transcendental operations of one recompute, counted in a child process (scripts/bench/floor.ts). */
-function countedOps(): OpCount {
-  const child = spawnSync(process.execPath, ['--import', 'tsx', 'scripts/bench/opCountChild.ts'], { encoding: 'utf8' });
-  if (child.status !== 0) throw new Error(`counting the recompute's operations failed: ${child.stderr.slice(-800)}`);
-  return JSON.parse(child.stdout) as OpCount;
+/** The transcendental operations of one recompute and their arguments, recorded in a child process (scripts/bench/floor.ts). */
+function recordedOps(): OpArguments {
+  const child = spawnSync(process.execPath, ['--import', 'tsx', 'scripts/bench/opCountChild.ts'], { encoding: 'utf8', maxBuffer: 1 << 26 });
+  if (child.status !== 0) throw new Error(`recording the recompute's operations failed: ${child.stderr.slice(-800)}`);
+  const parsed = JSON.parse(child.stdout) as Record<string, number[]>;
+  return Object.fromEntries(Object.entries(parsed).map(([k, a]) => [k, Float64Array.from(a)]));
 }
 
 function engineFigures(): Record<string, unknown> {
@@ -90,9 +91,11 @@ function engineFigures(): Record<string, unknown> {
     return () => run(reviews[k++ % reviews.length] as Review);
   };
   // The recompute and its floor are timed turn about, so both see the same load on a shared machine.
-  const ops = countedOps();
+  const ops = recordedOps();
   let sink = 0;
-  const [recompute, floor] = interleaved(cycle(recomputeEdits(400, 16)), () => (sink += floorLoop(ops)), 200);
+  // A fresh process takes some 200 recomputes to settle (JIT tiers, the young generation growing:
+  // medians of 2.0, 1.0, then 0.7–0.8 ms per hundred here), so 500 turns warm up before 300 are timed.
+  const [recompute, floor] = interleaved(cycle(recomputeEdits(400, 16)), () => (sink += floorLoop(ops)), 300, 500);
   const cold = time(cycle(recomputeEdits(400, 400, true)), 150, 50);
   const scaling: Record<string, number> = {};
   for (const n of [100, 200, 400, 800]) scaling[String(n)] = median(time(cycle(recomputeEdits(n, 16)), 60, 20));
@@ -125,7 +128,7 @@ function engineFigures(): Record<string, unknown> {
     recompute_cold_ms_median: median(cold),
     floor_ms_median: median(floor),
     floor_ratio: median(recompute) / median(floor),
-    transcendental_ops_per_recompute: ops,
+    transcendental_ops_per_recompute: opCount(ops),
     scaling,
     scaling_800_over_400: (scaling['800'] as number) / (scaling['400'] as number),
     planetary_recompute_ms: median(planetaryTimes),

@@ -80,6 +80,10 @@ const guard = createCloseGuard({
 });
 
 let services: ReturnType<typeof createServices>;
+// The record is made in a standing worker thread: main's event loop (and so the window) stays free.
+const report = createReportPort(paths.fonts, { file: join(__dirname, 'recordWorker.cjs') });
+/** After the window shows, the record worker warms up (a record thrown away), so the first export is as quick as later ones. */
+const RECORD_WARM_UP_DELAY_MS = 4000;
 
 function rebuildMenu(recent: readonly string[]): void {
   const template = menuTemplate({
@@ -124,8 +128,7 @@ async function start(): Promise<void> {
     clock: () => new Date(),
     appVersion: app.getVersion(),
     platform: process.platform,
-    // The record is made in a worker thread: main's event loop (and so the window) stays free.
-    report: createReportPort(paths.fonts, { file: join(__dirname, 'recordWorker.cjs') }),
+    report,
     readOnlyDirs: [paths.demo],
     onDocumentState: (state) => {
       guard.setState(state);
@@ -153,7 +156,10 @@ function createWindow(): void {
   w.on('closed', () => {
     if (win === w) win = null;
   });
-  w.once('ready-to-show', () => w.show());
+  w.once('ready-to-show', () => {
+    w.show();
+    setTimeout(() => void report.warmRecord?.(), RECORD_WARM_UP_DELAY_MS).unref();
+  });
   w.webContents.on('did-finish-load', () => {
     if (pendingOpen) send({ command: 'open', path: pendingOpen });
     pendingOpen = null;
@@ -166,6 +172,8 @@ function createWindow(): void {
   });
   void w.loadURL(APP_URL);
 }
+
+app.on('will-quit', () => report.stopRecordWorker?.());
 
 app.on('window-all-closed', () => {
   if (process.platform !== 'darwin') app.quit();

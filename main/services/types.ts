@@ -35,6 +35,10 @@ export interface RecordProgress {
 export interface ReportPort {
   /** The record; rejects with ExportCanceled when `signal` aborts, with UserError for a review it cannot draw or compute. */
   renderRecord(review: Review, options: { paper: Paper; onProgress?: (p: RecordProgress) => void; signal?: AbortSignal }): Promise<Uint8Array>;
+  /** Where records are made in a standing worker: start it and make a record to throw away, so the first export is warm. */
+  warmRecord?(): Promise<void>;
+  /** Where records are made in a standing worker: stop it (at quit). */
+  stopRecordWorker?(): void;
   /** The along-path CSV of every case, in the review's display units. */
   casesCsv(results: Results, units: Review['displayUnits']): string;
   /** The fleet record; app/report's own when not injected. */

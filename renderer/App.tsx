@@ -71,7 +71,7 @@ export function App({ bridge }: { readonly bridge: Bridge }) {
   const [recovery, setRecovery] = useState<Recovery | null>(null);
   const [info, setInfo] = useState<{ title: string; lines: string[] } | null>(null);
   const [view, setView] = useState<'review' | 'fleet'>('review');
-  const actions = useDocumentActions({ bridge, doc, review, dispatch, setUnits });
+  const actions = useDocumentActions({ bridge, doc, review, dispatch, setUnits, units });
   usePersistence(bridge, doc);
 
   // Opening: offer recovery of kept edits, else the demo.

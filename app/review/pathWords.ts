@@ -67,3 +67,17 @@ export function pathsInWords(message: string, system: 'si' | 'us' = 'si'): strin
     return last.replace(/_[A-Za-z0-9]+$/, '').replace(/([a-z])([A-Z])/g, '$1 $2').toLowerCase();
   });
 }
+
+/** A path that leads a line of a message, with what comes before it (a list mark) and the colon after it. */
+const LEADING_PATH = new RegExp(`^(\\s*(?:[-•]\\s*)?)((?:${HEADS})(?:\\[\\d+\\]|\\.[A-Za-z][A-Za-z0-9_]*)*|\\(file\\))(?=:)`, 'gm');
+
+/**
+ * A message for the screen: a path that leads a line ("loadCases[0].name: …", as a list of problems
+ * gives them) becomes where the field is in words, by its entry's name in the draft ("Duty ·
+ * Crusher peak: Name: …"); any other path in it becomes the field's label (pathsInWords).
+ */
+export function messageInWords(message: string, draft: unknown, system: 'si' | 'us' = 'si'): string {
+  const marked = message.replace(LEADING_PATH, (_m, lead: string, path: string) => `${lead}\u0000${pathWords(path, draft, system)}\u0001`);
+  // Words already put in stay as they are; only the rest of each line is searched for paths.
+  return marked.replace(/\u0000([^\u0001]*)\u0001|([^\u0000]+)/g, (_m, words: string | undefined, rest: string | undefined) => words ?? pathsInWords(rest ?? '', system));
+}

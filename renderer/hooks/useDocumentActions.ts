@@ -1,6 +1,7 @@
 import { useCallback, useEffect, useState } from 'react';
 import type { Bridge } from '../../app/bridge/contract';
 import { formatIssues, parseReviewText } from '../../app/review/parse';
+import { messageInWords } from '../../app/review/pathWords';
 import type { Review } from '../../app/review/schema';
 import type { SignoffForm } from '../components/signoff/words';
 import { draftText, type DocAction, type DocState, type Draft } from '../state/reviewState';
@@ -18,6 +19,8 @@ interface Deps {
   readonly review: Review | null;
   readonly dispatch: React.Dispatch<DocAction>;
   readonly setUnits: (u: UnitSystem) => void;
+  /** The units labels are given in. */
+  readonly units: UnitSystem;
 }
 
 /** The parsed review as the draft (defaults written out), or the raw JSON if the schema refuses it. */
@@ -26,15 +29,15 @@ function draftOf(text: string): { draft: Draft | null; problem: string | null; u
   if (parsed.ok) return { draft: JSON.parse(JSON.stringify(parsed.review)) as Draft, problem: null, units: parsed.review.displayUnits };
   try {
     const raw = JSON.parse(text) as unknown;
-    if (raw && typeof raw === 'object' && !Array.isArray(raw)) return { draft: raw as Draft, problem: `The review has problems, marked at the fields:\n${formatIssues(parsed.issues)}`, units: 'si' };
+    if (raw && typeof raw === 'object' && !Array.isArray(raw)) return { draft: raw as Draft, problem: `The review has problems, marked at the fields:\n${messageInWords(formatIssues(parsed.issues), raw)}`, units: 'si' };
   } catch {
     // not JSON: nothing to edit
   }
-  return { draft: null, problem: formatIssues(parsed.issues), units: 'si' };
+  return { draft: null, problem: messageInWords(formatIssues(parsed.issues), null), units: 'si' };
 }
 
 /** Open, save, export and sign through the bridge, with what is going on and what came of it. */
-export function useDocumentActions({ bridge, doc, review, dispatch, setUnits }: Deps) {
+export function useDocumentActions({ bridge, doc, review, dispatch, setUnits, units }: Deps) {
   const [busy, setBusy] = useState<Busy>(null);
   const [notice, setNotice] = useState<Notice | null>(null);
   const [progress, setProgress] = useState<{ done: number; total: number } | null>(null);
@@ -48,13 +51,14 @@ export function useDocumentActions({ bridge, doc, review, dispatch, setUnits }: 
         const text = await job();
         if (text) setNotice({ kind: 'info', text });
       } catch (e) {
-        setNotice({ kind: 'error', text: (e as Error).message });
+        // A service names fields by their paths (they stay in --json); the screen names them in words.
+        setNotice({ kind: 'error', text: messageInWords((e as Error).message, doc.draft, units) });
       } finally {
         setBusy(null);
         setProgress(null);
       }
     },
-    [],
+    [doc.draft, units],
   );
 
   const load = useCallback(

@@ -112,4 +112,26 @@ describe('sign-off and record, by keyboard alone', () => {
     await expect.poll(() => status(page), { timeout: WAIT }).toBe('signed');
     expect(s.pageErrors).toEqual([]);
   });
+
+  it('a load-case name the record cannot draw: no record, and the notice names the field in words, not by its path', async () => {
+    const { page, harness } = s;
+    const name = field(page, 'loadCases[0].name');
+    const before = await name.inputValue();
+    const e0 = await edition(page);
+    await name.fill(`${before} 齿`);
+    await name.press('Tab');
+    await waitForNewResults(page, e0);
+    await page.locator('[data-testid=export-record]').click();
+    const notice = page.locator('[data-testid=notice]');
+    await expect.poll(() => notice.textContent().catch(() => ''), { timeout: WAIT }).toContain('cannot draw "齿"');
+    const text = (await notice.textContent()) ?? '';
+    expect(text).toContain(`Duty · ${before} 齿: Name`);
+    expect(text).not.toMatch(/loadCases\[|\w\[\d+\]\./);
+    expect(existsSync(join(harness.workDir, 'record.pdf'))).toBe(true); // the earlier record, not overwritten by a failed one
+    const e1 = await edition(page);
+    await name.fill(before);
+    await name.press('Tab');
+    await waitForNewResults(page, e1);
+    expect(s.pageErrors).toEqual([]);
+  });
 });

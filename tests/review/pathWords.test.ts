@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { formatPath } from '../../app/review/fieldPath';
-import { isReviewPath, parsePath, pathsInWords, pathWords } from '../../app/review/pathWords';
+import { isReviewPath, messageInWords, parsePath, pathsInWords, pathWords } from '../../app/review/pathWords';
+import { undrawableMessage } from '../../app/report/glyphCoverage';
 
 const draft = { oils: [{ name: 'In-service oil' }, { name: '  ' }], loadCases: [{ name: 'Hard-rock peak' }] };
 
@@ -31,5 +32,17 @@ describe('field paths in words', () => {
     expect(pathsInWords('policy.pathPoints = 5 must be a whole number')).toMatch(/^Points along the path = 5/);
     expect(pathsInWords('gearPair.faceWidthX_mm must be positive')).toBe('face width x must be positive');
     expect(pathsInWords('no path here, 3.5 mm')).toBe('no path here, 3.5 mm');
+  });
+
+  it('a message for the screen: a path leading a line is named with its entry, other paths by their labels', () => {
+    // The record's refusal as the services give it (paths, as --json keeps them), then as the screen shows it.
+    const refusal = `no record made:\n${undrawableMessage([{ path: 'loadCases[0].name', char: '齿' }, { path: 'oils[1].name', char: '🔥' }])}`;
+    const shown = messageInWords(refusal, draft);
+    expect(shown).toContain('\nDuty · Hard-rock peak: Name: the record\'s font (DejaVu Sans) cannot draw "齿" (U+9F7F)');
+    expect(shown).toContain('\nOils · oil 2: Name: the record\'s font (DejaVu Sans) cannot draw "🔥" (U+1F525)');
+    expect(messageInWords('gearPair.pinion.teeth: 5 is below 6 (with gearPair.wheel.teeth)', draft)).toBe('Gear pair · Pinion: Teeth z1: 5 is below 6 (with Teeth z2)');
+    expect(messageInWords('  - (file): not JSON', draft)).toBe('  - The file: not JSON');
+    expect(messageInWords('no paths here: λ = 0.8', draft)).toBe('no paths here: λ = 0.8');
+    for (const m of [refusal, 'loadCases[0]: the speed (loadCases[0].pinionSpeed_rpm, gearPair.faceWidth_mm)']) expect(messageInWords(m, draft)).not.toMatch(/\w\[\d+\]|\.[a-z]\w*_|gearPair\./);
   });
 });

@@ -8,7 +8,7 @@ import { toDisplay, unitLabel, type QuantityKind, type UnitSystem } from '../../
 import { trapTab } from '../focusTrap';
 import { FilmChart } from './FilmChart';
 import { filmChartSpec } from './filmChart';
-import { pathsInWords } from '../../../app/review/pathWords';
+import { messageInWords, pathsInWords } from '../../../app/review/pathWords';
 
 interface Props {
   readonly review: Review;
@@ -80,7 +80,7 @@ export function FilmDetail({ review, point, units, onClose }: Props) {
       </p>
       {state.phase === 'done' ? <Solved r={state.result} units={units} /> : null}
       {state.phase === 'running' || state.phase === 'idle' ? <p className="note" role="status">Solving the film…</p> : null}
-      {state.phase === 'failed' ? <p className="problem" role="alert">{state.message}</p> : null}
+      {state.phase === 'failed' ? <p className="problem" role="alert">{messageInWords(state.message, review, units)}</p> : null}
       <div className="dialog__buttons">
         <button type="button" className="primary" onClick={() => ref.current?.close()}>Close</button>
       </div>

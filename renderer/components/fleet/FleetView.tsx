@@ -1,7 +1,7 @@
 import { memo, useState } from 'react';
 import type { ReviewIssue } from '../../../app/review/parse';
 import { friendlyMessage } from '../../state/messages';
-import { pathWords } from '../../../app/review/pathWords';
+import { messageInWords, pathWords } from '../../../app/review/pathWords';
 import type { Bridge } from '../../../app/bridge/contract';
 import { useFleet } from '../../hooks/useFleet';
 import { Panel } from '../panels/Panel';
@@ -36,7 +36,7 @@ function FleetViewPanel({ bridge, paper, hidden }: { readonly bridge: Bridge; re
     setNotice('Making the fleet record…');
     fleet.exportRecord(paper).then(
       (m) => setNotice(m),
-      (e: unknown) => setNotice(`No record made: ${(e as Error).message}`),
+      (e: unknown) => setNotice(`No record made: ${messageInWords((e as Error).message, null)}`),
     );
   };
   return (

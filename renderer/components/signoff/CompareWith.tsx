@@ -2,6 +2,7 @@ import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
 import { diffInputs } from '../../../app/review/audit/diff';
 import { inputsOf } from '../../../app/review/audit/signedState';
 import { formatIssues, parseReviewText } from '../../../app/review/parse';
+import { messageInWords } from '../../../app/review/pathWords';
 import type { Review } from '../../../app/review/schema';
 import type { UnitSystem } from '../../units/units';
 import { ChangeList } from './ChangeList';
@@ -29,13 +30,13 @@ export function CompareWith({ review, units, pickOther, request }: Props) {
       const text = await pickOther();
       if (text === null) return;
       const parsed = parseReviewText(text);
-      setOther(parsed.ok ? { review: parsed.review } : { error: `That file is not a review this Flankfilm can compare:\n${formatIssues(parsed.issues)}` });
+      setOther(parsed.ok ? { review: parsed.review } : { error: `That file is not a review this Flankfilm can compare:\n${messageInWords(formatIssues(parsed.issues), null, units)}` });
     } catch (e) {
-      setOther({ error: (e as Error).message });
+      setOther({ error: messageInWords((e as Error).message, null, units) });
     } finally {
       setBusy(false);
     }
-  }, [pickOther]);
+  }, [pickOther, units]);
   const seen = useRef(request);
   useEffect(() => {
     if (request === seen.current) return;

@@ -1,4 +1,5 @@
 import { memo, useEffect, useRef, useState, type FormEvent } from 'react';
+import { messageInWords } from '../../../app/review/pathWords';
 import { DECISIONS, type Signoff } from '../../../app/review/schema';
 import { trapTab } from '../focusTrap';
 import { DECISION_WORDS } from '../../../app/review/vocabulary';
@@ -47,7 +48,7 @@ function SignoffDialogView({ open, previous, subject, onClose, onSign }: Props) 
     try {
       await onSign(form);
     } catch (err) {
-      setError((err as Error).message);
+      setError(messageInWords((err as Error).message, null));
     } finally {
       setBusy(false);
     }

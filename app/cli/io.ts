@@ -16,7 +16,7 @@ export const USAGE = `usage:
   flankfilm diff REVIEW [OTHER] [--json]   changes since signing, or from REVIEW to OTHER (exit 0 none, 3 some)
   flankfilm schema [--oils]
   flankfilm fleet FILES|DIR --oils CANDIDATES [--json] [--csv OUT] [--pdf OUT] [--paper a4|letter]
-  flankfilm new [spur|helical] FILE
+  flankfilm new [spur|helical|internal|planetary] FILE
   flankfilm demo [DIR]
   flankfilm ehl REVIEW --case NAME [--oil NAME] --at A|B|C|D|E|lambda-min|POSITION_mm [--nodes N] [--law roelands|barus] [--json]
 `;

@@ -9,7 +9,7 @@ import { BASE_OILS, CHEMISTRIES } from '../engine/oil/types';
 import { COMPONENTS, FILM_FORMULAS } from './schema';
 
 /** Panels of the sheet that hold inputs (NAMES.md), plus the record's identity. */
-export const INPUT_PANELS = ['Gear pair', 'Duty', 'Oils', 'Policy', 'Record details'] as const;
+export const INPUT_PANELS = ['Gear set', 'Duty', 'Oils', 'Policy', 'Record details'] as const;
 export type InputPanel = (typeof INPUT_PANELS)[number];
 
 /** Quantities whose unit follows the SI / US switch (the renderer's QuantityKind has them all). */
@@ -198,10 +198,15 @@ export function fieldLabel(path: InputPath, system: 'si' | 'us' = 'si'): string 
   return system === 'us' && l.usLabel ? l.usLabel : l.label;
 }
 
-/** 'Pinion' or 'Wheel' for a field of one gear of the pair, else null. */
-export function memberOf(path: InputPath): 'Pinion' | 'Wheel' | null {
-  return path[0] === 'gearPair' && (path[1] === 'pinion' || path[1] === 'wheel') ? (path[1] === 'pinion' ? 'Pinion' : 'Wheel') : null;
+/** The gear a field belongs to: 'Pinion' or 'Wheel' of a pair, 'Sun', 'Planet' or 'Ring' of a planetary stage; else null. */
+export function memberOf(path: InputPath): GearMemberName | null {
+  if (path[0] === 'gearPair' && (path[1] === 'pinion' || path[1] === 'wheel')) return path[1] === 'pinion' ? 'Pinion' : 'Wheel';
+  if (path[0] === 'planetary' && (path[1] === 'sun' || path[1] === 'planet' || path[1] === 'ring')) return PLANETARY_MEMBERS[path[1]];
+  return null;
 }
+
+export type GearMemberName = 'Pinion' | 'Wheel' | 'Sun' | 'Planet' | 'Ring';
+const PLANETARY_MEMBERS = { sun: 'Sun', planet: 'Planet', ring: 'Ring' } as const;
 
 /** The panel on which a path's field sits. */
 export function panelOf(path: InputPath): InputPanel {
@@ -209,7 +214,7 @@ export function panelOf(path: InputPath): InputPanel {
     case 'title':
     case 'gearPair':
     case 'planetary':
-      return 'Gear pair';
+      return 'Gear set';
     case 'loadCases':
       return 'Duty';
     case 'oils':

@@ -70,6 +70,6 @@ export function dutyNeed(review: Review, cases: readonly CaseResult[], grades: r
     statement:
       chemistry === 'beyond-oil'
         ? `No oil in scope gives the duty its scuffing margin: ${stagePart} needed against an EP floor of ${review.policy.epOilFzgStage}; change the design or the duty. Governed by "${gov.c.loadCase}" and the ${METHOD_WORDS[gv.governingMethod]}.`
-        : `${capitalise(CHEMISTRY_NEED_WORDS[chemistry])}, because ${chemistryReason}; ${stagePart}; ${vgPart}. Governed by "${gov.c.loadCase}" and the ${METHOD_WORDS[gv.governingMethod]}.${mpPart}`,
+        : `${capitalise(CHEMISTRY_NEED_WORDS[chemistry])}, because ${chemistryReason}; ${stagePart}; ${vgPart}${mpPart}. Governed by "${gov.c.loadCase}" and the ${METHOD_WORDS[gv.governingMethod]}.`,
   };
 }

@@ -38,10 +38,13 @@ export function pathWords(path: string, draft: unknown, system: 'si' | 'us' = 's
     rest = segs.slice(2);
   }
   const gear = memberOf(segs);
-  if (gear) parts.push(gear);
+  // The wheel of an internal pair is its ring, as the sheet calls it.
+  if (gear) parts.push(gear === 'Wheel' && isInternalPair(draft) ? 'Ring' : gear);
   const where = [panelOf(segs), ...parts].join(' · ');
   return rest.length && inputLabelOf(segs) ? `${where}: ${fieldLabel(segs, system)}` : where;
 }
+
+const isInternalPair = (draft: unknown): boolean => ((draft as { gearPair?: { kind?: unknown } } | null | undefined)?.gearPair?.kind ?? null) === 'internal';
 
 /** The top-level keys of a review whose fields a path can name. */
 const HEADS = 'gearPair|loadCases|oils|policy|planetary|displayUnits|signoff|title|reviewId|date';

@@ -255,14 +255,18 @@ export const signoffSchema = z.strictObject({
   history: z.array(earlierSignoffSchema).max(MAX_SIGNOFF_HISTORY).optional(),
 });
 
-/** A gear pair review gives every load case its pinion speed (a planetary stage gives the sun's or carrier's). */
-function pinionSpeedGiven(raw: unknown, ctx: z.RefinementCtx): void {
+/**
+ * Every load case gives the input speed of its gear set: the pinion's on a gear pair, the sun's on a
+ * planetary stage (the carrier's when the sun is held). Checked on the file as written, so a new
+ * review marks the speed at once, while other fields are still missing.
+ */
+function inputSpeedGiven(raw: unknown, ctx: z.RefinementCtx): void {
   const r = raw as { gearPair?: unknown; planetary?: unknown; loadCases?: unknown };
-  if (typeof r !== 'object' || r === null || r.gearPair === undefined || r.planetary !== undefined || !Array.isArray(r.loadCases)) return;
+  if (typeof r !== 'object' || r === null || !Array.isArray(r.loadCases) || (r.gearPair === undefined) === (r.planetary === undefined)) return;
+  const sunHeld = r.planetary !== undefined && (r.planetary as { held?: unknown } | null)?.held === 'sun';
+  const [key, why] = r.gearPair !== undefined ? ['pinionSpeed_rpm', 'is required for a gear pair'] : sunHeld ? ['carrierSpeed_rpm', 'is required when the sun is held'] : ['sunSpeed_rpm', 'is required for a planetary stage'];
   r.loadCases.forEach((c: unknown, i: number) => {
-    if (typeof c === 'object' && c !== null && (c as { pinionSpeed_rpm?: unknown }).pinionSpeed_rpm === undefined) {
-      ctx.addIssue({ code: 'custom', path: ['loadCases', i, 'pinionSpeed_rpm'], message: 'is required for a gear pair' });
-    }
+    if (typeof c === 'object' && c !== null && (c as Record<string, unknown>)[key] === undefined) ctx.addIssue({ code: 'custom', path: ['loadCases', i, key], message: why });
   });
 }
 
@@ -295,16 +299,15 @@ export const reviewSchema = z
       if (r.gearPair) {
         forbid(['sunSpeed_rpm', 'carrierSpeed_rpm', 'sunTorque_Nm'], 'belongs to a planetary stage; a gear pair gives pinionSpeed_rpm and pinionTorque_Nm or power_kW');
       } else if (r.planetary) {
+        // (the speed each case must give is checked by inputSpeedGiven)
         const sunHeld = r.planetary.held === 'sun';
-        if (sunHeld && c.carrierSpeed_rpm === undefined) need('carrierSpeed_rpm', 'is required when the sun is held');
-        if (!sunHeld && c.sunSpeed_rpm === undefined) need('sunSpeed_rpm', 'is required for a planetary stage');
         forbid(sunHeld ? ['sunSpeed_rpm'] : ['carrierSpeed_rpm'], sunHeld ? 'must be absent: the sun is held' : 'is given only when the sun is held; give sunSpeed_rpm');
         forbid(['pinionSpeed_rpm', 'pinionTorque_Nm'], 'belongs to a gear pair; a planetary stage gives sunSpeed_rpm and sunTorque_Nm or power_kW');
       }
     });
   })
-  // Checked even while other fields are missing, so a new review marks the pinion speed at once.
-  .check(z.superRefine(pinionSpeedGiven, { when: () => true }));
+  // Checked even while other fields are missing, so a new review marks the input speed at once.
+  .check(z.superRefine(inputSpeedGiven, { when: () => true }));
 
 /** A review as written in a file (defaults may be absent). */
 export type ReviewInput = z.input<typeof reviewSchema>;

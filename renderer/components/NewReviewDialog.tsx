@@ -1,5 +1,5 @@
 import { useEffect, useRef, useState } from 'react';
-import { TEMPLATES, TEMPLATE_WORDS, TO_FILL_IN, type TemplateKind } from '../../app/review/templates';
+import { TEMPLATES, TEMPLATE_WORDS, toFillIn, type TemplateKind } from '../../app/review/templates';
 import { trapTab } from './focusTrap';
 
 interface Props {
@@ -29,16 +29,10 @@ export function NewReviewDialog({ dirty, onStart, onClose }: Props) {
             </span>
           </label>
         ))}
-        <label className="radio">
-          <input type="radio" name="template" value="planetary" disabled aria-describedby="new-planetary" />
-          <span>
-            <strong>Planetary stage</strong> <span id="new-planetary">— not available yet</span>
-          </span>
-        </label>
       </fieldset>
       <p>The template holds engineering defaults only. You fill in:</p>
       <ul>
-        {TO_FILL_IN.map((t) => (
+        {toFillIn(kind).map((t) => (
           <li key={t}>{t}</li>
         ))}
       </ul>

@@ -2,12 +2,13 @@ import { describe, expect, it } from 'vitest';
 import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { parseReviewText } from '../../app/review/parse';
+import { parseReviewText, parseReviewValue } from '../../app/review/parse';
+import { run } from '../../app/review/run';
 import { cli } from './cliHarness';
 
 const dir = () => mkdtempSync(join(tmpdir(), 'flankfilm-new-'));
 
-describe('flankfilm new [spur|helical] FILE', () => {
+describe('flankfilm new [spur|helical|internal|planetary] FILE', () => {
   it('writes a spur template with engineering defaults only: nothing of the demo, and it does not compute until filled in', async () => {
     const file = join(dir(), 'pair.flankfilm.json');
     const r = await cli('new', 'spur', file);
@@ -51,5 +52,39 @@ describe('flankfilm new [spur|helical] FILE', () => {
     const bad = await cli('new', 'planetary', 'a.json', 'b.json');
     expect(bad.code).toBe(2);
     expect(bad.err).toMatch(/usage/);
+  });
+
+  it('internal and planetary templates: the user\'s values are left out and marked; filled with the invented demo\'s values they compute', async () => {
+    const d = dir();
+    expect((await cli('new', 'internal', join(d, 'i.json'))).code).toBe(0);
+    const planetary = await cli('new', 'planetary', join(d, 'p.json'));
+    expect(planetary.code).toBe(0);
+    expect(planetary.out).toContain('planetary stage template');
+    expect(planetary.out).toContain('number of planets, the member held');
+    const internal = JSON.parse(readFileSync(join(d, 'i.json'), 'utf8'));
+    expect(internal.gearPair.kind).toBe('internal');
+    const stage = JSON.parse(readFileSync(join(d, 'p.json'), 'utf8'));
+    expect(stage.gearPair).toBeUndefined();
+    for (const [raw, paths] of [
+      [internal, ['gearPair.normalModule_mm', 'gearPair.wheel.teeth', 'loadCases[0].pinionSpeed_rpm', 'oils[0].kv40_mm2s']],
+      [stage, ['planetary.normalModule_mm', 'planetary.planets', 'planetary.held', 'planetary.sun.teeth', 'planetary.ring.roughnessRa_um', 'loadCases[0].sunSpeed_rpm', 'oils[1].fzgFailureStage']],
+    ] as const) {
+      const parsed = parseReviewValue(raw);
+      expect(parsed.ok).toBe(false);
+      if (!parsed.ok) for (const p of paths) expect(parsed.issues.map((i) => i.path)).toContain(p);
+    }
+    // The planetary template with the user's values of the invented demo's ball mill (from the demo file).
+    const demo = JSON.parse(readFileSync('assets/demo/harrow-creek-ball-mill-planetary.flankfilm.json', 'utf8'));
+    const filled = {
+      ...stage,
+      planetary: { ...stage.planetary, ...demo.planetary },
+      loadCases: [{ ...stage.loadCases[0], ...demo.loadCases[0], timeShare: 1 }],
+      oils: demo.oils.slice(0, 2),
+    };
+    const ok = parseReviewValue(filled);
+    if (!ok.ok) throw new Error(JSON.stringify(ok.issues));
+    const results = run(ok.review);
+    expect(results.meshes).toHaveLength(2);
+    expect(results.cases.length).toBeGreaterThan(0);
   });
 });

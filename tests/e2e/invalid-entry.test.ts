@@ -64,7 +64,7 @@ describe('an invalid entry', () => {
     await typeInto(centre, '100');
     // Base circles of 4 mm module, 23/88 teeth overlap at a = 100 mm: the geometry raises EngineInputError for this field.
     await expect.poll(() => messageOf(page, centre), { timeout: WAIT }).toMatch(/The centre distance 100\.000 mm is impossible/);
-    await expect(page.locator('[data-testid=engine-error]').textContent()).resolves.toMatch(/^Gear pair: Centre distance a: The centre distance 100\.000 mm is impossible/);
+    await expect(page.locator('[data-testid=engine-error]').textContent()).resolves.toMatch(/^Gear set: Centre distance a: The centre distance 100\.000 mm is impossible/);
     await expect(page.locator('[data-testid=engine-error]').textContent()).resolves.not.toContain('centerDistance_mm');
     await expect.poll(() => page.locator('.sheet__findings').getAttribute('data-stale')).toBe('true');
     expect(await resultValue(page.locator('[data-testid=mesh-max-hertz]'))).toBe(good);

@@ -24,8 +24,8 @@ describe('New review', () => {
     await page.keyboard.press('Control+n');
     await expect.poll(() => dialogOpen(page)).toBe(true);
     await expect(page.locator('[data-testid=new-review-discard]').textContent()).resolves.toContain('unsaved edits');
-    // the planetary stage is offered but not yet available
-    await expect(page.getByRole('radio', { name: /Planetary stage/ }).isDisabled()).resolves.toBe(true);
+    // every kind of gear set can be started: spur, helical, internal pair, planetary stage
+    for (const name of [/Spur pair/, /Helical pair/, /Internal pair/, /Planetary stage/]) await expect(page.getByRole('radio', { name }).isDisabled()).resolves.toBe(false);
     await shoot(page.locator('[data-testid=new-review]'), 'new-review-dialog');
     await page.locator('[data-testid=new-review]').getByRole('button', { name: 'Cancel' }).click();
     await expect.poll(() => dialogOpen(page)).toBe(false);
@@ -130,6 +130,46 @@ describe('New review', () => {
     // pdfdetach lists the attached review by the id's name.
     const attached = execFileSync('pdfdetach', ['-list', pdf], { encoding: 'utf8' });
     expect(attached).toContain('PL-2026-014.flankfilm.json');
+    expect(s.pageErrors).toEqual([]);
+  });
+
+  it('a planetary stage from its template: each missing value is named by its member, and filled in it computes both meshes', async () => {
+    const { page } = s;
+    await page.getByRole('button', { name: /^New review/ }).click();
+    const dialog = page.locator('[data-testid=new-review]');
+    await dialog.getByRole('radio', { name: /Planetary stage/ }).check();
+    await expect(dialog.textContent()).resolves.toContain('number of planets, the member held');
+    await dialog.getByRole('button', { name: /start/ }).click();
+    await expect.poll(() => page.locator('[data-testid=notice]').textContent().catch(() => ''), { timeout: WAIT }).toContain('planetary stage template');
+    const problems = (await page.locator('[data-testid=problems]').textContent()) ?? '';
+    for (const member of ['Sun', 'Planet', 'Ring']) expect(problems).toContain(`Gear set · ${member}: Teeth`);
+    expect(problems).toContain('Gear set: Member held: choose one');
+    expect(problems).not.toMatch(/planetary\.|\w\[\d+\]/);
+    // The stage and its duty from the invented demo's ball mill (the file, so no numbers of its own here).
+    const demo = JSON.parse(readFileSync(join('assets/demo', 'harrow-creek-ball-mill-planetary.flankfilm.json'), 'utf8'));
+    const st = demo.planetary;
+    const lc = demo.loadCases[0];
+    for (const [path, v] of [
+      ['planetary.normalModule_mm', st.normalModule_mm],
+      ['planetary.faceWidth_mm', st.faceWidth_mm],
+      ['planetary.planets', st.planets],
+      ...(['sun', 'planet', 'ring'] as const).flatMap((m) => [[`planetary.${m}.teeth`, st[m].teeth], [`planetary.${m}.roughnessRa_um`, st[m].roughnessRa_um]]),
+      ['loadCases[0].sunSpeed_rpm', lc.sunSpeed_rpm],
+      ['loadCases[0].power_kW', lc.power_kW],
+      ['loadCases[0].oilTemperature_C', lc.oilTemperature_C],
+      ...[0, 1].flatMap((i) => [[`oils[${i}].kv40_mm2s`, demo.oils[i].kv40_mm2s], [`oils[${i}].kv100_mm2s`, demo.oils[i].kv100_mm2s], [`oils[${i}].density15_kgm3`, demo.oils[i].density15_kgm3]]),
+    ] as Array<[string, number]>) await enter(page, path, String(v));
+    const ringHeld = await field(page, 'planetary.held').locator('option', { hasText: /^Ring held/ }).getAttribute('value');
+    await field(page, 'planetary.held').selectOption(ringHeld ?? '');
+    for (const i of [0, 1]) {
+      await field(page, `oils[${i}].baseOil`).selectOption({ label: 'Mineral' });
+      await field(page, `oils[${i}].chemistry`).selectOption({ label: 'EP, extreme pressure (DIN 51517-3 CLP)' });
+      await field(page, `oils[${i}].fzgFailureStage`).selectOption({ label: '12' });
+    }
+    await waitForResults(page);
+    await expect(page.locator('[data-testid=problems]').count()).resolves.toBe(0);
+    const verdict = (await page.locator('[data-panel=verdict]').textContent()) ?? '';
+    expect(verdict).toMatch(/sun–planet|planet–ring/);
     expect(s.pageErrors).toEqual([]);
   });
 });

@@ -41,6 +41,15 @@ describe('governing case', () => {
     expect(r.need?.fzgStageIntegral).toBeNull();
     expect(r.need?.methods).toBe('flash');
   });
+  it('the need reads as sentences: the micropitting part inside the first, each sentence ending in a full stop', () => {
+    const r = run(review({ scuffingMethods: 'both' }));
+    const statement = r.need?.statement ?? '';
+    expect(r.need?.micropittingStage).not.toBeNull(); // the micropitting need is known, so its part is in the statement
+    expect(statement).toContain('against micropitting');
+    expect(statement).not.toMatch(/\.;|\)\s+[A-Z]|;\s*$/);
+    expect(statement).toMatch(/\.$/);
+    expect(statement.indexOf('against micropitting')).toBeLessThan(statement.indexOf('Governed by'));
+  });
 });
 
 describe('the retired integral-method calibration', () => {

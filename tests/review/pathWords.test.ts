@@ -14,16 +14,21 @@ describe('field paths in words', () => {
     expect(pathWords('oils[0].baseOil', draft)).toBe('Oils · In-service oil: Base oil');
     expect(pathWords('oils[1].kv40_mm2s', draft)).toBe('Oils · oil 2: Viscosity at 40 °C');
     expect(pathWords('loadCases[0].pinionTorque_Nm', draft)).toMatch(/^Duty · Hard-rock peak: Pinion torque/);
-    expect(pathWords('gearPair.wheel.teeth', draft)).toBe('Gear pair · Wheel: Teeth z2');
+    expect(pathWords('gearPair.wheel.teeth', draft)).toBe('Gear set · Wheel: Teeth z2');
     expect(pathWords('oils[3]', draft)).toBe('Oils · oil 4');
+    // A planetary stage's members, and the ring of an internal pair, as the sheet names them.
+    expect(pathWords('planetary.sun.roughnessRa_um', null)).toMatch(/^Gear set · Sun: Flank roughness Ra/);
+    expect(pathWords('planetary.ring.teeth', null)).toMatch(/^Gear set · Ring: Teeth/);
+    expect(pathWords('planetary.planet.teeth', null)).toMatch(/^Gear set · Planet: Teeth/);
+    expect(pathWords('gearPair.wheel.teeth', { gearPair: { kind: 'internal' } })).toBe('Gear set · Ring: Teeth z2');
     expect(pathWords('(file)', draft)).toBe('The file');
     expect(isReviewPath('gearPair.centerDistance_mm')).toBe(true);
     expect(isReviewPath('faceWidth')).toBe(false); // an engine quantity, not a review path
-    expect(pathWords('gearPair.pinion.roughnessRa_um', null, 'us')).toMatch(/^Gear pair · Pinion: Flank roughness/);
+    expect(pathWords('gearPair.pinion.roughnessRa_um', null, 'us')).toMatch(/^Gear set · Pinion: Flank roughness/);
   });
 
   it('never shows a path: every label of the file has words, and an unknown path falls back to its panel', () => {
-    expect(pathWords('gearPair.somethingNew', draft)).toBe('Gear pair');
+    expect(pathWords('gearPair.somethingNew', draft)).toBe('Gear set');
     for (const p of ['oils[0].baseOil', 'loadCases[0].oilTemperature_C', 'policy.lambdaTarget', 'gearPair.normalModule_mm']) expect(pathWords(p, draft)).not.toMatch(/[[\]_]|\.\w/);
   });
 
@@ -40,7 +45,7 @@ describe('field paths in words', () => {
     const shown = messageInWords(refusal, draft);
     expect(shown).toContain('\nDuty · Hard-rock peak: Name: the record\'s font (DejaVu Sans) cannot draw "齿" (U+9F7F)');
     expect(shown).toContain('\nOils · oil 2: Name: the record\'s font (DejaVu Sans) cannot draw "🔥" (U+1F525)');
-    expect(messageInWords('gearPair.pinion.teeth: 5 is below 6 (with gearPair.wheel.teeth)', draft)).toBe('Gear pair · Pinion: Teeth z1: 5 is below 6 (with Teeth z2)');
+    expect(messageInWords('gearPair.pinion.teeth: 5 is below 6 (with gearPair.wheel.teeth)', draft)).toBe('Gear set · Pinion: Teeth z1: 5 is below 6 (with Teeth z2)');
     expect(messageInWords('  - (file): not JSON', draft)).toBe('  - The file: not JSON');
     expect(messageInWords('no paths here: λ = 0.8', draft)).toBe('no paths here: λ = 0.8');
     for (const m of [refusal, 'loadCases[0]: the speed (loadCases[0].pinionSpeed_rpm, gearPair.faceWidth_mm)']) expect(messageInWords(m, draft)).not.toMatch(/\w\[\d+\]|\.[a-z]\w*_|gearPair\./);

@@ -1,15 +1,15 @@
 import { writeFile } from 'node:fs/promises';
-import { newReview, TEMPLATES, TO_FILL_IN, type TemplateKind } from '../../review/templates';
+import { newReview, TEMPLATES, TEMPLATE_WORDS, toFillIn, type TemplateKind } from '../../review/templates';
 import { EXIT, UsageError, type CliIo } from '../io';
 
 /**
- * `flankfilm new [spur|helical] FILE`: write an unfilled review from a template. It never
+ * `flankfilm new [spur|helical|internal|planetary] FILE`: write an unfilled review from a template. It never
  * overwrites a file; the review computes once the listed values are filled in.
  */
 export async function newCommand(args: string[], io: CliIo): Promise<number> {
   const kind = (TEMPLATES as readonly string[]).includes(args[0] ?? '') ? (args[0] as TemplateKind) : null;
   const rest = kind ? args.slice(1) : args;
-  if (rest.length !== 1 || !rest[0] || rest[0].startsWith('-')) throw new UsageError(`give the template (${TEMPLATES.join(' or ')}, default spur) and one FILE to write`);
+  if (rest.length !== 1 || !rest[0] || rest[0].startsWith('-')) throw new UsageError(`give the template (${TEMPLATES.join(', ')}; default spur) and one FILE to write`);
   const file = rest[0];
   try {
     await writeFile(file, `${JSON.stringify(newReview(kind ?? 'spur'), null, 2)}\n`, { flag: 'wx' });
@@ -18,6 +18,6 @@ export async function newCommand(args: string[], io: CliIo): Promise<number> {
     io.err(code === 'EEXIST' ? `flankfilm new: ${file} exists; not overwritten\n` : `flankfilm new: cannot write ${file} (${code ?? (e as Error).message})\n`);
     return EXIT.invalid;
   }
-  io.out(`Wrote ${file} (${kind ?? 'spur'} pair template). Fill in:\n${TO_FILL_IN.map((t) => `  - ${t}\n`).join('')}Then run: flankfilm review ${file}\n`);
+  io.out(`Wrote ${file} (${TEMPLATE_WORDS[kind ?? 'spur'].name.toLowerCase()} template). Fill in:\n${toFillIn(kind ?? 'spur').map((t) => `  - ${t}\n`).join('')}Then run: flankfilm review ${file}\n`);
   return EXIT.ok;
 }

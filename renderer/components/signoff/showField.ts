@@ -1,7 +1,7 @@
 import type { InputChange } from '../../../app/review/audit/diff';
 import type { InputPanel } from '../../../app/review/inputLabels';
 
-const PANEL_IDS: Readonly<Record<InputPanel, string | null>> = { 'Gear pair': 'gear-pair', Duty: 'duty', Oils: 'oils', Policy: 'policy', 'Record details': null };
+const PANEL_IDS: Readonly<Record<InputPanel, string | null>> = { 'Gear set': 'gear-pair', Duty: 'duty', Oils: 'oils', Policy: 'policy', 'Record details': null };
 const ITEM_IDS: Readonly<Record<string, string>> = { loadCases: 'load-case', oils: 'oil' };
 
 /** The element that shows a change on the sheet: its field, else its load case or oil, else its panel. */

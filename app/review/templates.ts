@@ -84,7 +84,7 @@ export function newReview(kind: TemplateKind): Record<string, unknown> {
     version: REVIEW_VERSION,
     title: TITLES[kind],
     revision: 0,
-    notes: `New review. Fill in: ${toFillIn(kind).join('; ')}.`,
+    // No notes: they are the user's, and they go into the record (what is to be filled in is marked at each field).
     displayUnits: 'si',
     ...gearSet,
     loadCases: [newCase(1)],

@@ -1,5 +1,6 @@
 import { drawStatusIcon, STATUS_COLOURS } from '../icons';
 import type { RecordContext } from '../context';
+import type { Review } from '../../review/schema';
 import { decisionLine } from '../../review/decisionSubject';
 import { DEFER_TEXT, GREY, INK, STATUS_LABELS } from '../words';
 import { ROLE_WORDS } from '../../review/vocabulary';
@@ -61,13 +62,14 @@ function drawJob(ctx: RecordContext): void {
       (review.oils.length ? `, for ${review.oils.length} candidate oil${review.oils.length === 1 ? '' : 's'}: ${oils}. ` : ', with no oil in scope. ') +
       'Along the line of action from A to E it computes the geometry (ISO 21771), the load sharing and Hertz contact stress (ISO 6336-2, ISO/TS 6336-20), ' +
       'the elastohydrodynamic film and the specific film thickness λ, the flash and contact temperatures and the scuffing safety by the flash temperature ' +
-      'and integral temperature methods (ISO/TS 6336-20 and -21), and from them whether anti-wear chemistry suffices, EP chemistry is warranted, or the duty is beyond oil chemistry.',
+      'and integral temperature methods (ISO/TS 6336-20 and -21), the local film λGF and, for an oil whose FVA 54 micropitting failure stage is given, the micropitting safety Sλ (ISO/TS 6336-22), ' +
+      'and from them whether anti-wear chemistry suffices, EP chemistry is warranted, or the duty is beyond oil chemistry.',
     { size: 9 },
   );
   const notAssessed = [
     'tooth-root bending strength (ISO 6336-3)',
     'pitting and wear life (ISO 6336-2 life factors)',
-    'micropitting load capacity (only a λGF screen is given, ISO/TS 6336-22)',
+    ...micropittingNotAssessed(review),
     'the thermal rating of the housing and the sump temperature it reaches (the oil temperature is an input)',
     'the dynamic and load-distribution factors Kv, KHβ and KHα (inputs, see the assumptions)',
   ];
@@ -110,4 +112,12 @@ export function cautionBox(ctx: RecordContext, text: string): void {
   doc.restore();
   L.font(false, 8.5).text(text, L.left + 28, top + 7, { width: L.width - 36, lineGap: 1.5 });
   L.y = top + h + 6;
+}
+
+/** Micropitting is assessed for each oil whose FVA 54 failure stage is given; for the others only the λGF screen is. */
+function micropittingNotAssessed(review: Review): string[] {
+  const without = review.oils.filter((o) => o.micropittingFailureStage === undefined);
+  if (without.length === 0) return [];
+  if (without.length === review.oils.length) return ['the micropitting safety Sλ (no oil gives its FVA 54 micropitting failure stage, so only the λGF screen is given; ISO/TS 6336-22)'];
+  return [`the micropitting safety Sλ of ${without.map((o) => `“${o.name}”`).join(', ')} (no FVA 54 micropitting failure stage given, so only the λGF screen)`];
 }

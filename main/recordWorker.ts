@@ -67,7 +67,11 @@ export function warmUpReview(): Review {
 
 async function warm(id: number, fontsDir: string | undefined): Promise<RecordWorkerMessage> {
   // A failed warm-up costs only time: the next job compiles what the warm-up did not.
-  await work(id, { review: warmUpReview(), paper: 'a4', ...(fontsDir ? { fontsDir } : {}) });
+  try {
+    await work(id, { review: warmUpReview(), paper: 'a4', ...(fontsDir ? { fontsDir } : {}) });
+  } catch {
+    // nothing to report: the warm-up's record is thrown away either way
+  }
   return { type: 'warmed', id };
 }
 

@@ -222,7 +222,7 @@ export function App({ bridge }: { readonly bridge: Bridge }) {
             <div className="sheet__inputs" aria-label="Inputs" role="group">
               {doc.draft && isDemoReview(doc.draft) ? (
                 <p className="demo-banner" role="note" data-testid="demo-banner">
-                  <strong>Invented demo.</strong> The Harrow Creek aggregate plant is made up; every number in this review (gear pair, duty, oils) is invented. Start your own with New review….
+                  <strong>Invented demo.</strong> The Harrow Creek aggregate plant is made up; every number in this review (gear pair, duty, oils) is invented. Start your own with “New review…” in the toolbar.
                 </p>
               ) : null}
               <ProblemList issues={issues} engineError={review ? computed.error : null} stale={stale} draft={doc.draft} units={units} />

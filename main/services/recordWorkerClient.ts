@@ -36,6 +36,8 @@ export class RecordWorkerClient {
   started = 0;
   private nextId = 1;
   private readonly pending = new Map<number, Pending>();
+  /** The warm-up, once asked (a worker started after a cancel or a crash is not warmed again: its first record is a cold one). */
+  private warming: Promise<void> | null = null;
 
   constructor(
     private readonly spec: WorkerSpec,
@@ -49,8 +51,6 @@ export class RecordWorkerClient {
       this.send({ type: 'warm', id, ...(this.fontsDir ? { fontsDir: this.fontsDir } : {}) }, (m) => m.type !== 'progress' && this.settle(id, resolve), () => this.settle(id, resolve));
     }));
   }
-
-  private warming: Promise<void> | null = null;
 
   /** One record; rejects with ExportCanceled when `signal` aborts, with UserError for a review it cannot draw or compute. */
   render(job: RecordJob, onProgress?: (p: RecordProgress) => void, signal?: AbortSignal): Promise<Uint8Array> {

@@ -1,4 +1,4 @@
-import type { GearPairInput } from '../engine/geometry/types';
+import { DEFAULT_PAIR_NAMES, type GearPairInput, type PairNames } from '../engine/geometry/types';
 import { MATERIALS, type Material } from '../engine/materials';
 import { degreesToRadians, millimetres, rpmToRadiansPerSecond, type NewtonMetres, type Watts } from '../engine/units';
 import type { GearPair } from './schema';
@@ -20,6 +20,8 @@ export function materialOf(m: MaterialEntry): Material {
 }
 
 /** The review's gear pair (mm, degrees) as the engine's SI input. */
+const INTERNAL_PAIR_NAMES: PairNames = { ...DEFAULT_PAIR_NAMES, wheel: { field: 'gearPair.wheel', word: 'ring' } };
+
 export function gearPairInput(gp: GearPair): GearPairInput {
   const gear = (x: GearPair['pinion']) => ({
     teeth: x.teeth,
@@ -28,6 +30,8 @@ export function gearPairInput(gp: GearPair): GearPairInput {
   });
   return {
     kind: gp.kind ?? 'external',
+    // The wheel of an internal pair is a ring, and the sheet calls it so: the checks' messages do too.
+    ...(gp.kind === 'internal' ? { names: INTERNAL_PAIR_NAMES } : {}),
     normalModule: millimetres(gp.normalModule_mm),
     normalPressureAngle: degreesToRadians(gp.normalPressureAngle_deg),
     helixAngle: degreesToRadians(gp.helixAngle_deg),

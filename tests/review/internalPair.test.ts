@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { readFileSync } from 'node:fs';
 import { parseReviewValue } from '../../app/review/parse';
 import { run } from '../../app/review/run';
+import { EngineInputError } from '../../app/engine/diagnostics';
 import { findNonFinite } from '../fuzz/fuzzer';
 
 /**
@@ -10,11 +11,11 @@ import { findNonFinite } from '../fuzz/fuzzer';
  * (Hertz, Johnson §4.2): lower Hertz stress, a thicker film (h ∝ R^0.43 by Dowson–Higginson at equal
  * U and W per unit R) and less sliding, so a lower flash temperature.
  */
-function reviewOf(kind: 'external' | 'internal') {
+function reviewOf(kind: 'external' | 'internal', teeth: readonly [number, number] = [25, 77]) {
   const raw = JSON.parse(readFileSync('assets/demo/harrow-creek-conveyor-spur-pair.flankfilm.json', 'utf8'));
   raw.gearPair.kind = kind;
-  raw.gearPair.pinion = { ...raw.gearPair.pinion, teeth: 25, profileShift: 0 };
-  raw.gearPair.wheel = { ...raw.gearPair.wheel, teeth: 77, profileShift: 0 };
+  raw.gearPair.pinion = { ...raw.gearPair.pinion, teeth: teeth[0], profileShift: 0 };
+  raw.gearPair.wheel = { ...raw.gearPair.wheel, teeth: teeth[1], profileShift: 0 };
   const p = parseReviewValue(raw);
   if (!p.ok) throw new Error(JSON.stringify(p.issues));
   return p.review;
@@ -40,5 +41,17 @@ describe('internal pair through run()', () => {
       expect(n.pitch.filmThicknessMin_um as number).toBeGreaterThan(e.pitch.filmThicknessMin_um as number);
       expect(n.maxFlashTemperature_K as number).toBeLessThan(e.maxFlashTemperature_K as number);
     }
+  });
+  it('a check on the ring names it a ring, as the sheet does (its field stays the wheel\'s)', () => {
+    // z1 = 20 in a z2 = 62 ring, 8 mm module, no shifts: the ring's tip circle reaches past T1 (tip interference).
+    let error: unknown = null;
+    try {
+      run(reviewOf('internal', [20, 62]));
+    } catch (e) {
+      error = e;
+    }
+    expect(error).toBeInstanceOf(EngineInputError);
+    expect((error as EngineInputError).field).toBe('gearPair.wheel.tipDiameter_mm');
+    expect((error as EngineInputError).message).toMatch(/^The ring tip reaches past T1 .* Enlarge the ring's inner \(tip\) diameter or add pinion profile shift\.$/);
   });
 });

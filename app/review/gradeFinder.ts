@@ -70,8 +70,9 @@ export function gradeFinder(review: PairReview, geometry: GearPairGeometry, pini
 function gradeTable(review: PairReview, cases: readonly SweepCase[], oil: ReviewOil, tHigh: number): GradeFinderRow[] {
   const vi = oil.model.viscosityIndex.value;
   const table: GradeFinderRow[] = [];
+  const byGrade = gradeModelsOf(vi, oil);
   for (const vg of CANDIDATE_GRADES) {
-    const model = gradeModel(vg, vi, oil);
+    const model = gradeModel(byGrade, vg, vi, oil);
     if (model === null) continue; // this VI is not reachable at this grade within D2270's range
     let lambdaMin = Infinity;
     cases.forEach((sc, li) => {
@@ -85,14 +86,19 @@ function gradeTable(review: PairReview, cases: readonly SweepCase[], oil: Review
   return table;
 }
 
-/** The model of grade `vg` with the oil's VI, base oil and density (α the base oil's default), null when the VI is unreachable at that grade. */
-function gradeModel(vg: number, vi: number, oil: ReviewOil): OilModel | null {
+/** The grade models kept for the oil's field, base oil, density and VI. */
+function gradeModelsOf(vi: number, oil: ReviewOil): Map<number, OilModel | null> {
   const key = `${oil.field}|${oil.baseOil}|${oil.source.density15_kgm3}|${vi}`;
   let byGrade = gradeModels.get(key);
   if (!byGrade) {
     if (gradeModels.size >= 256) gradeModels.clear();
     gradeModels.set(key, (byGrade = new Map()));
   }
+  return byGrade;
+}
+
+/** The model of grade `vg` with the oil's VI, base oil and density (α the base oil's default), null when the VI is unreachable at that grade. */
+function gradeModel(byGrade: Map<number, OilModel | null>, vg: number, vi: number, oil: ReviewOil): OilModel | null {
   let model = byGrade.get(vg);
   if (model === undefined) {
     let kv100: SquareMetresPerSecond | null;

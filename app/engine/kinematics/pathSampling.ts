@@ -4,17 +4,24 @@ import type { PathPoints } from '../geometry/types';
 export const MIN_PATH_POINTS = 11;
 export const MAX_PATH_POINTS = 5001;
 
-/**
- * Positions along the path of contact A…E, `n` of them, evenly spaced, with the grid
- * points nearest to B, C and D moved onto them exactly, so every characteristic point is
- * sampled and the count stays n. Returned in ascending order (from T1).
- */
-export function samplePath(points: PathPoints, n: number): Float64Array {
+/** The number of path points, checked: a whole number from MIN_PATH_POINTS to MAX_PATH_POINTS. */
+export function requirePathPoints(n: number): number {
   if (!Number.isInteger(n) || n < MIN_PATH_POINTS || n > MAX_PATH_POINTS) {
     throw new EngineInputError('path.points-out-of-range', 'policy.pathPoints', `${MIN_PATH_POINTS}…${MAX_PATH_POINTS}`, `policy.pathPoints = ${n} must be a whole number from ${MIN_PATH_POINTS} to ${MAX_PATH_POINTS}.`);
   }
+  return n;
+}
+
+/**
+ * Positions along the path of contact A…E, `n` of them, evenly spaced, with the grid
+ * points nearest to B, C and D moved onto them exactly, so every characteristic point is
+ * sampled and the count stays n. Returned in ascending order (from T1), in `out` when given.
+ */
+export function samplePath(points: PathPoints, n: number, out?: Float64Array): Float64Array {
+  requirePathPoints(n);
+  if (out !== undefined && out.length !== n) throw new RangeError(`samplePath: room for ${out.length} positions, ${n} asked`);
   const { A, E } = points;
-  const s = new Float64Array(n);
+  const s = out ?? new Float64Array(n);
   const step = (E - A) / (n - 1);
   for (let i = 0; i < n; i++) s[i] = A + i * step;
   s[n - 1] = E;

@@ -1,6 +1,6 @@
 import { ColumnBlock } from '../columnBlock';
 import type { GearPairGeometry } from '../geometry/types';
-import { samplePath } from '../kinematics/pathSampling';
+import { requirePathPoints, samplePath } from '../kinematics/pathSampling';
 import { emptyFlankVelocities, flankVelocities } from '../kinematics/flankVelocities';
 import { loadShare } from '../load/loadSharing';
 import { toothForces, type ToothForces } from '../load/toothForces';
@@ -65,8 +65,9 @@ export function normalReducedRadius(g: GearPairGeometry, s: number, cosBb: numbe
  * external or an internal pair.
  */
 export function meshMechanics(g: GearPairGeometry, pinion: Material, wheel: Material, duty: MeshDuty, n: number): MeshMechanics {
-  const position = samplePath(g.points, n);
-  const block = new ColumnBlock(position.length, 12);
+  // The positions and the twelve columns that follow from them, from one buffer.
+  const block = new ColumnBlock(requirePathPoints(n), 13);
+  const position = samplePath(g.points, n, block.float64());
   const arrays = () => block.float64();
   const xg = arrays(), w = arrays(), rr = arrays(), pH = arrays(), bH = arrays();
   const v1 = arrays(), v2 = arrays(), vs = arrays(), vg = arrays(), srr = arrays(), z1 = arrays(), z2 = arrays();
